@@ -1,0 +1,13 @@
+using System.Collections.Immutable;
+
+namespace Foldwise.Core.Data;
+
+/// <summary>One feature column holding only its non-zero cells, by ascending row index.</summary>
+public sealed record SparseColumn(ImmutableArray<int> Rows, ImmutableArray<float> Values)
+{
+    /// <summary>A column of zeros.</summary>
+    public static SparseColumn Empty { get; } = new([], []);
+
+    /// <summary>How many cells are not zero.</summary>
+    public int NonZeroCount => Rows.Length;
+}

@@ -1,0 +1,31 @@
+using System.Collections.Immutable;
+using Foldwise.Core.Metrics;
+using Foldwise.Core.Screening;
+
+namespace Foldwise.Core.Definition;
+
+/// <summary>One tuning job, as read from a definition file or from command-line flags, and as stored with the search.</summary>
+public sealed record SearchDefinition
+{
+    public required string Name { get; init; }
+
+    public required DataSource Data { get; init; }
+
+    public MetricKind Metric { get; init; } = MetricKind.Rmsle;
+
+    /// <summary>K of the K-fold plan. The default is <c>5</c>.</summary>
+    public int Folds { get; init; } = 5;
+
+    /// <summary>Seeds the fold plan, the proposers and every learner. The default is <c>1</c>.</summary>
+    public int Seed { get; init; } = 1;
+
+    public ScreeningOptions Screening { get; init; } = new();
+
+    public required ImmutableArray<FamilySearch> Families { get; init; }
+
+    public ScheduleOptions Schedule { get; init; } = new();
+
+    public required SearchBudget Budget { get; init; }
+
+    public BlendOptions Blend { get; init; } = new();
+}

@@ -1,0 +1,12 @@
+using Foldwise.Core.Spaces;
+
+namespace Foldwise.Core.Search;
+
+/// <summary>
+/// What a schedule asks the coordinator to run next: a candidate of a family at a budget.
+/// A promotion names the trial it continues (<see cref="ParentId"/>) and carries its parameters.
+/// </summary>
+/// <param name="Rung">0 for a new candidate; k for the k-th promotion.</param>
+/// <param name="Bracket">The Hyperband bracket, or 0 outside Hyperband.</param>
+/// <param name="Proposer">Who chose the parameters: e.g. <c>random</c>, <c>tpe</c>, <c>promotion</c>.</param>
+public sealed record TrialPlan(string Family, ParameterSet Parameters, int Budget, int Rung, int? ParentId, string Proposer, int Bracket = 0);

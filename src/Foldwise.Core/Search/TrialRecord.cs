@@ -1,0 +1,57 @@
+using System.Collections.Immutable;
+using Foldwise.Core.Spaces;
+
+namespace Foldwise.Core.Search;
+
+/// <summary>
+/// Everything the store keeps about one trial (its prediction vectors are kept beside it).
+/// Ids count up from 1 within a search and are never reused.
+/// </summary>
+public sealed record TrialRecord
+{
+    public required int Id { get; init; }
+
+    public required string Family { get; init; }
+
+    public required ParameterSet Parameters { get; init; }
+
+    /// <summary>Boosting rounds (or trees) this trial trains.</summary>
+    public required int Budget { get; init; }
+
+    public int Rung { get; init; }
+
+    public int? ParentId { get; init; }
+
+    public required string Proposer { get; init; }
+
+    public int Bracket { get; init; }
+
+    public TrialState State { get; init; } = TrialState.Queued;
+
+    /// <summary>How many leases this trial has been given; a late report from an older attempt is ignored.</summary>
+    public int Attempt { get; init; }
+
+    public string? Worker { get; init; }
+
+    public string? Slot { get; init; }
+
+    public DateTimeOffset? LeaseExpires { get; init; }
+
+    public required DateTimeOffset Created { get; init; }
+
+    public DateTimeOffset? Started { get; init; }
+
+    public DateTimeOffset? Finished { get; init; }
+
+    /// <summary>Score of the pooled out-of-fold predictions on the fitting scale; set when done.</summary>
+    public double? Score { get; init; }
+
+    public ImmutableArray<double> FoldScores { get; init; } = [];
+
+    public string? FailureReason { get; init; }
+
+    /// <summary>Attempts that ended without a result (lease lost, worker error), oldest first, e.g. "1: lease expired on w2/0".</summary>
+    public ImmutableArray<string> LostAttempts { get; init; } = [];
+
+    public TimeSpan? Duration => Started is { } s && Finished is { } f ? f - s : null;
+}
