@@ -50,6 +50,9 @@ public sealed record TrialRecord
 
     public string? FailureReason { get; init; }
 
+    /// <summary>Attempts lost to an expired lease or a worker error; at the coordinator's limit the trial fails. Interruptions (a stop, a restart) do not count.</summary>
+    public int Failures { get; init; }
+
     /// <summary>Attempts that ended without a result (lease lost, worker error), oldest first, e.g. "1: lease expired on w2/0".</summary>
     public ImmutableArray<string> LostAttempts { get; init; } = [];
 

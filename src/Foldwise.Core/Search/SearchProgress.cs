@@ -1,0 +1,20 @@
+using System.Collections.Immutable;
+
+namespace Foldwise.Core.Search;
+
+/// <summary>A snapshot for progress bars and <c>status</c>: counts by state, the best score so far per family, budgets spent.</summary>
+public sealed record SearchProgress(
+    int Created,
+    int Queued,
+    int Running,
+    int Done,
+    int Failed,
+    int? TrialBudget,
+    double SpentSeconds,
+    double? HoursBudget,
+    ImmutableSortedDictionary<string, double> BestByFamily,
+    StopReason? Stopping,
+    bool Finished)
+{
+    public double? Best => BestByFamily.Count == 0 ? null : BestByFamily.Values.Min();
+}
