@@ -139,6 +139,15 @@ public sealed class SearchCoordinator
         }
     }
 
+    /// <summary>Whether this attempt still holds its trial's lease (checked before a report's vectors are stored).</summary>
+    public bool Holds(int trialId, int attempt)
+    {
+        lock (gate)
+        {
+            return IsCurrentLocked(trialId, attempt);
+        }
+    }
+
     /// <summary>Returns trials whose lease ran out to the queue (or fails them at the attempt limit).</summary>
     public void ExpireLeases()
     {
@@ -180,6 +189,14 @@ public sealed class SearchCoordinator
                 best,
                 stopping,
                 IsFinishedLocked());
+        }
+    }
+
+    public TrialRecord? Trial(int id)
+    {
+        lock (gate)
+        {
+            return trials.GetValueOrDefault(id);
         }
     }
 

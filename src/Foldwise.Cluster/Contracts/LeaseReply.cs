@@ -1,0 +1,18 @@
+namespace Foldwise.Cluster.Contracts;
+
+/// <summary>A leased trial as a slot needs it: a family name and parameter values (never code), a budget, a seed, and how often to renew.</summary>
+[GenerateSerializer, Immutable, Alias("Foldwise.LeaseReply")]
+public sealed record LeaseReply(
+    [property: Id(0)] LeaseStatus Status,
+    [property: Id(1)] int TrialId,
+    [property: Id(2)] int Attempt,
+    [property: Id(3)] string Family,
+    [property: Id(4)] Dictionary<string, double> Parameters,
+    [property: Id(5)] int Budget,
+    [property: Id(6)] int Seed,
+    [property: Id(7)] TimeSpan LeaseDuration)
+{
+    public static LeaseReply Waiting { get; } = new(LeaseStatus.Wait, 0, 0, "", [], 0, 0, TimeSpan.Zero);
+
+    public static LeaseReply Done { get; } = new(LeaseStatus.Finished, 0, 0, "", [], 0, 0, TimeSpan.Zero);
+}

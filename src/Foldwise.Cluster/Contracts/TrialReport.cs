@@ -1,0 +1,14 @@
+namespace Foldwise.Cluster.Contracts;
+
+/// <summary>A slot's result for one attempt of a trial: scores and prediction vectors on the fitting scale.</summary>
+[GenerateSerializer, Immutable, Alias("Foldwise.TrialReport")]
+public sealed record TrialReport(
+    [property: Id(0)] int TrialId,
+    [property: Id(1)] int Attempt,
+    [property: Id(2)] string Worker,
+    [property: Id(3)] string Slot,
+    [property: Id(4)] double Score,
+    [property: Id(5)] double[] FoldScores,
+    [property: Id(6)] double[] OutOfFold,
+    [property: Id(7)] double[] Test,
+    [property: Id(8)] double Seconds);

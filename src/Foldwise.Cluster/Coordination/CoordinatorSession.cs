@@ -1,0 +1,114 @@
+using Foldwise.Cluster.Contracts;
+using Foldwise.Core.Search;
+
+namespace Foldwise.Cluster.Coordination;
+
+/// <summary>
+/// One running search on the coordinator: Core's <see cref="SearchCoordinator"/> plus the store it records into.
+/// It lives outside any grain, so a grain that is deactivated and activated again loses nothing.
+/// </summary>
+public sealed class CoordinatorSession
+{
+    private readonly ISearchRecorder recorder;
+    private readonly TaskCompletionSource finished = new(TaskCreationOptions.RunContinuationsAsynchronously);
+    private readonly object gate = new();
+
+    public CoordinatorSession(SearchManifest manifest, SearchCoordinator coordinator, ISearchRecorder recorder)
+    {
+        Manifest = manifest;
+        Coordinator = coordinator;
+        this.recorder = recorder;
+    }
+
+    public string SearchId => Manifest.SearchId;
+
+    public SearchManifest Manifest { get; }
+
+    public SearchCoordinator Coordinator { get; }
+
+    /// <summary>Completes once the search has stopped creating trials and none is running.</summary>
+    public Task Finished => finished.Task;
+
+    /// <summary>Raised after a trial's result is committed (for progress lines).</summary>
+    public event Action<TrialRecord>? TrialFinished;
+
+    public LeaseReply Lease(string worker, string slot)
+    {
+        var grant = Coordinator.Lease(worker, slot);
+        CheckFinished();
+        return grant.Kind switch
+        {
+            LeaseKind.Granted => new LeaseReply(
+                LeaseStatus.Granted,
+                grant.Trial!.Id,
+                grant.Trial.Attempt,
+                grant.Trial.Family,
+                grant.Trial.Parameters.Values.ToDictionary(),
+                grant.Trial.Budget,
+                grant.Seed,
+                grant.Trial.LeaseExpires!.Value - grant.Trial.Started!.Value),
+            LeaseKind.Wait => LeaseReply.Waiting,
+            _ => LeaseReply.Done,
+        };
+    }
+
+    public bool Renew(int trialId, int attempt) => Coordinator.Renew(trialId, attempt);
+
+    /// <summary>Vectors first, then the record: a trial marked done always has its predictions in the store.</summary>
+    public bool Report(TrialReport report)
+    {
+        lock (gate)
+        {
+            if (!Coordinator.Holds(report.TrialId, report.Attempt))
+            {
+                return false;
+            }
+
+            recorder.SaveVectors(report.TrialId, report.OutOfFold, report.Test);
+            bool accepted = Coordinator.Complete(report.TrialId, report.Attempt, report.Score, [.. report.FoldScores]);
+            if (accepted)
+            {
+                TrialFinished?.Invoke(Coordinator.Trial(report.TrialId)!);
+            }
+
+            CheckFinished();
+            return accepted;
+        }
+    }
+
+    public bool Release(int trialId, int attempt, string reason, bool interrupted)
+    {
+        bool released = Coordinator.Release(trialId, attempt, reason, interrupted);
+        CheckFinished();
+        return released;
+    }
+
+    public ProgressReply Progress()
+    {
+        var p = Coordinator.Progress();
+        var runningOn = Coordinator.Trials()
+            .Where(t => t.State == TrialState.Running)
+            .Select(t => $"{t.Worker}/{t.Slot}")
+            .ToArray();
+        return new ProgressReply(
+            p.Created, p.Queued, p.Running, p.Done, p.Failed, p.TrialBudget, p.SpentSeconds, p.HoursBudget,
+            p.BestByFamily.ToDictionary(), p.Stopping?.ToString(), p.Finished, runningOn);
+    }
+
+    /// <summary>Called about once a second: expires lost leases and records the time spent.</summary>
+    public void Tick()
+    {
+        Coordinator.ExpireLeases();
+        var progress = Coordinator.Progress();
+        recorder.UpdateSpent(progress.SpentSeconds, finished: false);
+        CheckFinished();
+    }
+
+    private void CheckFinished()
+    {
+        if (Coordinator.Progress().Finished)
+        {
+            finished.TrySetResult();
+        }
+    }
+}

@@ -1,0 +1,44 @@
+namespace Foldwise.Cluster.Workers;
+
+/// <summary>
+/// A worker's slots. Defaults: <c>1</c> slot training with all of the machine's cores — ML.NET trains one
+/// LightGBM model at a time per process, so two slots in one process would queue behind each other.
+/// </summary>
+public sealed class WorkerOptions
+{
+    public const string SectionName = "Foldwise:Worker";
+
+    /// <summary>The name trials record as their machine. The default is the host name.</summary>
+    public string Name { get; set; } = Environment.MachineName;
+
+    /// <summary>Slots asking for trials. The default is <c>1</c>; <c>0</c> makes a coordinator that trains nothing.</summary>
+    public int Slots { get; set; } = 1;
+
+    /// <summary>Threads each slot's learner may use. The default is the cores divided among the slots.</summary>
+    public int? ThreadsPerSlot { get; set; }
+
+    /// <summary>Where fetched tables are kept between searches. The default is <c>~/.cache/foldwise/tables</c>.</summary>
+    public string CacheDirectory { get; set; } = Path.Combine(
+        Environment.GetFolderPath(Environment.SpecialFolder.UserProfile), ".cache", "foldwise", "tables");
+
+    /// <summary>How long a slot waits before asking again when there is nothing to start. The default is <c>250 ms</c>.</summary>
+    public TimeSpan PollInterval { get; set; } = TimeSpan.FromMilliseconds(250);
+
+    /// <summary>Only work on this search; null asks the coordinator's board.</summary>
+    public string? SearchId { get; set; }
+
+    public int Threads => ThreadsPerSlot ?? Math.Max(1, Environment.ProcessorCount / Math.Max(1, Slots));
+
+    public void Validate()
+    {
+        if (Slots < 0)
+        {
+            throw new ArgumentOutOfRangeException(nameof(Slots), Slots, "slots cannot be negative");
+        }
+
+        if (ThreadsPerSlot is < 1)
+        {
+            throw new ArgumentOutOfRangeException(nameof(ThreadsPerSlot), ThreadsPerSlot, "a slot needs at least one thread");
+        }
+    }
+}

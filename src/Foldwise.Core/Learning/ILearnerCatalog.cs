@@ -1,0 +1,7 @@
+namespace Foldwise.Core.Learning;
+
+/// <summary>The families a worker can train, by name: the built-in ones in production, fakes in tests.</summary>
+public interface ILearnerCatalog
+{
+    IFoldLearner Get(string family);
+}
