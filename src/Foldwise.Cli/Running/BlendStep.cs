@@ -1,0 +1,49 @@
+using Foldwise.Core.Blending;
+using Foldwise.Core.Definition;
+using Foldwise.Core.Metrics;
+using Foldwise.Core.Search;
+using Foldwise.Storage;
+using Spectre.Console;
+
+namespace Foldwise.Cli.Running;
+
+/// <summary>
+/// The final stage: pools the best full-budget trials of each family, solves the weights on their out-of-fold
+/// predictions, stores the blend, and writes the blended test predictions on the original scale.
+/// </summary>
+public static class BlendStep
+{
+    public const string PredictionFileName = "predictions.csv";
+
+    public static BlendSummary Run(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, IAnsiConsole console, BlendOptions? options = null)
+    {
+        options ??= definition.Blend;
+        var metric = Metric.For(definition.Metric);
+        var trials = store.LoadTrials();
+        var pool = BlendPool.Select(trials, options.Pool, definition.Schedule.MaxBudget);
+        if (pool.Count == 0)
+        {
+            // No candidate reached the full budget (a very small trial budget): blend what went furthest.
+            int furthest = trials.Where(t => t.State == TrialState.Done).Max(t => t.Budget);
+            pool = BlendPool.Select(trials, options.Pool, furthest);
+            console.MarkupLine($"[yellow]No trial reached the full {definition.Schedule.MaxBudget} rounds; blending trials at {furthest} rounds.[/]");
+        }
+
+        var vectors = pool.Select(t => store.LoadVectors(t.Id) ?? throw new InvalidOperationException($"trial {t.Id} is done but its predictions are missing from the store")).ToList();
+        var target = header.TrainTarget.Select(metric.Forward).ToArray();
+        var result = BlendStage.Run(new BlendInput(
+            options,
+            [.. pool.Select((t, i) => new BlendCandidate(t.Id, t.Family, vectors[i].OutOfFold))],
+            target,
+            header.Folds,
+            metric));
+        var weights = pool.Select(t => result.Summary.Members.Single(m => m.TrialId == t.Id).Weight).ToList();
+        var blended = BlendStage.Combine(weights, [.. vectors.Select(v => v.Test)]);
+        string path = Path.Combine(outDir, PredictionFileName);
+        PredictionFile.Write(path, definition.Data.IdColumn, definition.Data.TargetColumn, header.TestIds, [.. blended.Select(metric.Inverse)]);
+        store.SaveBlend(result.Summary);
+        Output.BlendView.Render(console, result.Summary, metric, trials);
+        console.MarkupLine($"Wrote [bold]{Markup.Escape(path)}[/]: {header.TestIds.Length:N0} predictions.");
+        return result.Summary;
+    }
+}

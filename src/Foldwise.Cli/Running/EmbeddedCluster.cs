@@ -1,0 +1,63 @@
+using Foldwise.Cluster.Coordination;
+using Foldwise.Cluster.Hosting;
+using Foldwise.Cluster.Workers;
+using Foldwise.Learners;
+using Microsoft.Extensions.DependencyInjection;
+using Microsoft.Extensions.Hosting;
+using Microsoft.Extensions.Logging;
+
+namespace Foldwise.Cli.Running;
+
+/// <summary>
+/// The coordinator's silo with its local slots: a cluster of one unless workers join. Trials run through the
+/// same grains here as across machines.
+/// </summary>
+public sealed class EmbeddedCluster : IAsyncDisposable
+{
+    private readonly IHost host;
+
+    private EmbeddedCluster(IHost host) => this.host = host;
+
+    public SessionRegistry Sessions => host.Services.GetRequiredService<SessionRegistry>();
+
+    public DatasetShelf Shelf => host.Services.GetRequiredService<DatasetShelf>();
+
+    public TableCache? LocalTables => host.Services.GetService<TableCache>();
+
+    public static async Task<EmbeddedCluster> StartAsync(ClusterRole role, int slots, int? threads, CancellationToken cancellation)
+    {
+        var builder = Host.CreateApplicationBuilder([]);
+        builder.Logging.ClearProviders();
+        if (Environment.GetEnvironmentVariable("FOLDWISE_LOG") is { Length: > 0 } level && Enum.TryParse<LogLevel>(level, true, out var min))
+        {
+            builder.Logging.AddSimpleConsole(o => o.SingleLine = true).SetMinimumLevel(min);
+        }
+
+        builder.Services.Configure<HostOptions>(o => o.ShutdownTimeout = TimeSpan.FromSeconds(15));
+        builder.UseOrleans(silo => silo.UseFoldwiseClustering(role));
+        builder.Services.AddFoldwiseCoordinator();
+        if (slots > 0)
+        {
+            builder.Services.AddFoldwiseWorker(
+                new WorkerOptions { Name = Environment.MachineName + "-coordinator", Slots = slots, ThreadsPerSlot = threads },
+                LearnerCatalog.BuiltIn);
+        }
+
+        var host = builder.Build();
+        await host.StartAsync(cancellation);
+        return new EmbeddedCluster(host);
+    }
+
+    public async ValueTask DisposeAsync()
+    {
+        using var timeout = new CancellationTokenSource(TimeSpan.FromSeconds(20));
+        try
+        {
+            await host.StopAsync(timeout.Token);
+        }
+        finally
+        {
+            host.Dispose();
+        }
+    }
+}

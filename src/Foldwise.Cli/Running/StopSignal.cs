@@ -1,0 +1,52 @@
+using System.Runtime.InteropServices;
+using Spectre.Console;
+
+namespace Foldwise.Cli.Running;
+
+/// <summary>
+/// Ctrl-C once: stop creating trials, let running ones finish, then blend. Ctrl-C again (or SIGTERM):
+/// abandon running trials; everything done is already in the store.
+/// </summary>
+public sealed class StopSignal : IDisposable
+{
+    private readonly IAnsiConsole console;
+    private readonly CancellationTokenSource abandon = new();
+    private readonly PosixSignalRegistration? terminate;
+    private int presses;
+
+    public StopSignal(IAnsiConsole console)
+    {
+        this.console = console;
+        Console.CancelKeyPress += OnCancel;
+        terminate = PosixSignalRegistration.Create(PosixSignal.SIGTERM, context =>
+        {
+            context.Cancel = true;
+            abandon.Cancel();
+        });
+    }
+
+    public event Action? StopRequested;
+
+    public CancellationToken Abandon => abandon.Token;
+
+    public void Dispose()
+    {
+        Console.CancelKeyPress -= OnCancel;
+        terminate?.Dispose();
+        abandon.Dispose();
+    }
+
+    private void OnCancel(object? sender, ConsoleCancelEventArgs e)
+    {
+        e.Cancel = true;
+        if (Interlocked.Increment(ref presses) == 1)
+        {
+            console.MarkupLine("[yellow]Stopping: no new trials; running ones finish, then the blend runs. Ctrl-C again to abandon them.[/]");
+            StopRequested?.Invoke();
+        }
+        else
+        {
+            abandon.Cancel();
+        }
+    }
+}

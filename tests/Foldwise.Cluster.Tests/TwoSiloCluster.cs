@@ -1,0 +1,69 @@
+using Foldwise.Cluster.Hosting;
+using Foldwise.Cluster.Workers;
+using Foldwise.Core.Spaces;
+using Foldwise.Testing.Fakes;
+using Microsoft.Extensions.DependencyInjection;
+using Orleans.TestingHost;
+
+namespace Foldwise.Cluster.Tests;
+
+/// <summary>
+/// A coordinator silo with one slot and a worker silo with one slot (coordinator grains excluded there),
+/// started once for the test collection.
+/// </summary>
+public sealed class TwoSiloCluster : IAsyncLifetime
+{
+    public MeanLearner Learner { get; } = new(FamilyNames.LightGbm);
+
+    public InProcessTestCluster Cluster { get; private set; } = null!;
+
+    public string CacheDirectory { get; } = Path.Combine(Path.GetTempPath(), "foldwise-cluster-tests", Guid.NewGuid().ToString("N"));
+
+    public IServiceProvider Coordinator => Cluster.Silos[0].ServiceProvider;
+
+    public IServiceProvider Worker => Cluster.Silos[1].ServiceProvider;
+
+    public async Task InitializeAsync()
+    {
+        var builder = new InProcessTestClusterBuilder(2);
+        builder.ConfigureSiloHost((options, host) =>
+        {
+            bool primary = options.SiloName == "Primary";
+            var worker = new WorkerOptions
+            {
+                Name = primary ? "coordinator" : "worker",
+                Slots = 1,
+                ThreadsPerSlot = 1,
+                PollInterval = TimeSpan.FromMilliseconds(20),
+                CacheDirectory = Path.Combine(CacheDirectory, options.SiloName),
+            };
+            host.Services.AddFoldwiseWorker(worker, Learner);
+            if (primary)
+            {
+                host.Services.AddFoldwiseCoordinator();
+            }
+            else
+            {
+                host.Services.ExcludeCoordinatorGrains();
+            }
+        });
+        Cluster = builder.Build();
+        await Cluster.DeployAsync();
+    }
+
+    public async Task DisposeAsync()
+    {
+        await Cluster.StopAllSilosAsync();
+        await Cluster.DisposeAsync();
+        if (Directory.Exists(CacheDirectory))
+        {
+            Directory.Delete(CacheDirectory, recursive: true);
+        }
+    }
+}
+
+[CollectionDefinition(Name)]
+public sealed class TwoSiloCollection : ICollectionFixture<TwoSiloCluster>
+{
+    public const string Name = "two silos";
+}
