@@ -23,18 +23,20 @@ internal static partial class DefinitionTree
     {
         var map = new LineMap(utf8);
         var reader = new Utf8JsonReader(utf8, Options);
+        bool started = false;
         try
         {
-            if (!reader.Read())
-            {
-                throw new InputException(file, "the file holds no JSON; a definition is one JSON object", 1, 1);
-            }
-
+            // With the final block at hand the reader throws, rather than returns false, on text without a token.
+            started = reader.Read();
             var root = ReadValue(ref reader, map, "");
 
             // Anything after the root value makes the reader throw, which lands below.
             reader.Read();
             return root;
+        }
+        catch (JsonException) when (!started && IsBlank(utf8))
+        {
+            throw new InputException(file, "the file is empty; a definition is one JSON object { ... }", 1, 1);
         }
         catch (JsonException e)
         {
@@ -42,6 +44,8 @@ internal static partial class DefinitionTree
             throw new InputException(file, $"malformed JSON: {Clean(e.Message)}", at.Line, at.Column);
         }
     }
+
+    private static bool IsBlank(ReadOnlySpan<byte> utf8) => utf8.Trim(" \t\r\n"u8).IsEmpty;
 
     private static DefinitionNode ReadValue(ref Utf8JsonReader reader, LineMap map, string path)
     {
