@@ -1,8 +1,6 @@
-using System.Collections.Immutable;
 using System.Text;
 using Foldwise.Core.Data;
 using Foldwise.Core.Screening;
-using Foldwise.Core.Spaces;
 
 namespace Foldwise.Core.Definition;
 
