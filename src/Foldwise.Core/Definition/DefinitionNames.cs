@@ -1,0 +1,23 @@
+using Foldwise.Core.Metrics;
+
+namespace Foldwise.Core.Definition;
+
+/// <summary>Every key and enum word of the definition syntax, shared by the reader and the writer so they cannot drift.</summary>
+internal static class DefinitionNames
+{
+    public static readonly string[] RootKeys = ["name", "data", "metric", "folds", "seed", "screening", "families", "schedule", "budget", "blend"];
+    public static readonly string[] DataKeys = ["train", "test", "id", "target"];
+    public static readonly string[] ScreeningKeys = ["min_nonzero"];
+    public static readonly string[] ScheduleKeys = ["kind", "proposer", "min_rounds", "max_rounds", "eta"];
+    public static readonly string[] BudgetKeys = ["trials", "hours"];
+    public static readonly string[] BlendKeys = ["mode", "pool"];
+    public static readonly string[] RangeKeys = ["int", "float", "log", "choice"];
+
+    public static readonly NameTable<MetricKind> Metrics = new(("rmsle", MetricKind.Rmsle), ("rmse", MetricKind.Rmse), ("mae", MetricKind.Mae));
+
+    public static readonly NameTable<ScheduleKind> Schedules = new(("full", ScheduleKind.Full), ("asha", ScheduleKind.Asha), ("hyperband", ScheduleKind.Hyperband));
+
+    public static readonly NameTable<ProposerKind> Proposers = new(("random", ProposerKind.Random), ("tpe", ProposerKind.Tpe));
+
+    public static readonly NameTable<BlendMode> BlendModes = new(("simplex", BlendMode.Simplex), ("non_negative", BlendMode.NonNegative), ("greedy", BlendMode.Greedy));
+}

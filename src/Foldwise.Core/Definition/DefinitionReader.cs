@@ -1,0 +1,147 @@
+using System.Text;
+using Foldwise.Core.Data;
+using Foldwise.Core.Screening;
+
+namespace Foldwise.Core.Definition;
+
+/// <summary>
+/// Reads a search definition file strictly: an unknown key, a wrong type or a value out of bounds is an
+/// <see cref="InputException"/> naming the key's path with its 1-based line and column. Comments
+/// (<c>//</c>, <c>/* */</c>) and trailing commas are allowed. What a file leaves out takes the records'
+/// defaults; the name defaults to the file's name without extension. See docs/definition.md.
+/// </summary>
+public static class DefinitionReader
+{
+    /// <summary>Reads the file at <paramref name="path"/>; its data paths are taken relative to the file's folder.</summary>
+    public static SearchDefinition Read(string path)
+    {
+        byte[] bytes;
+        try
+        {
+            bytes = File.ReadAllBytes(path);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw new InputException(path, $"cannot read the definition file: {e.Message}");
+        }
+
+        string folder = Path.GetDirectoryName(Path.GetFullPath(path))!;
+        return Parse(bytes, path, folder, DefinitionDefaults.BuiltInFamilies);
+    }
+
+    /// <summary>
+    /// Reads definition text. <paramref name="sourcePath"/> names the text in messages and gives the default
+    /// name; relative data paths are resolved against <paramref name="baseDirectory"/> and become absolute.
+    /// </summary>
+    public static SearchDefinition Parse(string json, string sourcePath, string baseDirectory) =>
+        Parse(Encoding.UTF8.GetBytes(json), sourcePath, baseDirectory, DefinitionDefaults.BuiltInFamilies);
+
+    // Test seam: the families a file may name, with their default spaces.
+    internal static SearchDefinition Parse(ReadOnlySpan<byte> utf8, string sourcePath, string baseDirectory, IReadOnlyList<FamilySearch> builtIn)
+    {
+        ReadOnlySpan<byte> bom = [0xEF, 0xBB, 0xBF];
+        if (utf8.StartsWith(bom))
+        {
+            utf8 = utf8[bom.Length..];
+        }
+
+        var check = new DefinitionCheck(sourcePath);
+        var root = check.Object(DefinitionTree.Parse(utf8, sourcePath), DefinitionNames.RootKeys);
+        var definition = new SearchDefinition
+        {
+            Name = root.Get("name") is { } name ? Name(check, name.Value) : DefaultName(sourcePath),
+            Data = Data(check, check.Require(root, "data").Value, Path.GetFullPath(baseDirectory)),
+            Families = root.Get("families") is { } families
+                ? new FamiliesReader(check, builtIn).Read(families.Value)
+                : [.. builtIn],
+            Budget = root.Get("budget") is { } budget ? Budget(check, budget.Value) : new SearchBudget(DefinitionDefaults.Trials, null),
+        };
+
+        if (root.Get("metric") is { } metric)
+        {
+            definition = definition with { Metric = check.Word(metric.Value, DefinitionNames.Metrics) };
+        }
+
+        if (root.Get("folds") is { } folds)
+        {
+            definition = definition with { Folds = check.Whole(folds.Value, 2, " (K of a K-fold plan)") };
+        }
+
+        if (root.Get("seed") is { } seed)
+        {
+            definition = definition with { Seed = check.Whole(seed.Value) };
+        }
+
+        if (root.Get("screening") is { } screening)
+        {
+            var s = check.Object(screening.Value, DefinitionNames.ScreeningKeys);
+            definition = definition with
+            {
+                Screening = s.Get("min_nonzero") is { } m ? new ScreeningOptions(check.Whole(m.Value, 1)) : new ScreeningOptions(),
+            };
+        }
+
+        if (root.Get("schedule") is { } schedule)
+        {
+            definition = definition with { Schedule = ScheduleReader.Read(check, schedule.Value) };
+        }
+
+        if (root.Get("blend") is { } blend)
+        {
+            definition = definition with { Blend = Blend(check, blend.Value) };
+        }
+
+        return definition;
+    }
+
+    private static string Name(DefinitionCheck check, DefinitionNode node)
+    {
+        string name = check.Text(node);
+
+        // The name may end up in file names beside the search.
+        return name.Any(c => char.IsControl(c) || c is '/' or '\\')
+            ? throw check.Fail(node, $"'name' must not hold '/', '\\' or control characters, got {node.Describe()}")
+            : name;
+    }
+
+    private static string DefaultName(string sourcePath) =>
+        Path.GetFileNameWithoutExtension(sourcePath) is { Length: > 0 } stem ? stem : DefinitionDefaults.Name;
+
+    private static DataSource Data(DefinitionCheck check, DefinitionNode node, string baseDirectory)
+    {
+        var data = check.Object(node, DefinitionNames.DataKeys);
+        string Absolute(string key) => Path.GetFullPath(check.Text(check.Require(data, key).Value), baseDirectory);
+
+        string train = Absolute("train");
+        string test = Absolute("test");
+        string id = check.Text(check.Require(data, "id").Value);
+        var target = check.Require(data, "target").Value;
+        return check.Text(target) == id
+            ? throw check.Fail(target, $"'data.target' must differ from 'data.id', both are \"{id}\"")
+            : new DataSource(train, test, id, target.Text!);
+    }
+
+    private static SearchBudget Budget(DefinitionCheck check, DefinitionNode node)
+    {
+        var budget = check.Object(node, DefinitionNames.BudgetKeys);
+        int? trials = budget.Get("trials") is { } t ? check.Whole(t.Value, 1) : null;
+        double? hours = budget.Get("hours") is { } h ? check.Number(h.Value) : null;
+        if (hours <= 0)
+        {
+            throw check.Fail(budget.Get("hours")!.Value, $"'budget.hours' must be above 0, got {budget.Get("hours")!.Value.Text}");
+        }
+
+        return trials is null && hours is null
+            ? throw check.Fail(node, "'budget' needs 'trials', 'hours' or both")
+            : new SearchBudget(trials, hours);
+    }
+
+    private static BlendOptions Blend(DefinitionCheck check, DefinitionNode node)
+    {
+        var blend = check.Object(node, DefinitionNames.BlendKeys);
+        var standard = new BlendOptions();
+        return new BlendOptions(
+            blend.Get("mode") is { } m ? check.Word(m.Value, DefinitionNames.BlendModes) : standard.Mode,
+            blend.Get("pool") is { } p ? check.Whole(p.Value, 1, " (trials per family)") : standard.Pool);
+    }
+}

@@ -1,0 +1,111 @@
+using System.Globalization;
+using System.Text;
+using System.Text.Encodings.Web;
+using System.Text.Json;
+using Foldwise.Core.Spaces;
+
+namespace Foldwise.Core.Definition;
+
+/// <summary>
+/// Writes a definition in the syntax <see cref="DefinitionReader"/> reads, indented, with every key spelled
+/// out (defaults included, every parameter of every family), so the text the store keeps stands alone and
+/// reads back to an equal definition. Paths are written as they are held: absolute.
+/// </summary>
+public static class DefinitionWriter
+{
+    private static readonly JsonWriterOptions Options = new()
+    {
+        Indented = true,
+
+        // Paths and names stay readable (no \u escapes for non-ASCII); the text is never embedded raw in HTML.
+        Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
+    };
+
+    public static string Write(SearchDefinition definition)
+    {
+        using var buffer = new MemoryStream();
+        using (var json = new Utf8JsonWriter(buffer, Options))
+        {
+            json.WriteStartObject();
+            json.WriteString("name", definition.Name);
+            Section(json, "data", () =>
+            {
+                json.WriteString("train", definition.Data.Train);
+                json.WriteString("test", definition.Data.Test);
+                json.WriteString("id", definition.Data.IdColumn);
+                json.WriteString("target", definition.Data.TargetColumn);
+            });
+            json.WriteString("metric", DefinitionNames.Metrics.NameOf(definition.Metric));
+            json.WriteNumber("folds", definition.Folds);
+            json.WriteNumber("seed", definition.Seed);
+            Section(json, "screening", () => json.WriteNumber("min_nonzero", definition.Screening.MinNonZero));
+            Section(json, "families", () =>
+            {
+                foreach (var family in definition.Families)
+                {
+                    Section(json, family.Family, () => Space(json, family.Space));
+                }
+            });
+            var schedule = definition.Schedule;
+            Section(json, "schedule", () =>
+            {
+                json.WriteString("kind", DefinitionNames.Schedules.NameOf(schedule.Kind));
+                json.WriteString("proposer", DefinitionNames.Proposers.NameOf(schedule.Proposer));
+                json.WriteNumber("min_rounds", schedule.MinBudget);
+                json.WriteNumber("max_rounds", schedule.MaxBudget);
+                json.WriteNumber("eta", schedule.Eta);
+            });
+            Section(json, "budget", () =>
+            {
+                if (definition.Budget.Trials is { } trials)
+                {
+                    json.WriteNumber("trials", trials);
+                }
+
+                if (definition.Budget.Hours is { } hours)
+                {
+                    json.WriteNumber("hours", hours);
+                }
+            });
+            Section(json, "blend", () =>
+            {
+                json.WriteString("mode", DefinitionNames.BlendModes.NameOf(definition.Blend.Mode));
+                json.WriteNumber("pool", definition.Blend.Pool);
+            });
+            json.WriteEndObject();
+        }
+
+        return Encoding.UTF8.GetString(buffer.ToArray()) + "\n";
+    }
+
+    private static void Section(Utf8JsonWriter json, string key, Action body)
+    {
+        json.WriteStartObject(key);
+        body();
+        json.WriteEndObject();
+    }
+
+    // Each range goes on one line as raw JSON: {"int": [8, 128]} reads better than the writer's six lines.
+    private static void Space(Utf8JsonWriter json, ParameterSpace space)
+    {
+        foreach (var range in space.Ranges)
+        {
+            json.WritePropertyName(range.Name);
+            json.WriteRawValue(Range(range));
+        }
+    }
+
+    internal static string Range(ParameterRange range) => range.Kind switch
+    {
+        // Fixed ints and floats read back as bare numbers; a fixed log range keeps its kind.
+        ParameterKind.Integer when range.IsFixed => Number(range.Low),
+        ParameterKind.Float when range.IsFixed => Number(range.Low),
+        ParameterKind.Integer => $"{{\"int\": [{Number(range.Low)}, {Number(range.High)}]}}",
+        ParameterKind.Float => $"{{\"float\": [{Number(range.Low)}, {Number(range.High)}]}}",
+        ParameterKind.LogFloat => $"{{\"log\": [{Number(range.Low)}, {Number(range.High)}]}}",
+        _ => $"{{\"choice\": [{string.Join(", ", range.Choices.Select(c => $"\"{JsonEncodedText.Encode(c, Options.Encoder)}\""))}]}}",
+    };
+
+    // "R" is the shortest text that parses back to the same double, e.g. 0.01, 1E-05; JSON accepts both forms.
+    private static string Number(double value) => value.ToString("R", CultureInfo.InvariantCulture);
+}

@@ -1,0 +1,29 @@
+namespace Foldwise.Core.Definition;
+
+/// <summary>Reads <c>schedule</c>; what it leaves out keeps <see cref="ScheduleOptions"/>' defaults.</summary>
+internal static class ScheduleReader
+{
+    public static ScheduleOptions Read(DefinitionCheck check, DefinitionNode node)
+    {
+        var schedule = check.Object(node, DefinitionNames.ScheduleKeys);
+        var standard = new ScheduleOptions();
+        var min = schedule.Get("min_rounds")?.Value;
+        var max = schedule.Get("max_rounds")?.Value;
+        var options = new ScheduleOptions(
+            schedule.Get("kind") is { } k ? check.Word(k.Value, DefinitionNames.Schedules) : standard.Kind,
+            schedule.Get("proposer") is { } p ? check.Word(p.Value, DefinitionNames.Proposers) : standard.Proposer,
+            min is null ? standard.MinBudget : check.Whole(min, 1),
+            max is null ? standard.MaxBudget : check.Whole(max, 1),
+            schedule.Get("eta") is { } e ? check.Whole(e.Value, 2, " (each rung keeps 1/eta)") : standard.Eta);
+
+        if (options.MaxBudget < options.MinBudget)
+        {
+            // Point at whichever of the two the file wrote; if it wrote one, the other is the default.
+            string problem = $"'schedule.max_rounds' ({options.MaxBudget}{(max is null ? ", the default" : "")}) " +
+                             $"is below 'schedule.min_rounds' ({options.MinBudget}{(min is null ? ", the default" : "")})";
+            throw check.Fail(max ?? min!, problem);
+        }
+
+        return options;
+    }
+}
