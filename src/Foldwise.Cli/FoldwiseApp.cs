@@ -19,5 +19,8 @@ public static class FoldwiseApp
         config.AddCommand<HistoryCommand>("history")
             .WithDescription("List a search's trials, best first (works while the search runs).")
             .WithExample("history", "runs/demo/search.db");
+        config.AddCommand<PlanCommand>("plan")
+            .WithDescription("Print the rung and bracket plan for a budget range, to size a search before running it.")
+            .WithExample("plan", "--min-budget", "1", "--max-budget", "81", "--eta", "3");
     }
 }
