@@ -44,10 +44,10 @@ public sealed class SharingTests : IDisposable
             }
         });
 
-        // When the writer saves 200 trials meanwhile
+        // When the writer saves 300 trials (more than a page of LoadTrials) meanwhile
         var writing = Task.Run(() =>
         {
-            for (int id = 1; id <= 200; id++)
+            for (int id = 1; id <= 300; id++)
             {
                 writer.Save(SampleTrials.Done(id));
             }
@@ -57,9 +57,9 @@ public sealed class SharingTests : IDisposable
         await writing.WaitAsync(TimeSpan.FromSeconds(30)); // throws TimeoutException if the reader held it up
         await stop.CancelAsync();
         await polling.WaitAsync(TimeSpan.FromSeconds(30));
-        Assert.Equal(200, reader.LoadTrials().Count);
+        Assert.Equal(300, reader.LoadTrials().Count);
         Assert.Equal(seen.Order(), seen);
-        Assert.Contains(seen, n => n is > 0 and < 200);
+        Assert.Contains(seen, n => n is > 0 and < 300);
     }
 
     [Fact]

@@ -100,6 +100,23 @@ public sealed class TrialRecordTests : IDisposable
     }
 
     [Fact]
+    public void Loads_every_trial_when_they_fill_whole_pages_and_one_more()
+    {
+        // Given exactly two pages of trials, saved from the highest id down
+        int count = 2 * SearchStore.TrialPage;
+        using var store = SearchStore.Create(_dir.StorePath);
+        for (int id = count; id >= 1; id--)
+        {
+            store.Save(SampleTrials.Queued(id));
+        }
+
+        // Then all load in order, and still do with one trial more
+        Assert.Equal(Enumerable.Range(1, count), store.LoadTrials().Select(t => t.Id));
+        store.Save(SampleTrials.Done(count + 1));
+        Assert.Equal(Enumerable.Range(1, count + 1), store.LoadTrials().Select(t => t.Id));
+    }
+
+    [Fact]
     public void Returns_null_for_a_trial_never_saved_and_no_trials_for_a_new_store()
     {
         using var store = SearchStore.Create(_dir.StorePath);

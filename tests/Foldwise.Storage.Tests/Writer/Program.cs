@@ -6,8 +6,9 @@ using Foldwise.Storage.Writer;
 //   loop <store> <count|forever> <oofLength> <testLength>
 //       opens an existing store and saves trials (and their vectors) after the highest id present,
 //       printing "saved <id>" once both calls returned; the tests read and kill this process.
-//   bench <directory>
-//       creates a store there and prints the time per call of Save, SaveVectors and LoadTrials.
+//   bench <directory> [trials]
+//       creates a store there and prints the time per call of Save, SaveVectors and LoadTrials
+//       (with 500 trials unless told).
 if (args.Length >= 5 && args[0] == "loop")
 {
     using var store = SearchStore.Open(args[1]);
@@ -30,9 +31,10 @@ if (args.Length >= 5 && args[0] == "loop")
 if (args.Length >= 2 && args[0] == "bench")
 {
     string path = StoreFile.PathIn(args[1]);
+    int trials = args.Length > 2 ? int.Parse(args[2]) : 500;
     using var store = SearchStore.Create(path);
-    Time("Save(TrialRecord), new id", 500, i => store.Save(SampleTrials.Done(i + 1)));
-    Time("Save(TrialRecord), replace", 500, i => store.Save(SampleTrials.Done(i + 1) with { Attempt = 3 }));
+    Time("Save(TrialRecord), new id", trials, i => store.Save(SampleTrials.Done(i + 1)));
+    Time("Save(TrialRecord), replace", trials, i => store.Save(SampleTrials.Done(i + 1) with { Attempt = 3 }));
     var oof = SampleTrials.Vector(50_000, 1);
     var test = SampleTrials.Vector(450_000, 2);
     Time("SaveVectors 50k + 0", 50, i => store.SaveVectors(i + 1, oof, []));
@@ -40,13 +42,14 @@ if (args.Length >= 2 && args[0] == "bench")
     Time("SaveVectors 50k + 450k, replace", 20, i => store.SaveVectors(1000 + i, oof, test));
     Time("LoadVectors 50k + 450k", 20, i => store.LoadVectors(1000 + i));
     using var reader = SearchStore.OpenReadOnly(path);
-    Time("LoadTrials (500 trials), read-only instance", 20, _ => reader.LoadTrials());
+    Time($"LoadTrials ({trials + 1} trials), read-only instance", 20, _ => reader.LoadTrials());
     Time("LoadTrial(id), read-only instance", 200, i => reader.LoadTrial(i + 1));
+    WriterWaitsWhileReading(store, reader, trials);
     Console.WriteLine($"file size: {new FileInfo(path).Length / 1e6:F1} MB");
     return 0;
 }
 
-Console.Error.WriteLine("usage: loop <store> <count|forever> <oofLength> <testLength> | bench <directory>");
+Console.Error.WriteLine("usage: loop <store> <count|forever> <oofLength> <testLength> | bench <directory> [trials]");
 return 2;
 
 static void Time(string what, int repeats, Action<int> action)
@@ -60,3 +63,33 @@ static void Time(string what, int repeats, Action<int> action)
 
     Console.WriteLine($"{what,-45} {watch.Elapsed.TotalMilliseconds / repeats,8:F2} ms/call  ({repeats} calls)");
 }
+
+// How long the coordinator's Save waits while another instance (as `history` would) reads every trial in a loop.
+static void WriterWaitsWhileReading(SearchStore writer, SearchStore reader, int trials)
+{
+    using var stop = new CancellationTokenSource();
+    int reads = 0;
+    var reading = Task.Run(() =>
+    {
+        while (!stop.IsCancellationRequested)
+        {
+            reader.LoadTrials();
+            reads++;
+        }
+    });
+    var latencies = new List<double>();
+    for (int i = 1; i <= 200; i++)
+    {
+        var watch = Stopwatch.StartNew();
+        writer.Save(SampleTrials.Done(i) with { Attempt = 4 });
+        latencies.Add(watch.Elapsed.TotalMilliseconds);
+    }
+
+    stop.Cancel();
+    reading.Wait();
+    latencies.Sort();
+    Console.WriteLine(
+        $"Save while LoadTrials ({trials + 1}) loops ({reads} reads): median {latencies[100]:F2} ms, " +
+        $"p95 {latencies[189]:F2} ms, max {latencies[^1]:F2} ms");
+}
+
