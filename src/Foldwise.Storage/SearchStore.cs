@@ -11,7 +11,7 @@ namespace Foldwise.Storage;
 /// checkpointed), so a reader's call holds the writer up only for its own duration and a call that returned is durable.
 /// One instance may be used from several threads; its calls run one at a time.
 /// </summary>
-public sealed partial class SearchStore : ITrialJournal, IDisposable
+public sealed partial class SearchStore : ISearchRecorder, IDisposable
 {
     private readonly LiteDatabase _db;
     private readonly WriterLock? _writerLock;

@@ -11,4 +11,8 @@ public static class StoreFile
 
     /// <summary>True when the output directory already holds a store file (which may belong to a finished search).</summary>
     public static bool ExistsIn(string outDir) => File.Exists(PathIn(outDir));
+
+    /// <summary>A store path as the user gave it: the file itself, or the search's folder holding it.</summary>
+    public static string Resolve(string fileOrFolder) =>
+        Directory.Exists(fileOrFolder) ? PathIn(fileOrFolder) : fileOrFolder;
 }

@@ -29,6 +29,7 @@ public static class SampleTrials
         Bracket = 1,
         State = TrialState.Done,
         Attempt = 2,
+        Failures = 1,
         Worker = "w2",
         Slot = "w2/0",
         LeaseExpires = Epoch.AddMinutes(id + 5),
