@@ -6,11 +6,12 @@ namespace Foldwise.Core.Blending;
 /// <summary>
 /// The final stage: solves blend weights on the pool's pooled out-of-fold predictions (simplex by
 /// default), scores the blend in sample, and gives the honest figure beside it — the nested estimate,
-/// where each fold is predicted with weights fitted on the other folds' rows only.
+/// where each fold is predicted with weights fitted on the other folds' rows only. Weights always
+/// minimise squared error on the fitting scale; the metric (RMSLE, RMSE or MAE) only scores them.
 /// </summary>
 public static class BlendStage
 {
-    /// <summary>Rounds of greedy selection, so weights are multiples of 1/100 (common practice, not from a source).</summary>
+    /// <summary>Rounds of greedy selection, so its weights are multiples of 1/100 (a choice made here, not from a source).</summary>
     public const int GreedyRounds = 100;
 
     /// <summary>Solves and scores the blend; a pool of one gets weight 1 in every mode.</summary>
@@ -33,7 +34,10 @@ public static class BlendStage
         if (columns.Length == 1)
         {
             weights = [1.0];
-            Array.Fill(nestedWeights, weights);
+            for (int f = 0; f < nestedWeights.Length; f++)
+            {
+                nestedWeights[f] = [1.0];
+            }
         }
         else
         {

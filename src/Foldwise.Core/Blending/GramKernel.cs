@@ -39,14 +39,19 @@ internal static class GramKernel
         for (int start = 0; start < n; start += chunk)
         {
             int length = Math.Min(chunk, n - start);
-            Fill(buffer, chunk, columns, shift, rows, start, length);
             int vectors = (length + width - 1) / width;
             if (parallel)
             {
+                Parallel.For(0, k, c => Fill(buffer.AsSpan(c * chunk, chunk), columns[c], shift, rows, start, length));
                 Parallel.For(0, tiles.Length, t => Accumulate(gram, k, buffer, chunk, vectors, tiles[t]));
             }
             else
             {
+                for (int c = 0; c < k; c++)
+                {
+                    Fill(buffer.AsSpan(c * chunk, chunk), columns[c], shift, rows, start, length);
+                }
+
                 foreach (var tile in tiles)
                 {
                     Accumulate(gram, k, buffer, chunk, vectors, tile);
@@ -79,24 +84,46 @@ internal static class GramKernel
         return [.. tiles];
     }
 
-    private static void Fill(
-        double[] buffer, int stride, IReadOnlyList<double[]> columns, double[]? shift, int[]? rows, int start, int length)
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void Fill(Span<double> target, double[] column, double[]? shift, int[]? rows, int start, int length)
     {
-        for (int c = 0; c < columns.Count; c++)
+        if (rows is not null)
         {
-            var column = columns[c];
-            var target = buffer.AsSpan(c * stride, stride);
-            for (int t = 0; t < length; t++)
+            var picked = rows.AsSpan(start, length);
+            for (int t = 0; t < picked.Length; t++)
             {
-                int r = rows is null ? start + t : rows[start + t];
-                target[t] = shift is null ? column[r] : column[r] - shift[r];
+                target[t] = shift is null ? column[picked[t]] : column[picked[t]] - shift[picked[t]];
             }
+        }
+        else if (shift is null)
+        {
+            column.AsSpan(start, length).CopyTo(target);
+        }
+        else
+        {
+            Subtract(column.AsSpan(start, length), shift.AsSpan(start, length), target[..length]);
+        }
 
-            // Zero padding contributes nothing, so the kernel needs no scalar tail.
-            target[length..].Clear();
+        // Zero padding contributes nothing, so the kernel needs no scalar tail.
+        target[length..].Clear();
+    }
+
+    private static void Subtract(ReadOnlySpan<double> a, ReadOnlySpan<double> b, Span<double> result)
+    {
+        int width = Vector<double>.Count;
+        int i = 0;
+        for (; i <= a.Length - width; i += width)
+        {
+            (new Vector<double>(a[i..]) - new Vector<double>(b[i..])).CopyTo(result[i..]);
+        }
+
+        for (; i < a.Length; i++)
+        {
+            result[i] = a[i] - b[i];
         }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void Accumulate(double[] gram, int k, double[] buffer, int stride, int vectors, (int I, int J) tile)
     {
         int rowsInTile = Math.Min(Tile, k - tile.I);
@@ -126,6 +153,7 @@ internal static class GramKernel
         }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void Full(double[] gram, int k, double[] buffer, int stride, int vectors, (int I, int J) tile)
     {
         int perColumn = stride / Vector<double>.Count;

@@ -32,12 +32,14 @@ public static class NonNegativeLeastSquares
         var support = new List<int>();
         var refused = new bool[k];
         var gradient = new double[k];
+        // Each accepted entry lowers the objective, and refusals are at most k between entries, so
+        // only entries need a cap; it guards against rounding making the method cycle.
         int limit = (10 * k) + 100;
-        for (int iteration = 0; ; iteration++)
+        for (int entries = 0; ;)
         {
-            if (iteration == limit)
+            if (entries == limit)
             {
-                throw new InvalidOperationException($"the non-negative active set did not settle in {limit} steps");
+                throw new InvalidOperationException($"the non-negative active set did not settle in {limit} entries");
             }
 
             double scale = targetNorm;
@@ -72,6 +74,7 @@ public static class NonNegativeLeastSquares
             support.Add(enter);
             if (Descend(augmented, w, support, enter))
             {
+                entries++;
                 Array.Clear(refused);
             }
             else

@@ -40,12 +40,14 @@ public static class SimplexLeastSquares
         var support = new List<int> { first };
         var refused = new bool[k];
         var gradient = new double[k];
+        // Each accepted entry lowers the objective, and refusals are at most k between entries, so
+        // only entries need a cap; it guards against rounding making the method cycle.
         int limit = (10 * k) + 100;
-        for (int iteration = 0; ; iteration++)
+        for (int entries = 0; ;)
         {
-            if (iteration == limit)
+            if (entries == limit)
             {
-                throw new InvalidOperationException($"the simplex active set did not settle in {limit} steps");
+                throw new InvalidOperationException($"the simplex active set did not settle in {limit} entries");
             }
 
             double objective = Gradient(e, w, support, gradient);
@@ -75,6 +77,7 @@ public static class SimplexLeastSquares
             support.Add(enter);
             if (Descend(e, w, support, enter))
             {
+                entries++;
                 Array.Clear(refused);
             }
             else
