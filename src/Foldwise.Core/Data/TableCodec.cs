@@ -1,0 +1,122 @@
+using System.Collections.Immutable;
+using System.Runtime.InteropServices;
+using System.Text;
+
+namespace Foldwise.Core.Data;
+
+/// <summary>
+/// The project's binary form of a <see cref="FeatureTable"/>, the bytes workers fetch by hash: little-endian,
+/// <c>"FWTB"</c> magic, a 32-bit version (<c>1</c>), then counts, ids, feature names, the target and each
+/// column's rows and values. The source path is not encoded, so equal tables encode to equal bytes.
+/// </summary>
+public static class TableCodec
+{
+    internal const int Version = 1;
+
+    internal static ReadOnlySpan<byte> Magic => "FWTB"u8;
+
+    public static byte[] Encode(FeatureTable table)
+    {
+        ArgumentNullException.ThrowIfNull(table);
+        var bytes = new byte[EncodedLength(table)];
+        var writer = new SpanWriter(bytes);
+        writer.Bytes(Magic);
+        writer.Int32(Version);
+        writer.Int32(table.RowCount);
+        writer.Int32(table.FeatureCount);
+        writer.Int32(table.HasTarget ? 1 : 0);
+        foreach (string id in table.Ids)
+        {
+            writer.Text(id);
+        }
+
+        foreach (string name in table.FeatureNames)
+        {
+            writer.Text(name);
+        }
+
+        writer.Doubles(table.Target.AsSpan());
+        foreach (var column in table.Columns)
+        {
+            writer.Int32(column.NonZeroCount);
+            writer.Int32s(column.Rows.AsSpan());
+            writer.Singles(column.Values.AsSpan());
+        }
+
+        writer.EnsureFull();
+        return bytes;
+    }
+
+    /// <summary>Rebuilds a table, checking the structure; bytes that are not a valid encoding throw <see cref="InvalidDataException"/>.</summary>
+    public static FeatureTable Decode(ReadOnlySpan<byte> bytes, string source)
+    {
+        var reader = new SpanReader(bytes);
+        if (!reader.Bytes(Magic.Length).SequenceEqual(Magic))
+        {
+            throw new InvalidDataException($"{source}: not a Foldwise table encoding");
+        }
+
+        int version = reader.Int32();
+        if (version != Version)
+        {
+            throw new InvalidDataException($"{source}: table encoding version {version} is not {Version}");
+        }
+
+        int rowCount = reader.Count();
+        int featureCount = reader.Count();
+        bool hasTarget = reader.Int32() != 0;
+        var ids = ReadTexts(ref reader, rowCount);
+        var names = ReadTexts(ref reader, featureCount);
+        var target = hasTarget ? ImmutableCollectionsMarshal.AsImmutableArray(reader.Doubles(rowCount)) : [];
+        var columns = new SparseColumn[featureCount];
+        for (int c = 0; c < featureCount; c++)
+        {
+            int n = reader.Count();
+            var rows = reader.Int32s(n);
+            CheckRows(rows, rowCount, source);
+            var values = reader.Singles(n);
+            columns[c] = n == 0
+                ? SparseColumn.Empty
+                : new SparseColumn(ImmutableCollectionsMarshal.AsImmutableArray(rows), ImmutableCollectionsMarshal.AsImmutableArray(values));
+        }
+
+        if (!reader.AtEnd)
+        {
+            throw new InvalidDataException($"{source}: bytes left over after the table");
+        }
+
+        return new FeatureTable(source, ids, names, ImmutableCollectionsMarshal.AsImmutableArray(columns), target);
+    }
+
+    private static int EncodedLength(FeatureTable table)
+    {
+        long length = Magic.Length + (4 * sizeof(int));
+        length += table.Ids.Sum(s => (long)sizeof(int) + Encoding.UTF8.GetByteCount(s));
+        length += table.FeatureNames.Sum(s => (long)sizeof(int) + Encoding.UTF8.GetByteCount(s));
+        length += (long)table.Target.Length * sizeof(double);
+        length += table.Columns.Sum(c => sizeof(int) + ((long)c.NonZeroCount * (sizeof(int) + sizeof(float))));
+        return length <= Array.MaxLength ? (int)length : throw new InvalidOperationException("the table is too large to encode");
+    }
+
+    private static ImmutableArray<string> ReadTexts(ref SpanReader reader, int count)
+    {
+        var texts = new string[count];
+        for (int i = 0; i < count; i++)
+        {
+            texts[i] = reader.Text();
+        }
+
+        return ImmutableCollectionsMarshal.AsImmutableArray(texts);
+    }
+
+    private static void CheckRows(int[] rows, int rowCount, string source)
+    {
+        for (int k = 0; k < rows.Length; k++)
+        {
+            if (rows[k] < 0 || rows[k] >= rowCount || (k > 0 && rows[k] <= rows[k - 1]))
+            {
+                throw new InvalidDataException($"{source}: a column's rows are not ascending within the table");
+            }
+        }
+    }
+}

@@ -1,0 +1,59 @@
+using System.Collections.Immutable;
+using Foldwise.Core.Data;
+
+namespace Foldwise.Testing;
+
+/// <summary>
+/// Builds small <see cref="FeatureTable"/>s for tests from dense cells; ids default to <c>r1</c>, <c>r2</c> …,
+/// feature names to <c>f1</c>, <c>f2</c> …, and the source to <c>tiny.csv</c>.
+/// </summary>
+public static class TinyTables
+{
+    /// <summary>A sparse column from dense cells, keeping the non-zero ones.</summary>
+    public static SparseColumn Column(params float[] cells)
+    {
+        var rows = ImmutableArray.CreateBuilder<int>();
+        var values = ImmutableArray.CreateBuilder<float>();
+        for (int r = 0; r < cells.Length; r++)
+        {
+            if (cells[r] != 0f)
+            {
+                rows.Add(r);
+                values.Add(cells[r]);
+            }
+        }
+
+        return new SparseColumn(rows.ToImmutable(), values.ToImmutable());
+    }
+
+    /// <summary>A table from named dense columns of equal length.</summary>
+    public static FeatureTable FromColumns(
+        IReadOnlyList<(string Name, float[] Cells)> columns,
+        double[]? target = null,
+        string source = "tiny.csv",
+        int? rowCount = null)
+    {
+        int rows = rowCount ?? (columns.Count > 0 ? columns[0].Cells.Length : target?.Length ?? 0);
+        if (columns.Any(c => c.Cells.Length != rows))
+        {
+            throw new ArgumentException("every column needs one cell per row", nameof(columns));
+        }
+
+        return new FeatureTable(
+            source,
+            [.. Enumerable.Range(1, rows).Select(i => $"r{i}")],
+            [.. columns.Select(c => c.Name)],
+            [.. columns.Select(c => Column(c.Cells))],
+            target is null ? [] : [.. target]);
+    }
+
+    /// <summary>A table from dense rows, with features named f1, f2 ….</summary>
+    public static FeatureTable FromRows(float[][] rows, double[]? target = null, string source = "tiny.csv")
+    {
+        int width = rows.Length > 0 ? rows[0].Length : 0;
+        var columns = Enumerable.Range(0, width)
+            .Select(c => ($"f{c + 1}", rows.Select(row => row[c]).ToArray()))
+            .ToList();
+        return FromColumns(columns, target, source, rows.Length);
+    }
+}
