@@ -1,0 +1,72 @@
+using Foldwise.Core.Learning;
+using Foldwise.Core.Spaces;
+using Microsoft.ML;
+using Microsoft.ML.Data;
+
+namespace Foldwise.Learners;
+
+/// <summary>
+/// The fit path both families share: check the job, train in a context seeded from it, then score the
+/// held-out rows and the whole test table in batch (one cursor each, no per-row engine).
+/// Cancellation is checked before and after training; a fit itself runs to its end.
+/// </summary>
+internal static class FoldFitter
+{
+    public static FoldPrediction Fit(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation)
+    {
+        Check(family, job);
+        cancellation.ThrowIfCancellationRequested();
+        var ml = new MLContext(job.Seed);
+        var data = job.Data;
+        var trainView = SparseViews.Rows(ml, data.Train, job.TrainRows, data.Target);
+
+        // ML.NET 5's public API offers no way to interrupt a fit, so cancellation is honoured around it.
+        var model = train(ml, trainView);
+        cancellation.ThrowIfCancellationRequested();
+        var validation = Score(model, SparseViews.Rows(ml, data.Train, job.ValidationRows, labels: null), job.ValidationRows.Length);
+        var test = Score(model, SparseViews.Test(data), data.Test.RowCount);
+        return new FoldPrediction(validation, test);
+    }
+
+    /// <summary>Refuses a job before any training: the coordinator's values are checked, never trusted.</summary>
+    internal static void Check(string family, FoldJob job)
+    {
+        var problems = new List<string>(DefaultSpaces.For(family).Problems(job.Parameters));
+        if (job.Budget < 1)
+        {
+            problems.Add($"budget {job.Budget} is below 1 round");
+        }
+
+        if (job.Threads < 1)
+        {
+            problems.Add($"threads {job.Threads} is below 1");
+        }
+
+        if (job.TrainRows.IsDefaultOrEmpty)
+        {
+            problems.Add("the fold has no training rows");
+        }
+
+        if (job.Data.Test.ColumnCount != job.Data.Train.ColumnCount)
+        {
+            problems.Add($"the test table has {job.Data.Test.ColumnCount} features but the training table {job.Data.Train.ColumnCount}");
+        }
+
+        if (problems.Count > 0)
+        {
+            throw new ArgumentException($"{family} fold {job.Fold} refused: {string.Join("; ", problems)}", nameof(job));
+        }
+    }
+
+    private static double[] Score(ITransformer model, IDataView rows, int expected)
+    {
+        var scores = new double[expected];
+        int i = 0;
+        foreach (float score in model.Transform(rows).GetColumn<float>("Score"))
+        {
+            scores[i++] = score;
+        }
+
+        return i == expected ? scores : throw new InvalidOperationException($"scored {i} rows, expected {expected}");
+    }
+}

@@ -1,0 +1,101 @@
+using Foldwise.Core.Data;
+using Foldwise.Core.Demo;
+
+namespace Foldwise.Core.Tests.Demo;
+
+public sealed class FreightDemoTests
+{
+    private static readonly (FeatureTable Train, FeatureTable Test) Quick = FreightDemo.Generate(DemoSize.Quick, seed: 7);
+
+    private static readonly Lazy<(FeatureTable Train, FeatureTable Test)> Full = new(() => FreightDemo.Generate(DemoSize.Full, seed: 7));
+
+    [Fact]
+    public void Makes_a_quick_table_of_the_stated_shape()
+    {
+        var (train, test) = Quick;
+
+        Assert.Equal((800, 400, 2_000, 400), (train.RowCount, train.FeatureCount, test.RowCount, test.FeatureCount));
+        Assert.True(train.HasTarget);
+        Assert.False(test.HasTarget);
+        Assert.Equal(train.FeatureNames.ToArray(), test.FeatureNames.ToArray());
+    }
+
+    [Fact]
+    public void Makes_a_full_table_with_the_fields_character()
+    {
+        // Given the full demo
+        var (train, test) = Full.Value;
+
+        // Then it is 4,500 × 5,000 at ~97% zeros (DESIGN.md, demo scenario), with a test table ten times longer
+        Assert.Equal((4_500, 5_000), (train.RowCount, train.FeatureCount));
+        Assert.Equal(10 * train.RowCount, test.RowCount);
+        Assert.InRange(train.Density, 0.025, 0.035);
+        Assert.InRange(test.Density, 0.025, 0.035);
+        Assert.True(CountConstant(train) >= 5, "constant columns");
+        Assert.True(CountDuplicates(train) >= 20, "duplicated columns");
+    }
+
+    [Fact]
+    public void Is_about_97_percent_zeros_at_the_quick_size_too()
+    {
+        Assert.InRange(Quick.Train.Density, 0.025, 0.035);
+    }
+
+    [Fact]
+    public void Includes_constant_and_duplicated_columns()
+    {
+        var (train, _) = Quick;
+
+        Assert.True(CountConstant(train) >= 3, $"{CountConstant(train)} constant columns");
+        Assert.True(CountDuplicates(train) >= 1, $"{CountDuplicates(train)} duplicated columns");
+        Assert.Contains(train.Columns, c => c.NonZeroCount == train.RowCount && c.Values.All(v => v == 1));
+        Assert.Contains(train.Columns, c => c.NonZeroCount == 0);
+    }
+
+    [Fact]
+    public void Gives_the_same_tables_for_the_same_seed_and_others_for_another()
+    {
+        // When the quick demo is generated again with the same seed and with another
+        var (again, againTest) = FreightDemo.Generate(DemoSize.Quick, seed: 7);
+        var (other, _) = FreightDemo.Generate(DemoSize.Quick, seed: 8);
+
+        // Then the first matches cell for cell and the second does not
+        // (Arrays, not ImmutableArrays: xunit compares those by IEquatable, i.e. by the underlying array's reference.)
+        Assert.Equal(Quick.Train.Target.ToArray(), again.Target.ToArray());
+        Assert.Equal(Quick.Train.Ids.ToArray(), again.Ids.ToArray());
+        Assert.True(Quick.Train.Columns.Zip(again.Columns).All(p => p.First.Rows.SequenceEqual(p.Second.Rows) && p.First.Values.SequenceEqual(p.Second.Values)));
+        Assert.True(Quick.Test.Columns.Zip(againTest.Columns).All(p => p.First.Rows.SequenceEqual(p.Second.Rows)));
+        Assert.False(Quick.Train.Target.SequenceEqual(other.Target));
+    }
+
+    [Fact]
+    public void Has_a_non_negative_right_skewed_target()
+    {
+        var target = Quick.Train.Target;
+        var sorted = target.Order().ToArray();
+        double median = sorted[sorted.Length / 2];
+
+        Assert.All(target, y => Assert.True(y >= 0 && double.IsFinite(y)));
+        Assert.True(target.Average() > 1.5 * median, $"mean {target.Average():F0}, median {median:F0}");
+        Assert.True(sorted[^1] > 20 * median, "a heavy right tail");
+    }
+
+    [Fact]
+    public void Holds_whole_counts_under_opaque_names_and_ids()
+    {
+        var (train, test) = Quick;
+
+        Assert.All(train.Columns, c => Assert.All(c.Values, v => Assert.True(v >= 1 && v == MathF.Round(v))));
+        Assert.Equal(("lane_0001", "lane_0400"), (train.FeatureNames[0], train.FeatureNames[^1]));
+        Assert.Equal(("S000001", "S000800", "S000801"), (train.Ids[0], train.Ids[^1], test.Ids[0]));
+        Assert.Empty(train.Ids.Intersect(test.Ids));
+    }
+
+    private static int CountConstant(FeatureTable table) =>
+        table.Columns.Count(c => c.NonZeroCount == 0 || (c.NonZeroCount == table.RowCount && c.Values.All(v => v == c.Values[0])));
+
+    private static int CountDuplicates(FeatureTable table) =>
+        table.Columns.Where(c => c.NonZeroCount > 0)
+            .GroupBy(c => string.Join(';', c.Rows.Zip(c.Values, (r, v) => $"{r}:{v}")))
+            .Sum(g => g.Count() - 1);
+}
