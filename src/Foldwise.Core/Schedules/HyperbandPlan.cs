@@ -11,6 +11,12 @@ public sealed record HyperbandPlan(int MinBudget, int MaxBudget, int Eta, Immuta
 {
     public int SMax => Brackets[0].S;
 
+    /// <summary>Plans are equal when their settings and brackets are.</summary>
+    public bool Equals(HyperbandPlan? other) =>
+        other is not null && (MinBudget, MaxBudget, Eta) == (other.MinBudget, other.MaxBudget, other.Eta) && Brackets.SequenceEqual(other.Brackets);
+
+    public override int GetHashCode() => HashCode.Combine(MinBudget, MaxBudget, Eta);
+
     public static HyperbandPlan For(int minBudget, int maxBudget, int eta)
     {
         ScheduleChecks.Validate(minBudget, maxBudget, eta);

@@ -48,6 +48,9 @@ internal sealed class FakeCoordinator(ISchedule schedule)
         return _trials[trial.Id];
     }
 
+    /// <summary>Takes over a trial from an earlier session's journal without telling the schedule again.</summary>
+    public void Adopt(TrialRecord trial) => _trials[trial.Id] = trial;
+
     public void Finish(int id, double score) => Save(_trials[id] with { State = TrialState.Done, Score = score });
 
     public void Fail(int id) => Save(_trials[id] with { State = TrialState.Failed, FailureReason = "test failure" });
