@@ -1,0 +1,83 @@
+using Foldwise.Core.Search;
+using Foldwise.Core.Spaces;
+
+namespace Foldwise.Core.Proposers;
+
+/// <summary>
+/// What one family has shown so far, kept up to date from trial records: finished results per budget
+/// (in the order they finished) and the new candidates still queued or running. Promotions add results at
+/// their budget but are not pending candidates: their point is already known from a lower budget.
+/// </summary>
+public sealed class FamilyHistory
+{
+    private readonly TrialTracker _tracker = new();
+    private readonly SortedList<int, List<Observation>> _results = [];
+    private readonly SortedDictionary<int, double[]> _pending = [];
+
+    public FamilyHistory(string family, ParameterSpace space)
+    {
+        Family = family;
+        Space = space;
+    }
+
+    public string Family { get; }
+
+    public ParameterSpace Space { get; }
+
+    /// <summary>New candidates (trials without a parent) observed so far, finished or not.</summary>
+    public int NewCandidates { get; private set; }
+
+    /// <summary>Budgets that have at least one result, ascending.</summary>
+    public IList<int> Budgets => _results.Keys;
+
+    /// <summary>Values of new candidates not yet finished, by trial id.</summary>
+    public IReadOnlyCollection<double[]> Pending => _pending.Values;
+
+    /// <summary>Results at a budget, oldest first; empty when there are none.</summary>
+    public IReadOnlyList<Observation> ResultsAt(int budget) =>
+        _results.TryGetValue(budget, out var list) ? list : [];
+
+    /// <summary>Takes in a created trial or a change of state; records of other families are the caller's to filter.</summary>
+    public TrialChange Observe(TrialRecord trial)
+    {
+        var change = _tracker.Observe(trial);
+        if (change.Created && trial.ParentId is null)
+        {
+            NewCandidates++;
+            if (!change.Finished)
+            {
+                _pending[trial.Id] = Encode(trial.Parameters);
+            }
+        }
+
+        if (change.Finished)
+        {
+            _pending.Remove(trial.Id);
+            if (trial.State == TrialState.Done && trial.Score is double score && double.IsFinite(score))
+            {
+                if (!_results.TryGetValue(trial.Budget, out var list))
+                {
+                    list = [];
+                    _results.Add(trial.Budget, list);
+                }
+
+                list.Add(new Observation(trial.Id, Encode(trial.Parameters), score));
+            }
+        }
+
+        return change;
+    }
+
+    /// <summary>The values in the space's order; a name the set lacks takes the range's low end.</summary>
+    public double[] Encode(ParameterSet parameters)
+    {
+        var ranges = Space.Ranges;
+        var values = new double[ranges.Length];
+        for (int i = 0; i < values.Length; i++)
+        {
+            values[i] = parameters.Get(ranges[i].Name, ranges[i].Low);
+        }
+
+        return values;
+    }
+}

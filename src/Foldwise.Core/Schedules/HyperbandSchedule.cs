@@ -1,0 +1,105 @@
+using System.Collections.Immutable;
+using Foldwise.Core.Definition;
+using Foldwise.Core.Proposers;
+using Foldwise.Core.Search;
+
+namespace Foldwise.Core.Schedules;
+
+/// <summary>
+/// Hyperband (Li et al., JMLR 18(185), 2018): the brackets of <see cref="HyperbandPlan"/> one after another, each
+/// run as synchronous successive halving, and from the first bracket again after the last. Every family runs its
+/// own copy of the current bracket (its own n_i trials per rung, promotions by merit within the family); the next
+/// bracket starts when every family's copy is complete. Trials carry the bracket's ordinal (1, 2, … counting across
+/// cycles, so 0 still means "not Hyperband"). While a rung is still running and nothing else can start, the next
+/// plan is null.
+/// </summary>
+public sealed class HyperbandSchedule : ISchedule
+{
+    private readonly CandidateSource _source;
+    private readonly HyperbandPlan _plan;
+    private readonly Dictionary<int, BracketRun[]> _runs = [];
+    private int _current = 1;
+
+    public HyperbandSchedule(ImmutableArray<FamilySearch> families, ScheduleOptions options, IProposer proposer, int seed)
+    {
+        _plan = HyperbandPlan.For(options.MinBudget, options.MaxBudget, options.Eta);
+        _source = new CandidateSource(families, proposer, seed);
+    }
+
+    public HyperbandPlan Plan => _plan;
+
+    public bool Exhausted => false;
+
+    /// <summary>The bracket of a trial ordinal: 1 → s_max, 2 → s_max − 1, …, wrapping after s = 0.</summary>
+    public HyperbandBracket BracketOf(int ordinal) => _plan.Brackets[(ordinal - 1) % _plan.Brackets.Length];
+
+    public void Observe(TrialRecord trial)
+    {
+        var (family, change) = _source.Observe(trial);
+        if (family < 0 || trial.Bracket < 1)
+        {
+            return;
+        }
+
+        RunsOf(trial.Bracket)[family].Observe(trial, change);
+        _current = Math.Max(_current, trial.Bracket);
+    }
+
+    public TrialPlan? NextPlan()
+    {
+        // At most two passes: the current bracket, then (when every family completed it) the next one.
+        for (int ordinal = _current; ordinal <= _current + 1; ordinal++)
+        {
+            var runs = RunsOf(ordinal);
+            int chosen = -1;
+            BracketStep chosenStep = default;
+            bool waiting = false;
+            for (int f = 0; f < runs.Length; f++)
+            {
+                var step = runs[f].Next();
+                if (step.Kind is BracketStepKind.New or BracketStepKind.Promote)
+                {
+                    if (chosen < 0 || runs[f].Created < runs[chosen].Created)
+                    {
+                        (chosen, chosenStep) = (f, step);
+                    }
+                }
+                else if (step.Kind == BracketStepKind.Waiting)
+                {
+                    waiting = true;
+                }
+            }
+
+            if (chosen >= 0)
+            {
+                return chosenStep.Kind == BracketStepKind.New
+                    ? _source.NewCandidate(chosen, chosenStep.Budget, ordinal)
+                    : new TrialPlan(_source[chosen].Family, chosenStep.Parameters!, chosenStep.Budget, chosenStep.Rung, chosenStep.Parent, Promotion.ProposerName, ordinal);
+            }
+
+            if (waiting)
+            {
+                return null;
+            }
+        }
+
+        return null;
+    }
+
+    private BracketRun[] RunsOf(int ordinal)
+    {
+        if (!_runs.TryGetValue(ordinal, out var runs))
+        {
+            var bracket = BracketOf(ordinal);
+            runs = new BracketRun[_source.Count];
+            for (int f = 0; f < runs.Length; f++)
+            {
+                runs[f] = new BracketRun(bracket);
+            }
+
+            _runs.Add(ordinal, runs);
+        }
+
+        return runs;
+    }
+}

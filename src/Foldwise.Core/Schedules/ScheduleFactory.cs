@@ -1,0 +1,29 @@
+using Foldwise.Core.Definition;
+using Foldwise.Core.Proposers;
+using Foldwise.Core.Search;
+
+namespace Foldwise.Core.Schedules;
+
+/// <summary>Builds the schedule and proposer a definition asks for (the defaults: ASHA with TPE), seeded by its Seed.</summary>
+public static class ScheduleFactory
+{
+    public static ISchedule Create(SearchDefinition definition)
+    {
+        var options = definition.Schedule;
+        var proposer = CreateProposer(options.Proposer);
+        return options.Kind switch
+        {
+            ScheduleKind.Full => new FullBudgetSchedule(definition.Families, options, proposer, definition.Seed),
+            ScheduleKind.Asha => new AshaSchedule(definition.Families, options, proposer, definition.Seed),
+            ScheduleKind.Hyperband => new HyperbandSchedule(definition.Families, options, proposer, definition.Seed),
+            _ => throw new ArgumentOutOfRangeException(nameof(definition), options.Kind, "unknown schedule kind"),
+        };
+    }
+
+    public static IProposer CreateProposer(ProposerKind kind) => kind switch
+    {
+        ProposerKind.Random => new RandomProposer(),
+        ProposerKind.Tpe => new TpeProposer(),
+        _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "unknown proposer kind"),
+    };
+}

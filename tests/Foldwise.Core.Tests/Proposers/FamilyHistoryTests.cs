@@ -1,0 +1,63 @@
+using Foldwise.Core.Proposers;
+using Foldwise.Core.Search;
+using Foldwise.Core.Spaces;
+
+namespace Foldwise.Core.Tests.Proposers;
+
+public sealed class FamilyHistoryTests
+{
+    private static readonly ParameterSpace Space = new([ParameterRange.Float("x", 0, 1), ParameterRange.Choice("c", "a", "b")]);
+
+    private static TrialRecord Trial(int id, TrialState state, double? score = null, int? parent = null, int budget = 1) => new()
+    {
+        Id = id,
+        Family = "f",
+        Parameters = ParameterSet.Of([new("x", id / 10.0), new("c", 1)]),
+        Budget = budget,
+        ParentId = parent,
+        Proposer = parent is null ? "tpe" : "promotion",
+        Created = ProposerRuns.Epoch,
+        State = state,
+        Score = score,
+    };
+
+    [Fact]
+    public void Keeps_new_candidates_pending_until_they_finish_and_results_by_budget()
+    {
+        var history = new FamilyHistory("f", Space);
+
+        // When two new candidates and one promotion are created, and run
+        history.Observe(Trial(1, TrialState.Queued));
+        history.Observe(Trial(2, TrialState.Queued));
+        history.Observe(Trial(3, TrialState.Queued, parent: 1, budget: 3));
+        history.Observe(Trial(1, TrialState.Running));
+        Assert.Equal(2, history.Pending.Count);
+        Assert.Equal(2, history.NewCandidates);
+
+        // Then a result leaves the pending set and lands at its budget; a failure leaves with no result
+        history.Observe(Trial(1, TrialState.Done, 0.5));
+        history.Observe(Trial(2, TrialState.Failed));
+        history.Observe(Trial(3, TrialState.Done, 0.4, parent: 1, budget: 3));
+        Assert.Empty(history.Pending);
+        Assert.Equal([1, 3], history.Budgets);
+        var result = Assert.Single(history.ResultsAt(1));
+        Assert.Equal((1, 0.5), (result.TrialId, result.Score));
+        Assert.Equal([0.1, 1.0], result.Values);
+        Assert.Empty(history.ResultsAt(9));
+    }
+
+    [Fact]
+    public void Counts_a_record_seen_twice_once_and_ignores_scores_that_are_not_finite()
+    {
+        var history = new FamilyHistory("f", Space);
+
+        var created = history.Observe(Trial(1, TrialState.Done, 0.5));
+        var again = history.Observe(Trial(1, TrialState.Done, 0.5));
+        history.Observe(Trial(2, TrialState.Done, double.NaN));
+
+        Assert.Equal(new TrialChange(Created: true, Finished: true), created);
+        Assert.Equal(TrialChange.None, again);
+        Assert.Single(history.ResultsAt(1));
+        Assert.Equal(2, history.NewCandidates);
+    }
+}
