@@ -4,7 +4,7 @@ using Foldwise.Core.Spaces;
 namespace Foldwise.Learners;
 
 /// <summary>The learner families a worker can run, by name; <see cref="BuiltIn"/> holds LightGBM and FastTree.</summary>
-public sealed class LearnerCatalog
+public sealed class LearnerCatalog : ILearnerCatalog
 {
     private readonly Dictionary<string, IFoldLearner> byFamily;
 

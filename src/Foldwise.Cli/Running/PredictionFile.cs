@@ -14,7 +14,7 @@ public static class PredictionFile
         }
 
         string partial = path + ".part";
-        using (var writer = new StreamWriter(partial, append: false, bufferSize: 1 << 16))
+        using (var writer = new StreamWriter(partial, append: false, new System.Text.UTF8Encoding(false), bufferSize: 1 << 16))
         {
             writer.Write(Quote(idColumn));
             writer.Write(',');

@@ -22,12 +22,17 @@ public static class SearchPreparation
         var train = CsvTableReader.ReadTraining(definition.Data.Train, definition.Data.IdColumn, definition.Data.TargetColumn, metric);
         var rawTest = CsvTableReader.ReadTest(definition.Data.Test, definition.Data.IdColumn, definition.Data.TargetColumn);
         var (test, extra) = TableAlignment.AlignTest(train, rawTest);
+        if (train.RowCount < 2 * definition.Folds)
+        {
+            throw new InputException(definition.Data.Train, $"{train.RowCount} training rows are too few for {definition.Folds} folds; give at least {2 * definition.Folds}");
+        }
+
         console.MarkupLine(
             $"Read [bold]{Markup.Escape(Path.GetFileName(definition.Data.Train))}[/] {train.RowCount:N0} rows × {train.FeatureCount:N0} features " +
             $"({train.Density:P1} non-zero) and [bold]{Markup.Escape(Path.GetFileName(definition.Data.Test))}[/] {test.RowCount:N0} rows in {clock.Elapsed.TotalSeconds:F1} s");
-        if (extra.Count > 0)
+        if (extra.Length > 0)
         {
-            console.MarkupLine($"  The test table's {extra.Count} column(s) missing from training are ignored: {Markup.Escape(string.Join(", ", extra.Take(5)))}{(extra.Count > 5 ? ", …" : "")}");
+            console.MarkupLine($"  The test table's {extra.Length} column(s) missing from training are ignored: {Markup.Escape(string.Join(", ", extra.Take(5)))}{(extra.Length > 5 ? ", …" : "")}");
         }
 
         var report = ColumnScreen.Screen(train, definition.Screening);

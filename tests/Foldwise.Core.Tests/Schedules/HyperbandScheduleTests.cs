@@ -92,7 +92,7 @@ public sealed class HyperbandScheduleTests
         var brackets = new List<(int Bracket, int Budget, int Rung)>();
         for (int guard = 0; guard < 200; guard++)
         {
-            foreach (var running in coordinator.Trials.Where(t => t.State == Search.TrialState.Running).ToList())
+            foreach (var running in coordinator.Trials.Where(t => t.State == global::Foldwise.Core.Search.TrialState.Running).ToList())
             {
                 coordinator.Finish(running.Id, FakeCoordinator.Score(running));
             }

@@ -17,7 +17,7 @@ public sealed class MeanLearner(string family) : IFoldLearner, ILearnerCatalog
 
     public int Fits => Volatile.Read(ref fits);
 
-    public IFoldLearner Get(string name) => name == family ? this : throw new ArgumentException($"unknown family '{name}'", nameof(name));
+    public IFoldLearner Get(string family) => family == Family ? this : throw new ArgumentException($"unknown family '{family}'", nameof(family));
 
     public FoldPrediction Fit(FoldJob job, CancellationToken cancellation)
     {
