@@ -23,7 +23,7 @@ public sealed class HistoryCommand(IAnsiConsole console) : Command<HistorySettin
         }
         else
         {
-            TrialTable.Render(console, trials, definition, Metric.For(definition.Metric));
+            TrialTable.Render(console, trials, definition, Metric.For(definition.Metric), settings.Wide);
         }
 
         return ExitCodes.Ok;

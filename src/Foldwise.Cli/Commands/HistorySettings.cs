@@ -15,6 +15,10 @@ public sealed class HistorySettings : CommandSettings
     [Description("Print the trials as JSON instead of a table.")]
     public bool Json { get; init; }
 
+    [CommandOption("--wide")]
+    [Description("Add each trial's parameters to the table.")]
+    public bool Wide { get; init; }
+
     [CommandOption("--family <NAME>")]
     [Description("Only this family's trials.")]
     public string? Family { get; init; }

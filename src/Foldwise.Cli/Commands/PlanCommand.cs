@@ -37,11 +37,13 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
 
         console.MarkupLine($"ASHA rungs (rounds): {string.Join(" → ", rungs)}; a candidate moves up when it is in the top 1/{settings.Eta} of its rung.");
         int widest = plan.Brackets.Max(b => b.Rungs.Length);
-        var table = new Table().Title($"Hyperband brackets, {settings.MinBudget} to {settings.MaxBudget} rounds, η = {settings.Eta}");
+        var table = new Table()
+            .Title($"Hyperband brackets, {settings.MinBudget} to {settings.MaxBudget} rounds, η = {settings.Eta}")
+            .Caption("each cell: candidates × rounds");
         table.AddColumn("bracket s");
         for (int i = 0; i < widest; i++)
         {
-            table.AddColumn($"rung {i}: candidates × rounds");
+            table.AddColumn($"rung {i}");
         }
 
         table.AddColumn("total rounds");

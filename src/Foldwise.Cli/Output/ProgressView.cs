@@ -55,9 +55,10 @@ public sealed class ProgressView(IAnsiConsole console)
         void Line(TrialRecord trial)
         {
             var p = session.Coordinator.Progress();
-            console.WriteLine(
-                $"trial {trial.Id,4} {trial.Family,-9} rung {trial.Rung} {trial.Budget,4} rounds  {trial.Score:F5}  " +
-                $"({trial.Duration?.TotalSeconds:F1} s on {trial.Worker}/{trial.Slot})  done {p.Done}{Of(p.TrialBudget)} running {p.Running} best {FormatBest(p)}  " +
+            // Plain lines go straight to the writer: no wrapping at a guessed width, one trial per line.
+            console.Profile.Out.Writer.WriteLine(
+                $"trial {trial.Id,4} {trial.Family,-9} rung {trial.Rung} {trial.Budget,4} rounds {trial.Score:F5} " +
+                $"{trial.Duration?.TotalSeconds,5:F1} s {trial.Worker}/{trial.Slot} | done {p.Done}{Of(p.TrialBudget)} running {p.Running} best {p.Best:F5} | " +
                 trial.Parameters.Describe(spaces.GetValueOrDefault(trial.Family)));
         }
 

@@ -8,14 +8,21 @@ namespace Foldwise.Cli.Output;
 /// <summary>The trial history as a terminal table: one row per trial, with its score, noise, rung, lineage and machine.</summary>
 public static class TrialTable
 {
-    public static void Render(IAnsiConsole console, IReadOnlyList<TrialRecord> trials, SearchDefinition definition, Metric metric)
+    /// <param name="wide">Adds the parameters column (long: it needs a wide terminal).</param>
+    public static void Render(IAnsiConsole console, IReadOnlyList<TrialRecord> trials, SearchDefinition definition, Metric metric, bool wide = false)
     {
         var spaces = definition.Families.ToDictionary(f => f.Family, f => f.Space);
-        var table = new Table()
-            .AddColumns("trial", "family", "state", "rung", "rounds", $"OOF {metric.Name}", "fold ±", "proposer", "parent", "machine/slot", "seconds", "parameters");
+        var table = new Table().Border(TableBorder.Simple)
+            .AddColumns("trial", "family", "state", "rung", "rounds", $"OOF {metric.Name}", "fold sd", "from", "machine/slot", "secs");
+        if (wide)
+        {
+            table.AddColumn("parameters");
+        }
+
         foreach (var t in trials)
         {
-            table.AddRow(
+            var cells = new List<string>
+            {
                 t.Id.ToString(),
                 t.Family,
                 t.State.ToString().ToLowerInvariant(),
@@ -23,11 +30,16 @@ public static class TrialTable
                 t.Budget.ToString(),
                 t.Score?.ToString("F5") ?? "",
                 t.FoldScores.Length > 1 ? BlendView.Spread(t.FoldScores).ToString("F4") : "",
-                t.Proposer,
-                t.ParentId?.ToString() ?? "",
-                t.Worker is null ? "" : $"{t.Worker}/{t.Slot}",
+                t.ParentId is { } parent ? $"{t.Proposer} of {parent}" : t.Proposer,
+                Markup.Escape(t.Worker is null ? "" : $"{t.Worker}/{t.Slot}"),
                 t.Duration?.TotalSeconds.ToString("F1") ?? "",
-                Markup.Escape(t.Parameters.Describe(spaces.GetValueOrDefault(t.Family))));
+            };
+            if (wide)
+            {
+                cells.Add(Markup.Escape(t.Parameters.Describe(spaces.GetValueOrDefault(t.Family))));
+            }
+
+            table.AddRow([.. cells]);
         }
 
         console.Write(table);
