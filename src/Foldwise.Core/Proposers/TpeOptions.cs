@@ -2,7 +2,7 @@ namespace Foldwise.Core.Proposers;
 
 /// <summary>
 /// Settings of the TPE proposer. Defaults: γ = 0.25 of the results count as good; 24 candidates drawn from the
-/// good density; random proposals until a budget has max(10, 2·dims) results; the model sees at most the 256
+/// good density; random proposals until a budget has max(10, 2·dims) results; the model sees at most the 128
 /// most recent results at its budget; prior weight 1.
 /// </summary>
 /// <param name="Gamma">Fraction of results (best first) that make up the good density l(x).</param>
@@ -14,7 +14,7 @@ public sealed record TpeOptions(
     double Gamma = 0.25,
     int Candidates = 24,
     int? StartupResults = null,
-    int Window = 256,
+    int Window = 128,
     double PriorWeight = 1.0)
 {
     public int StartupFor(int dimensions) => StartupResults ?? Math.Max(10, 2 * dimensions);
