@@ -3,8 +3,8 @@ namespace Foldwise.Core.Proposers;
 /// <summary>
 /// A one-dimensional Parzen density on [low, high]: one Gaussian kernel per point, truncated to the interval and
 /// renormalised, plus a prior kernel at the midpoint as wide as the interval. Each point's bandwidth is the
-/// larger distance to its left and right neighbours, clipped to [(high − low)/min(100, 1 + n), high − low]
-/// (Bergstra et al., NeurIPS 2011, §4: "the greater of the distances to the left and right neighbor, but clipped").
+/// larger distance to its left and right neighbours (Bergstra et al., NeurIPS 2011, §4, from memory: "clipped to
+/// remain in a reasonable range"), clipped here to [(high − low)/min(100, 1 + n), high − low] (common practice).
 /// </summary>
 internal sealed class ParzenEstimator : IUnivariateDensity
 {
