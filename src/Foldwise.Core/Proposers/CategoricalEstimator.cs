@@ -2,8 +2,8 @@ namespace Foldwise.Core.Proposers;
 
 /// <summary>
 /// A distribution over a choice's indices: observed counts plus a pseudo-count of the prior weight for every
-/// choice, so an unseen choice keeps some probability (Bergstra et al., NeurIPS 2011, §4: categorical counts
-/// re-weighted with a prior).
+/// choice, so an unseen choice keeps some probability (Bergstra et al., NeurIPS 2011, §4, from memory: counts
+/// re-weighted with the prior). A prior weight of 0 gives plain counts (for the liars' distribution).
 /// </summary>
 internal sealed class CategoricalEstimator : IUnivariateDensity
 {

@@ -1,3 +1,4 @@
+using System.Collections.ObjectModel;
 using Foldwise.Core.Search;
 using Foldwise.Core.Spaces;
 
@@ -13,11 +14,13 @@ public sealed class FamilyHistory
     private readonly TrialTracker _tracker = new();
     private readonly SortedList<int, List<Observation>> _results = [];
     private readonly SortedDictionary<int, double[]> _pending = [];
+    private readonly ReadOnlyCollection<int> _budgets;
 
     public FamilyHistory(string family, ParameterSpace space)
     {
         Family = family;
         Space = space;
+        _budgets = new ReadOnlyCollection<int>(_results.Keys);
     }
 
     public string Family { get; }
@@ -28,7 +31,7 @@ public sealed class FamilyHistory
     public int NewCandidates { get; private set; }
 
     /// <summary>Budgets that have at least one result, ascending.</summary>
-    public IList<int> Budgets => _results.Keys;
+    public IReadOnlyList<int> Budgets => _budgets;
 
     /// <summary>Values of new candidates not yet finished, by trial id.</summary>
     public IReadOnlyCollection<double[]> Pending => _pending.Values;

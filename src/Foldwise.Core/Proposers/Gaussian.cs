@@ -6,11 +6,16 @@ internal static class Gaussian
     public static readonly double InverseSqrtTwoPi = 1.0 / Math.Sqrt(2 * Math.PI);
 
     /// <summary>Φ(z), through the complementary error function.</summary>
-    public static double Cdf(double z) => 0.5 * Erfc(-z / Math.Sqrt(2));
+    public static double Cdf(double z) => z switch
+    {
+        < -9 => 0, // Φ(−9) ≈ 1e-19
+        > 9 => 1,
+        _ => 0.5 * Erfc(-z / Math.Sqrt(2)),
+    };
 
     /// <summary>
-    /// erfc by the Chebyshev-fitted form of Press et al., Numerical Recipes (2nd ed., §6.2, erfcc),
-    /// fractional error below 1.2e-7 everywhere — ample for kernel normalisation.
+    /// erfc by the Chebyshev-fitted form of Press et al., Numerical Recipes (2nd ed., §6.2, erfcc; coefficients from
+    /// memory, checked against Abramowitz &amp; Stegun's table in GaussianTests), fractional error below 1.2e-7.
     /// </summary>
     public static double Erfc(double x)
     {

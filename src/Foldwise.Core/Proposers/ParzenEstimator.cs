@@ -3,8 +3,8 @@ namespace Foldwise.Core.Proposers;
 /// <summary>
 /// A one-dimensional Parzen density on [low, high]: one Gaussian kernel per point, truncated to the interval and
 /// renormalised, plus a prior kernel at the midpoint as wide as the interval. Each point's bandwidth is the
-/// larger distance to its left and right neighbours, clipped to [(high − low)/min(100, 1 + n), high − low]
-/// (Bergstra et al., NeurIPS 2011, §4: "the greater of the distances to the left and right neighbor, but clipped").
+/// larger distance to its left and right neighbours (Bergstra et al., NeurIPS 2011, §4, from memory: "clipped to
+/// remain in a reasonable range"), clipped here to [(high − low)/min(100, 1 + n), high − low] (common practice).
 /// </summary>
 internal sealed class ParzenEstimator : IUnivariateDensity
 {
@@ -42,33 +42,35 @@ internal sealed class ParzenEstimator : IUnivariateDensity
 
     public int Kernels => _means.Length;
 
+    /// <summary>Fits kernels on the points; a prior weight of 0 leaves the prior kernel out (for the liars' density).</summary>
     public static ParzenEstimator Fit(ReadOnlySpan<double> points, double low, double high, double priorWeight)
     {
+        bool prior = priorWeight > 0;
         int n = points.Length;
+        int kernels = n + (prior ? 1 : 0);
         double width = high - low;
-        var means = new double[n + 1];
-        var weights = new double[n + 1];
+        var means = new double[kernels];
+        var weights = new double[kernels];
         points.CopyTo(means);
-        means[n] = low + (width / 2);
-        for (int i = 0; i < n; i++)
+        Array.Fill(weights, 1.0, 0, n);
+        if (prior)
         {
-            weights[i] = 1.0;
+            means[n] = low + (width / 2);
+            weights[n] = priorWeight;
         }
 
-        weights[n] = priorWeight;
-
         // Sort kernels by mean (the prior among them, as a neighbour) to find each point's neighbours.
-        var order = new int[n + 1];
-        for (int i = 0; i <= n; i++)
+        var order = new int[kernels];
+        for (int i = 0; i < kernels; i++)
         {
             order[i] = i;
         }
 
         var keys = (double[])means.Clone();
         Array.Sort(keys, order);
-        var sigmas = new double[n + 1];
+        var sigmas = new double[kernels];
         double minSigma = width / Math.Min(100.0, 1.0 + n);
-        for (int k = 0; k <= n; k++)
+        for (int k = 0; k < kernels; k++)
         {
             int i = order[k];
             if (i == n)
@@ -78,7 +80,7 @@ internal sealed class ParzenEstimator : IUnivariateDensity
             }
 
             double left = k > 0 ? keys[k - 1] : low;
-            double right = k < n ? keys[k + 1] : high;
+            double right = k < kernels - 1 ? keys[k + 1] : high;
             double sigma = Math.Max(keys[k] - left, right - keys[k]);
             sigmas[i] = Math.Clamp(sigma, minSigma, width);
         }
@@ -91,8 +93,13 @@ internal sealed class ParzenEstimator : IUnivariateDensity
         double sum = 0;
         for (int i = 0; i < _means.Length; i++)
         {
+            // Kernels more than √32 ≈ 5.7σ away add under e^-16 ≈ 1e-7 of their peak: skipping their exp keeps a decision cheap
+            // when hundreds of narrow kernels sit far from x.
             double z = (x - _means[i]) * _inverseSigmas[i];
-            sum += _scales[i] * Math.Exp(-0.5 * z * z);
+            if (z * z < 32)
+            {
+                sum += _scales[i] * Math.Exp(-0.5 * z * z);
+            }
         }
 
         return sum;

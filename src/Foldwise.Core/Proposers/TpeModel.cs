@@ -1,63 +1,72 @@
 namespace Foldwise.Core.Proposers;
 
 /// <summary>
-/// The good density l and the rest density g of every modelled parameter, fitted once per proposal.
-/// Results are ordered by (score, trial id) so ties split the same way on every replay.
+/// The good density l and the rest density g of every modelled parameter, fitted on one window of results and
+/// reused until that window changes. Results are ordered by (score, trial id) so ties split the same way on every
+/// replay. Candidates still running (the liars) change with every decision, so they get a density of their own,
+/// mixed into g by count: g = (n_rest·g_rest + n_liars·g_liars) / (n_rest + n_liars).
 /// </summary>
 internal sealed class TpeModel
 {
     private readonly TpeDimension[] _dimensions;
     private readonly IUnivariateDensity[] _good;
     private readonly IUnivariateDensity[] _rest;
+    private readonly int _restCount;
 
-    private TpeModel(TpeDimension[] dimensions, IUnivariateDensity[] good, IUnivariateDensity[] rest)
+    private TpeModel(int budget, int results, TpeDimension[] dimensions, IUnivariateDensity[] good, IUnivariateDensity[] rest, int restCount)
     {
+        Budget = budget;
+        Results = results;
         _dimensions = dimensions;
         _good = good;
         _rest = rest;
+        _restCount = restCount;
     }
 
-    public static TpeModel Fit(TpeDimension[] dimensions, List<Observation> results, IReadOnlyCollection<double[]> pending, TpeOptions options)
-    {
-        results.Sort(static (a, b) => a.Score != b.Score ? a.Score.CompareTo(b.Score) : a.TrialId.CompareTo(b.TrialId));
-        int n = results.Count;
+    /// <summary>The budget fitted on, and how many results it had then: together they identify the window.</summary>
+    public int Budget { get; }
 
-        // The quantile is taken over real results only; liars join the rest (they carry the worst score).
+    public int Results { get; }
+
+    public static TpeModel Fit(int budget, int results, TpeDimension[] dimensions, List<Observation> window, TpeOptions options)
+    {
+        window.Sort(static (a, b) => a.Score != b.Score ? a.Score.CompareTo(b.Score) : a.TrialId.CompareTo(b.TrialId));
+        int n = window.Count;
+
+        // The quantile is taken over real results only; liars always join the rest (they carry the worst score).
         int goodCount = Math.Clamp((int)Math.Ceiling(options.Gamma * n), 1, n - 1);
-        int restCount = n - goodCount + pending.Count;
         var good = new IUnivariateDensity[dimensions.Length];
         var rest = new IUnivariateDensity[dimensions.Length];
         var goodValues = new double[goodCount];
-        var restValues = new double[restCount];
+        var restValues = new double[n - goodCount];
         for (int d = 0; d < dimensions.Length; d++)
         {
             var dim = dimensions[d];
-            for (int i = 0; i < goodCount; i++)
+            for (int i = 0; i < n; i++)
             {
-                goodValues[i] = dim.ToModel(results[i].Values[dim.Index]);
-            }
-
-            int r = 0;
-            for (int i = goodCount; i < n; i++)
-            {
-                restValues[r++] = dim.ToModel(results[i].Values[dim.Index]);
-            }
-
-            foreach (var liar in pending)
-            {
-                restValues[r++] = dim.ToModel(liar[dim.Index]);
+                double value = dim.ToModel(window[i].Values[dim.Index]);
+                if (i < goodCount)
+                {
+                    goodValues[i] = value;
+                }
+                else
+                {
+                    restValues[i - goodCount] = value;
+                }
             }
 
             good[d] = Estimate(dim, goodValues, options.PriorWeight);
             rest[d] = Estimate(dim, restValues, options.PriorWeight);
         }
 
-        return new TpeModel(dimensions, good, rest);
+        return new TpeModel(budget, results, dimensions, good, rest, n - goodCount);
     }
 
     /// <summary>Draws candidates from l and returns the one (in model coordinates) with the largest Σ log l − log g.</summary>
-    public double[] BestCandidate(Random random, int candidates)
+    public double[] BestCandidate(Random random, int candidates, IReadOnlyCollection<double[]> pending)
     {
+        var liars = pending.Count == 0 ? null : FitLiars(pending);
+        double restShare = _restCount / (double)(_restCount + pending.Count);
         double[] best = new double[_dimensions.Length];
         double[] draw = new double[_dimensions.Length];
         double bestScore = double.NegativeInfinity;
@@ -75,7 +84,13 @@ internal sealed class TpeModel
                 }
 
                 draw[d] = x;
-                score += Math.Log(_good[d].Density(x)) - Math.Log(_rest[d].Density(x));
+                double g = _rest[d].Density(x);
+                if (liars is not null)
+                {
+                    g = (restShare * g) + ((1 - restShare) * liars[d].Density(x));
+                }
+
+                score += Math.Log(_good[d].Density(x)) - Math.Log(g);
             }
 
             if (score > bestScore)
@@ -86,6 +101,25 @@ internal sealed class TpeModel
         }
 
         return best;
+    }
+
+    private IUnivariateDensity[] FitLiars(IReadOnlyCollection<double[]> pending)
+    {
+        var liars = new IUnivariateDensity[_dimensions.Length];
+        var values = new double[pending.Count];
+        for (int d = 0; d < _dimensions.Length; d++)
+        {
+            var dim = _dimensions[d];
+            int i = 0;
+            foreach (var point in pending)
+            {
+                values[i++] = dim.ToModel(point[dim.Index]);
+            }
+
+            liars[d] = Estimate(dim, values, priorWeight: 0);
+        }
+
+        return liars;
     }
 
     private static IUnivariateDensity Estimate(TpeDimension dim, double[] values, double priorWeight) => dim.IsChoice

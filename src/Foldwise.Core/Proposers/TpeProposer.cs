@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using Foldwise.Core.Spaces;
 
 namespace Foldwise.Core.Proposers;
@@ -8,13 +9,17 @@ namespace Foldwise.Core.Proposers;
 /// γ-quantile into good and the rest, counts unfinished new candidates among the rest at the worst observed score
 /// (constant liar, Ginsbourger et al. 2010) so parallel proposals spread out, draws candidates from the good density
 /// l(x) and proposes the one with the largest l(x)/g(x). Parameters are modelled independently, as in the paper.
-/// Until some budget has enough results it proposes at random and says so.
+/// Until some budget has enough results it proposes at random and says so. A family's fitted densities are kept
+/// until a result arrives at the budget they were fitted on; only the liars' density is fitted per proposal.
 /// </summary>
 public sealed class TpeProposer : IProposer
 {
     public const string ProposerName = "tpe";
 
     private readonly TpeOptions _options;
+
+    // Fitted models by family history; weak keys, so a history that is dropped takes its model with it.
+    private readonly ConditionalWeakTable<FamilyHistory, TpeModel> _models = [];
 
     public TpeProposer(TpeOptions? options = null)
     {
@@ -29,38 +34,49 @@ public sealed class TpeProposer : IProposer
         var space = history.Space;
         var dimensions = Dimensions(space);
         int startup = _options.StartupFor(dimensions.Length);
-        var results = dimensions.Length == 0 ? null : ResultsToFit(history, startup);
-        if (results is null)
+        int budget = dimensions.Length == 0 ? -1 : BudgetToFit(history, startup);
+        if (budget < 0)
         {
             return new Proposal(RandomProposer.Draw(space, random), RandomProposer.ProposerName);
         }
 
-        var model = TpeModel.Fit(dimensions, results, history.Pending, _options);
-        double[] best = model.BestCandidate(random, _options.Candidates);
+        int results = history.ResultsAt(budget).Count;
+        if (!_models.TryGetValue(history, out var model) || model.Budget != budget || model.Results != results)
+        {
+            model = TpeModel.Fit(budget, results, dimensions, Window(history.ResultsAt(budget), startup), _options);
+            _models.AddOrUpdate(history, model);
+        }
+
+        double[] best = model.BestCandidate(random, _options.Candidates, history.Pending);
         return new Proposal(Assemble(space, dimensions, best), ProposerName);
     }
 
-    /// <summary>The most recent results of the highest budget that has at least <paramref name="startup"/> of them.</summary>
-    private List<Observation>? ResultsToFit(FamilyHistory history, int startup)
+    /// <summary>The highest budget with at least <paramref name="startup"/> results, or −1.</summary>
+    private static int BudgetToFit(FamilyHistory history, int startup)
     {
         var budgets = history.Budgets;
         for (int b = budgets.Count - 1; b >= 0; b--)
         {
-            var all = history.ResultsAt(budgets[b]);
-            if (all.Count >= startup)
+            if (history.ResultsAt(budgets[b]).Count >= startup)
             {
-                int take = Math.Min(all.Count, Math.Max(_options.Window, startup));
-                var window = new List<Observation>(take);
-                for (int i = all.Count - take; i < all.Count; i++)
-                {
-                    window.Add(all[i]);
-                }
-
-                return window;
+                return budgets[b];
             }
         }
 
-        return null;
+        return -1;
+    }
+
+    /// <summary>The most recent results the model is fitted on (a copy, which the model sorts).</summary>
+    private List<Observation> Window(IReadOnlyList<Observation> all, int startup)
+    {
+        int take = Math.Min(all.Count, Math.Max(_options.Window, startup));
+        var window = new List<Observation>(take);
+        for (int i = all.Count - take; i < all.Count; i++)
+        {
+            window.Add(all[i]);
+        }
+
+        return window;
     }
 
     private static TpeDimension[] Dimensions(ParameterSpace space)
