@@ -157,7 +157,7 @@ public sealed class ColumnScreenTests
         var report = ColumnScreen.Screen(train, new ScreeningOptions());
         watch.Stop();
 
-        // Then the copies are found and it takes well under a second (common practice bound for this size)
+        // Then the copies are found and it takes well under a second (a generous bound for one hash and a few compares per column)
         Assert.Equal(500, report.Count(DropReason.Duplicate));
         Assert.True(watch.Elapsed < TimeSpan.FromSeconds(1), $"screening took {watch.Elapsed}");
     }
