@@ -20,6 +20,11 @@ public static class CsvTableReader
     {
         ArgumentException.ThrowIfNullOrEmpty(targetColumn);
         ArgumentNullException.ThrowIfNull(metric);
+        if (string.Equals(idColumn, targetColumn, StringComparison.Ordinal))
+        {
+            throw new ArgumentException($"the id and target columns must differ, not both '{idColumn}'", nameof(targetColumn));
+        }
+
         return TableLoader.Load(path, idColumn, targetColumn, TargetUse.Required, metric);
     }
 

@@ -117,4 +117,12 @@ public sealed class CsvTableReaderTests
         Assert.Equal(20_000, table.FeatureCount);
         Assert.Equal(10_000, table.Columns.Sum(c => c.NonZeroCount));
     }
+
+    [Fact]
+    public void Refuses_one_column_as_both_id_and_target()
+    {
+        using var csv = new TempCsv("id,a\nr1,1\n");
+
+        Assert.Throws<ArgumentException>(() => CsvTableReader.ReadTraining(csv.Path, "id", "id", Metric.Rmse));
+    }
 }
