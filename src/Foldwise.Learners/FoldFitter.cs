@@ -31,7 +31,7 @@ internal static class FoldFitter
     /// <summary>Refuses a job before any training: the coordinator's values are checked, never trusted.</summary>
     internal static void Check(string family, FoldJob job)
     {
-        var problems = new List<string>(DefaultSpaces.For(family).Problems(job.Parameters));
+        var problems = new List<string>(ParameterChecks.Problems(family, job.Parameters));
         if (job.Budget < 1)
         {
             problems.Add($"budget {job.Budget} is below 1 round");

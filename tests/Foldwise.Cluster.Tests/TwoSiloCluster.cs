@@ -1,3 +1,4 @@
+using Foldwise.Cluster.Coordination;
 using Foldwise.Cluster.Hosting;
 using Foldwise.Cluster.Workers;
 using Foldwise.Core.Spaces;
@@ -19,16 +20,19 @@ public sealed class TwoSiloCluster : IAsyncLifetime
 
     public string CacheDirectory { get; } = Path.Combine(Path.GetTempPath(), "foldwise-cluster-tests", Guid.NewGuid().ToString("N"));
 
-    public IServiceProvider Coordinator => Cluster.Silos[0].ServiceProvider;
+    private int configured;
 
-    public IServiceProvider Worker => Cluster.Silos[1].ServiceProvider;
+    public IServiceProvider Coordinator => Cluster.Silos.Single(s => s.ServiceProvider.GetService<SessionRegistry>() is not null).ServiceProvider;
+
+    public IServiceProvider Worker => Cluster.Silos.Single(s => s.ServiceProvider.GetService<SessionRegistry>() is null).ServiceProvider;
 
     public async Task InitializeAsync()
     {
         var builder = new InProcessTestClusterBuilder(2);
         builder.ConfigureSiloHost((options, host) =>
         {
-            bool primary = options.SiloName == "Primary";
+            // The first silo configured is the cluster's primary: it plays the coordinator.
+            bool primary = Interlocked.Increment(ref configured) == 1;
             var worker = new WorkerOptions
             {
                 Name = primary ? "coordinator" : "worker",

@@ -175,6 +175,6 @@ public sealed class BlendStageTests
     private static BlendInput Input(double[][] columns, double[] y, int folds, Metric metric, BlendMode mode = BlendMode.Simplex) =>
         Input(columns, y, BlendFakes.RoundRobin(y.Length, folds), metric, mode);
 
-    private static BlendInput Input(double[][] columns, double[] y, Folds.FoldPlan plan, Metric metric, BlendMode mode = BlendMode.Simplex) =>
+    private static BlendInput Input(double[][] columns, double[] y, global::Foldwise.Core.Folds.FoldPlan plan, Metric metric, BlendMode mode = BlendMode.Simplex) =>
         new(new BlendOptions(mode), [.. columns.Select((c, j) => new BlendCandidate(100 + j, j % 2 == 0 ? "lightgbm" : "fasttree", c))], y, plan, metric);
 }

@@ -1,0 +1,80 @@
+using System.Globalization;
+using System.Text.Json;
+
+namespace Foldwise.Cli.Tests;
+
+public sealed class RunCommandTests : IDisposable
+{
+    private readonly Workspace workspace = new();
+
+    public void Dispose() => workspace.Dispose();
+
+    [Fact]
+    public void Runs_a_search_to_a_prediction_file_and_history_shows_both_families()
+    {
+        // Given small tables and a definition with both families
+        workspace.WriteTables();
+        string definition = workspace.WriteDefinition(trials: 10);
+
+        // When the search runs
+        var run = CliHarness.Run("run", definition, "--out", workspace.Out);
+
+        // Then it screens, reports progress, blends and writes one finite, non-negative prediction per test id, in test order
+        Assert.True(run.ExitCode == 0, run.Output);
+        Assert.Contains("Screening kept 3 of 5 columns: dropped 1 constant, 1 duplicate", run.Output);
+        Assert.Contains("Search stopped (trial budget reached): 10 done", run.Output);
+        Assert.Contains("nested estimate", run.Output);
+        var lines = File.ReadAllLines(Path.Combine(workspace.Out, "predictions.csv"));
+        Assert.Equal("id,y", lines[0]);
+        Assert.Equal(Enumerable.Range(0, 20).Select(r => $"b{r}"), lines.Skip(1).Select(l => l.Split(',')[0]));
+        Assert.All(lines.Skip(1), l =>
+        {
+            double p = double.Parse(l.Split(',')[1], CultureInfo.InvariantCulture);
+            Assert.True(double.IsFinite(p) && p >= 0, l);
+        });
+
+        // And history lists the trials of both families with their OOF scores, as a table and as JSON
+        var history = CliHarness.Run("history", Path.Combine(workspace.Out, "search.db"));
+        Assert.Equal(0, history.ExitCode);
+        Assert.Contains("lightgbm", history.Output);
+        Assert.Contains("fasttree", history.Output);
+        Assert.Contains("OOF RMSLE", history.Output);
+        Assert.Contains("10 trial(s): 10 done", history.Output);
+
+        var json = CliHarness.Run("history", workspace.Out, "--json");
+        using var document = JsonDocument.Parse(json.Output);
+        var trials = document.RootElement.EnumerateArray().ToList();
+        Assert.Equal(10, trials.Count);
+        Assert.Equal(10, trials.Select(t => t.GetProperty("id").GetInt32()).Distinct().Count());
+        Assert.All(trials, t => Assert.Equal("done", t.GetProperty("state").GetString()));
+        Assert.All(trials, t => Assert.True(t.GetProperty("score").GetDouble() > 0));
+        Assert.Equal(["fasttree", "lightgbm"], trials.Select(t => t.GetProperty("family").GetString()).Distinct().Order());
+    }
+
+    [Fact]
+    public void Refuses_to_start_over_a_stored_search()
+    {
+        workspace.WriteTables();
+        string definition = workspace.WriteDefinition(trials: 2);
+        Directory.CreateDirectory(workspace.Out);
+        File.WriteAllText(Path.Combine(workspace.Out, "search.db"), "");
+
+        var run = CliHarness.Run("run", definition, "--out", workspace.Out);
+
+        Assert.Equal(1, run.ExitCode);
+        Assert.Contains("a search is already stored here; continue it with 'foldwise resume'", run.Output);
+    }
+
+    [Fact]
+    public void Flags_stand_in_for_a_definition_file()
+    {
+        workspace.WriteTables();
+
+        var run = CliHarness.Run(
+            "run", "--train", workspace.PathOf("train.csv"), "--test", workspace.PathOf("test.csv"), "--id", "id", "--target", "y",
+            "--trials", "2", "--out", workspace.Out);
+
+        Assert.True(run.ExitCode == 0, run.Output);
+        Assert.True(File.Exists(Path.Combine(workspace.Out, "predictions.csv")));
+    }
+}
