@@ -19,6 +19,12 @@ public static class FoldwiseApp
         config.AddCommand<HistoryCommand>("history")
             .WithDescription("List a search's trials, best first (works while the search runs).")
             .WithExample("history", "runs/demo/search.db");
+        config.AddCommand<BlendCommand>("blend")
+            .WithDescription("Solve the blend again from the stored out-of-fold predictions, store it, and rewrite the prediction file.")
+            .WithExample("blend", "runs/demo/search.db", "--mode", "nonneg", "--pool", "5");
+        config.AddCommand<ExportCommand>("export")
+            .WithDescription("Write every full-budget trial's out-of-fold predictions (original scale) to a CSV file.")
+            .WithExample("export", "runs/demo/search.db", "--oof", "runs/demo/oof.csv");
         config.AddCommand<PlanCommand>("plan")
             .WithDescription("Print the rung and bracket plan for a budget range, to size a search before running it.")
             .WithExample("plan", "--min-budget", "1", "--max-budget", "81", "--eta", "3");

@@ -1,0 +1,45 @@
+using System.ComponentModel;
+using Foldwise.Core.Definition;
+using Spectre.Console;
+using Spectre.Console.Cli;
+
+namespace Foldwise.Cli.Commands;
+
+/// <summary>Options of <c>foldwise blend</c>.</summary>
+public sealed class BlendSettings : CommandSettings
+{
+    [CommandArgument(0, "<STORE>")]
+    [Description("The search's store (OUT/search.db), or its folder.")]
+    public string Store { get; init; } = "";
+
+    [CommandOption("--mode <MODE>")]
+    [Description("simplex (w ≥ 0, Σw = 1; the default), nonneg (w ≥ 0 only) or greedy (forward selection with replacement).")]
+    public string? Mode { get; init; }
+
+    [CommandOption("--pool <K>")]
+    [Description("Blend the best K full-budget trials of each family. Default: the definition's (3).")]
+    public int? Pool { get; init; }
+
+    [CommandOption("--json")]
+    [Description("Print the blend as JSON.")]
+    public bool Json { get; init; }
+
+    public BlendMode? ParsedMode => Mode?.ToLowerInvariant() switch
+    {
+        null => null,
+        "simplex" => BlendMode.Simplex,
+        "nonneg" => BlendMode.NonNegative,
+        "greedy" => BlendMode.Greedy,
+        _ => throw new InvalidOperationException("unreachable: validated"),
+    };
+
+    public override ValidationResult Validate()
+    {
+        if (Mode is { } m && m.ToLowerInvariant() is not ("simplex" or "nonneg" or "greedy"))
+        {
+            return ValidationResult.Error($"--mode '{m}' is not one of simplex, nonneg, greedy");
+        }
+
+        return Pool is < 1 ? ValidationResult.Error("--pool must be at least 1") : ValidationResult.Success();
+    }
+}

@@ -1,0 +1,77 @@
+using System.Globalization;
+using System.Text.Json;
+
+namespace Foldwise.Cli.Tests;
+
+public sealed class BlendCommandTests(FinishedSearch search) : IClassFixture<FinishedSearch>
+{
+    [Theory]
+    [InlineData("simplex")]
+    [InlineData("nonneg")]
+    [InlineData("greedy")]
+    public void Lists_each_pool_member_with_its_trial_and_weight_as_json(string mode)
+    {
+        var blend = CliHarness.Run("blend", search.Store, "--mode", mode, "--pool", "2", "--json");
+
+        Assert.True(blend.ExitCode == 0, blend.Output);
+        using var json = JsonDocument.Parse(blend.Output);
+        var members = json.RootElement.GetProperty("members").EnumerateArray().ToList();
+        Assert.NotEmpty(members);
+        Assert.True(members.Count <= 4, "two per family at most");
+        Assert.All(members, m => Assert.True(m.GetProperty("trial").GetInt32() > 0));
+        Assert.All(members, m => Assert.InRange(m.GetProperty("weight").GetDouble(), 0, double.MaxValue));
+        double sum = members.Sum(m => m.GetProperty("weight").GetDouble());
+        if (mode != "nonneg")
+        {
+            Assert.Equal(1, sum, 9);
+        }
+
+        // The blend is never worse in sample than the best single trial it could have chosen alone
+        Assert.True(json.RootElement.GetProperty("in_sample_score").GetDouble() <= json.RootElement.GetProperty("best_single_score").GetDouble() + 1e-12);
+        Assert.Equal(3, json.RootElement.GetProperty("nested_fold_scores").GetArrayLength());
+    }
+
+    [Fact]
+    public void Prints_the_chosen_trials_weights_and_both_estimates_for_a_person()
+    {
+        var blend = CliHarness.Run("blend", search.Workspace.Out);
+
+        Assert.True(blend.ExitCode == 0, blend.Output);
+        Assert.Contains("Blend (Simplex)", blend.Output);
+        Assert.Contains("weight", blend.Output);
+        Assert.Contains("in-sample", blend.Output);
+        Assert.Contains("nested estimate", blend.Output);
+        Assert.Contains("best single trial", blend.Output);
+        Assert.Contains("predictions.csv: 15 predictions", blend.Output);
+    }
+
+    [Fact]
+    public void Export_writes_each_full_budget_trials_out_of_fold_predictions_whose_score_matches_the_history()
+    {
+        string file = Path.Combine(search.Workspace.Root, "oof.csv");
+
+        var export = CliHarness.Run("export", search.Store, "--oof", file);
+        var history = JsonDocument.Parse(CliHarness.Run("history", search.Store, "--json").Output);
+
+        Assert.True(export.ExitCode == 0, export.Output);
+        var lines = File.ReadAllLines(file);
+        var header = lines[0].Split(',');
+        Assert.Equal(["id", "y"], header.Take(2));
+        Assert.Equal(91, lines.Length);
+        Assert.True(header.Length > 2, "at least one trial reached the full budget");
+
+        // Recompute RMSLE from the exported file (original scale) and compare with the stored OOF score
+        int trialId = int.Parse(header[2]["trial_".Length..], CultureInfo.InvariantCulture);
+        double sum = 0;
+        foreach (var row in lines.Skip(1).Select(l => l.Split(',')))
+        {
+            double actual = double.Parse(row[1], CultureInfo.InvariantCulture);
+            double predicted = double.Parse(row[2], CultureInfo.InvariantCulture);
+            double e = Math.Log(1 + actual) - Math.Log(1 + predicted);
+            sum += e * e;
+        }
+
+        double stored = history.RootElement.EnumerateArray().Single(t => t.GetProperty("id").GetInt32() == trialId).GetProperty("score").GetDouble();
+        Assert.Equal(stored, Math.Sqrt(sum / 90), 9);
+    }
+}
