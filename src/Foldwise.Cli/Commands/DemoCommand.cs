@@ -20,6 +20,10 @@ public sealed class DemoCommand(IAnsiConsole console) : AsyncCommand<DemoSetting
         string definitionPath = Path.Combine(settings.Out, "search.json");
         File.WriteAllText(definitionPath, DefinitionWriter.Write(DemoDefinition.For(settings.Quick, settings.Seed)));
         console.MarkupLine($"  train.csv {train.RowCount:N0} × {train.FeatureCount:N0}, test.csv {test.RowCount:N0} rows, search.json");
+        if (settings.DataOnly)
+        {
+            return ExitCodes.Ok;
+        }
 
         var definition = DefinitionReader.Read(definitionPath);
         return await new SearchRun(console).RunNewAsync(definition, settings.Out, settings.Slots, settings.Threads, cancellationToken);

@@ -15,6 +15,10 @@ public sealed class DemoSettings : SearchHostSettings
     [Description("A small table and few trials: the whole run takes a minute or two on 2 cores.")]
     public bool Quick { get; init; }
 
+    [CommandOption("--data-only")]
+    [Description("Only write the tables and search.json (e.g. for configs/demo.json); run nothing.")]
+    public bool DataOnly { get; init; }
+
     [CommandOption("--seed <N>")]
     [Description("Seed of the invented data and of the search. Default 7.")]
     public int Seed { get; init; } = 7;

@@ -16,10 +16,10 @@ public sealed class DefinitionReaderTests
         // When it is read
         var d = DefinitionReader.Read(path);
 
-        // Then every key the demo sets is there, and the data paths sit beside the file
+        // Then every key the demo sets is there, and the data paths resolve from the file's folder to where `demo --data-only` writes
         Assert.Equal("freight-demo", d.Name);
-        Assert.Equal(Path.Combine(folder, "train.csv"), d.Data.Train);
-        Assert.Equal(Path.Combine(folder, "test.csv"), d.Data.Test);
+        Assert.Equal(Path.GetFullPath(Path.Combine(folder, "..", "runs", "demo-data", "train.csv")), d.Data.Train);
+        Assert.Equal(Path.GetFullPath(Path.Combine(folder, "..", "runs", "demo-data", "test.csv")), d.Data.Test);
         Assert.Equal(("shipper_id", "q1_spend"), (d.Data.IdColumn, d.Data.TargetColumn));
         Assert.Equal(MetricKind.Rmsle, d.Metric);
         Assert.Equal([FamilyNames.LightGbm, FamilyNames.FastTree], d.Families.Select(f => f.Family));
