@@ -21,8 +21,18 @@ public sealed class TableCache(IGrainFactory grains, WorkerOptions options)
     public void Seed(string hash, FeatureTable table) =>
         tables[hash] = new Lazy<Task<FeatureTable>>(Task.FromResult(table));
 
-    public Task<FeatureTable> GetAsync(string hash, CancellationToken cancellation) =>
-        tables.GetOrAdd(hash, h => new Lazy<Task<FeatureTable>>(() => LoadAsync(h, cancellation))).Value;
+    public Task<FeatureTable> GetAsync(string hash, CancellationToken cancellation)
+    {
+        var entry = tables.GetOrAdd(hash, h => new Lazy<Task<FeatureTable>>(() => LoadAsync(h, CancellationToken.None)));
+        if (entry.Value.IsFaulted || entry.Value.IsCanceled)
+        {
+            // A failed fetch is not remembered: the next trial fetches again.
+            tables.TryRemove(new KeyValuePair<string, Lazy<Task<FeatureTable>>>(hash, entry));
+        }
+
+        // The shared load is not cancelled by one caller; each caller stops waiting on its own token.
+        return entry.Value.WaitAsync(cancellation);
+    }
 
     private async Task<FeatureTable> LoadAsync(string hash, CancellationToken cancellation)
     {

@@ -13,14 +13,14 @@ public sealed class TrialDataCache(IGrainFactory grains, TableCache tables)
 
     public Task<TrialData> GetAsync(string searchId, CancellationToken cancellation)
     {
-        var entry = searches.GetOrAdd(searchId, id => new Lazy<Task<TrialData>>(() => BuildAsync(id, cancellation)));
+        var entry = searches.GetOrAdd(searchId, id => new Lazy<Task<TrialData>>(() => BuildAsync(id, CancellationToken.None)));
         if (entry.Value.IsFaulted || entry.Value.IsCanceled)
         {
             // A failed fetch is not cached: the next trial tries again.
             searches.TryRemove(new KeyValuePair<string, Lazy<Task<TrialData>>>(searchId, entry));
         }
 
-        return entry.Value;
+        return entry.Value.WaitAsync(cancellation);
     }
 
     private async Task<TrialData> BuildAsync(string searchId, CancellationToken cancellation)
