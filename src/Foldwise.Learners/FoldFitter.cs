@@ -18,13 +18,18 @@ internal static class FoldFitter
         cancellation.ThrowIfCancellationRequested();
         var ml = new MLContext(job.Seed);
         var data = job.Data;
-        var trainView = SparseViews.Rows(ml, data.Train, job.TrainRows, data.Target);
+
+        // Trees fit the target less its training mean: FastTree boosts from zero, so on a log1p target (mean ~8)
+        // a low-budget rung would otherwise be scored on how far it got from zero, not on what it learned.
+        double offset = job.TrainRows.Average(r => data.Target[r]);
+        var centred = Array.ConvertAll(data.Target, y => y - offset);
+        var trainView = SparseViews.Rows(ml, data.Train, job.TrainRows, centred);
 
         // ML.NET 5's public API offers no way to interrupt a fit, so cancellation is honoured around it.
         var model = train(ml, trainView);
         cancellation.ThrowIfCancellationRequested();
-        var validation = Score(model, SparseViews.Rows(ml, data.Train, job.ValidationRows, labels: null), job.ValidationRows.Length);
-        var test = Score(model, SparseViews.Test(data), data.Test.RowCount);
+        var validation = Score(model, SparseViews.Rows(ml, data.Train, job.ValidationRows, labels: null), job.ValidationRows.Length, offset);
+        var test = Score(model, SparseViews.Test(data), data.Test.RowCount, offset);
         return new FoldPrediction(validation, test);
     }
 
@@ -58,13 +63,13 @@ internal static class FoldFitter
         }
     }
 
-    private static double[] Score(ITransformer model, IDataView rows, int expected)
+    private static double[] Score(ITransformer model, IDataView rows, int expected, double offset)
     {
         var scores = new double[expected];
         int i = 0;
         foreach (float score in model.Transform(rows).GetColumn<float>("Score"))
         {
-            scores[i++] = score;
+            scores[i++] = score + offset;
         }
 
         return i == expected ? scores : throw new InvalidOperationException($"scored {i} rows, expected {expected}");

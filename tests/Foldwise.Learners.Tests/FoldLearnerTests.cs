@@ -112,4 +112,23 @@ public sealed class FoldLearnerTests
 
         Assert.ThrowsAny<OperationCanceledException>(() => new LightGbmLearner().Fit(TinyTables.Job(Data, FamilyNames.LightGbm), cancelled.Token));
     }
+
+    [Theory]
+    [InlineData(FamilyNames.LightGbm)]
+    [InlineData(FamilyNames.FastTree)]
+    public void Starts_from_the_training_mean_so_a_one_round_fit_is_scored_on_what_it_learned(string family)
+    {
+        // Given a target far from zero (as log1p of a spend is) and a single round at the smallest learning rate
+        var data = Data with { Target = [.. Data.Target.Select(t => t + 8)] };
+        var parameters = new ParameterSet(TinyTables.Parameters(family).Values.SetItem("learning_rate", 0.01));
+        var job = TinyTables.Job(data, family, parameters, budget: 1);
+        double trainMean = job.TrainRows.Average(r => data.Target[r]);
+
+        // When it is fitted
+        var prediction = LearnerCatalog.BuiltIn.Get(family).Fit(job, CancellationToken.None);
+
+        // Then its predictions sit at the training mean, not near zero (FastTree on its own boosts from zero)
+        Assert.All(prediction.Validation, p => Assert.InRange(p, trainMean - 0.1, trainMean + 0.1));
+        Assert.All(prediction.Test, p => Assert.InRange(p, trainMean - 0.1, trainMean + 0.1));
+    }
 }
