@@ -22,6 +22,6 @@ public sealed class DemoCommand(IAnsiConsole console) : AsyncCommand<DemoSetting
         console.MarkupLine($"  train.csv {train.RowCount:N0} × {train.FeatureCount:N0}, test.csv {test.RowCount:N0} rows, search.json");
 
         var definition = DefinitionReader.Read(definitionPath);
-        return await new SearchRun(console).RunNewAsync(definition, settings.Out, settings.Slots, settings.Threads, cancellationToken);
+        return await new SearchRun(console) { Role = settings.ToRole(), Leases = settings.ToCoordinatorOptions() }.RunNewAsync(definition, settings.Out, settings.Slots, settings.Threads, cancellationToken);
     }
 }

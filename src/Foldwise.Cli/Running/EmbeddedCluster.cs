@@ -45,6 +45,15 @@ public sealed class EmbeddedCluster : IAsyncDisposable
 
         var host = builder.Build();
         await host.StartAsync(cancellation);
+        if (role.SiloPort != 0)
+        {
+            // Networked: say how to join, and who comes and goes (one plain line each).
+            Console.Out.WriteLine($"Coordinator listening on {role.Advertise}:{role.SiloPort}" +
+                                  (role.Certificate is null ? " (no certificate: any machine that reaches the port can join)" : " (mutual TLS)") +
+                                  $"; workers join with: foldwise worker --join {role.Advertise}:{role.SiloPort}" + (role.Certificate is null ? "" : " --cert FILE"));
+            host.Services.GetRequiredService<ClusterMembers>().Changed += line => Console.Out.WriteLine($"cluster {line}");
+        }
+
         return new EmbeddedCluster(host);
     }
 
