@@ -22,6 +22,9 @@ public sealed class EmbeddedCluster : IAsyncDisposable
 
     public DatasetShelf Shelf => host.Services.GetRequiredService<DatasetShelf>();
 
+    /// <summary>The silos this coordinator sees as active (itself included).</summary>
+    public ClusterMembers Members => host.Services.GetRequiredService<ClusterMembers>();
+
     public TableCache? LocalTables => host.Services.GetService<TableCache>();
 
     public static async Task<EmbeddedCluster> StartAsync(ClusterRole role, int slots, int? threads, CancellationToken cancellation)
