@@ -28,5 +28,11 @@ public static class FoldwiseApp
         config.AddCommand<PlanCommand>("plan")
             .WithDescription("Print the rung and bracket plan for a budget range, to size a search before running it.")
             .WithExample("plan", "--min-budget", "1", "--max-budget", "81", "--eta", "3");
+        config.AddCommand<WorkerCommand>("worker")
+            .WithDescription("Offer this machine's slots to a coordinator ('run --port P') until Ctrl-C; rejoins by itself when the coordinator restarts.")
+            .WithExample("worker", "--join", "192.168.1.20:11111", "--cert", "cluster.pfx");
+        config.AddCommand<ClusterCertCommand>("cluster-cert")
+            .WithDescription("Create the certificate the machines of one cluster share (mutual TLS; machines without it are refused).")
+            .WithExample("cluster-cert", "--out", "cluster.pfx");
     }
 }

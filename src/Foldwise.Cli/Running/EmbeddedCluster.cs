@@ -22,6 +22,9 @@ public sealed class EmbeddedCluster : IAsyncDisposable
 
     public DatasetShelf Shelf => host.Services.GetRequiredService<DatasetShelf>();
 
+    /// <summary>The silos this coordinator sees as active (itself included).</summary>
+    public ClusterMembers Members => host.Services.GetRequiredService<ClusterMembers>();
+
     public TableCache? LocalTables => host.Services.GetService<TableCache>();
 
     public static async Task<EmbeddedCluster> StartAsync(ClusterRole role, int slots, int? threads, CancellationToken cancellation)
@@ -45,6 +48,15 @@ public sealed class EmbeddedCluster : IAsyncDisposable
 
         var host = builder.Build();
         await host.StartAsync(cancellation);
+        if (role.SiloPort != 0)
+        {
+            // Networked: say how to join, and who comes and goes (one plain line each).
+            Console.Out.WriteLine($"Coordinator listening on {role.Advertise}:{role.SiloPort}" +
+                                  (role.Certificate is null ? " (no certificate: any machine that reaches the port can join)" : " (mutual TLS)") +
+                                  $"; workers join with: foldwise worker --join {role.Advertise}:{role.SiloPort}" + (role.Certificate is null ? "" : " --cert FILE"));
+            host.Services.GetRequiredService<ClusterMembers>().Changed += line => Console.Out.WriteLine($"cluster {line}");
+        }
+
         return new EmbeddedCluster(host);
     }
 

@@ -17,6 +17,12 @@ namespace Foldwise.Cli.Running;
 /// </summary>
 public sealed class SearchRun(IAnsiConsole console)
 {
+    /// <summary>How the coordinator's silo is reached (ports, advertised address, certificate). Default: a cluster of one.</summary>
+    public ClusterRole Role { get; init; } = new();
+
+    /// <summary>Lease rules for this run's coordinator. Default: <see cref="CoordinatorOptions"/>' defaults.</summary>
+    public CoordinatorOptions? Leases { get; init; }
+
     public async Task<int> RunNewAsync(SearchDefinition definition, string outDir, int slots, int? threads, CancellationToken cancellation)
     {
         string storePath = StoreFile.PathIn(outDir);
@@ -61,7 +67,7 @@ public sealed class SearchRun(IAnsiConsole console)
         CancellationToken cancellation)
     {
         var history = store.LoadTrials();
-        var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition), store, TimeProvider.System, null, history, header.SpentSeconds);
+        var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition), store, TimeProvider.System, Leases, history, header.SpentSeconds);
         var manifest = new SearchManifest(
             header.SearchId, header.TrainHash, header.TestHash, header.Folds.FoldCount, header.Folds.Seed, [.. header.Folds.FoldOfRow], definition.Metric.ToString());
         var session = new CoordinatorSession(manifest, coordinator, store);
@@ -72,7 +78,7 @@ public sealed class SearchRun(IAnsiConsole console)
 
         console.MarkupLine($"Search [bold]{Markup.Escape(header.SearchId)}[/]: {definition.Schedule.Kind} with {definition.Schedule.Proposer}, " +
                            $"{string.Join(" + ", definition.Families.Select(f => f.Family))}, {definition.Folds}-fold, {slots} local slot(s)");
-        await using (var cluster = await EmbeddedCluster.StartAsync(new ClusterRole(), slots, threads, linked.Token))
+        await using (var cluster = await EmbeddedCluster.StartAsync(Role, slots, threads, linked.Token))
         {
             cluster.Shelf.Put(header.TrainHash, trainBytes);
             cluster.Shelf.Put(header.TestHash, testBytes);

@@ -1,6 +1,12 @@
+using System.Net;
+using System.Security.Cryptography.X509Certificates;
+
 namespace Foldwise.Cluster.Hosting;
 
-/// <summary>Where a silo stands in the cluster and how it is reached.</summary>
+/// <summary>
+/// Where a silo stands in the cluster and how it is reached. Defaults: the coordinator, free loopback ports,
+/// no TLS (a cluster of one on one machine).
+/// </summary>
 public sealed class ClusterRole
 {
     /// <summary>True for the silo that owns the search and the store (the primary silo).</summary>
@@ -13,11 +19,14 @@ public sealed class ClusterRole
     public int GatewayPort { get; init; }
 
     /// <summary>For a worker: the coordinator's silo endpoint to join.</summary>
-    public System.Net.IPEndPoint? Join { get; init; }
+    public IPEndPoint? Join { get; init; }
 
     /// <summary>The address other machines reach this silo on. The default is loopback (one machine).</summary>
-    public System.Net.IPAddress Advertise { get; init; } = System.Net.IPAddress.Loopback;
+    public IPAddress Advertise { get; init; } = IPAddress.Loopback;
 
     /// <summary>Shared by every silo of one Foldwise cluster.</summary>
     public string ClusterId { get; init; } = "foldwise";
+
+    /// <summary>The cluster certificate; when set, silos talk only over mutual TLS with peers holding it.</summary>
+    public X509Certificate2? Certificate { get; init; }
 }

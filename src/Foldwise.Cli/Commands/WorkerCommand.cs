@@ -1,0 +1,47 @@
+using System.Net;
+using System.Runtime.InteropServices;
+using Foldwise.Cli.Running;
+using Foldwise.Cluster.Hosting;
+using Foldwise.Cluster.Workers;
+using Foldwise.Core.Data;
+using Spectre.Console;
+using Spectre.Console.Cli;
+
+namespace Foldwise.Cli.Commands;
+
+/// <summary><c>foldwise worker</c>: offers this machine's slots to a coordinator until Ctrl-C or SIGTERM; rejoins by itself.</summary>
+public sealed class WorkerCommand(IAnsiConsole console) : AsyncCommand<WorkerSettings>
+{
+    public override async Task<int> ExecuteAsync(CommandContext context, WorkerSettings settings, CancellationToken cancellationToken)
+    {
+        IPEndPoint join;
+        try
+        {
+            join = LocalAddress.ParseJoin(settings.Join);
+        }
+        catch (Exception e) when (e is FormatException or System.Net.Sockets.SocketException)
+        {
+            throw new InputException("--join", e.Message);
+        }
+
+        var role = new ClusterRole
+        {
+            IsCoordinator = false,
+            Join = join,
+            SiloPort = settings.Port,
+            Advertise = settings.Advertise is { } advertise ? IPAddress.Parse(advertise) : LocalAddress.Facing(join),
+            Certificate = ClusterTrust.Load(settings.Cert, settings.Passphrase),
+        };
+        var options = new WorkerOptions { Slots = settings.Slots, ThreadsPerSlot = settings.Threads };
+        options.Name = settings.Name ?? options.Name;
+        options.CacheDirectory = settings.Cache ?? options.CacheDirectory;
+
+        using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancellationToken);
+        using var sigterm = PosixSignalRegistration.Create(PosixSignal.SIGTERM, s => { s.Cancel = true; stop.Cancel(); });
+        using var sigint = PosixSignalRegistration.Create(PosixSignal.SIGINT, s => { s.Cancel = true; stop.Cancel(); });
+        console.MarkupLine($"Worker [bold]{Markup.Escape(options.Name)}[/] joining {Markup.Escape(join.ToString())} from {role.Advertise}" +
+                           (role.Certificate is null ? " (no certificate)" : " (mutual TLS)") + "; Ctrl-C to leave");
+        await new WorkerHost(role, options, Console.Out).RunAsync(stop.Token);
+        return ExitCodes.Ok;
+    }
+}

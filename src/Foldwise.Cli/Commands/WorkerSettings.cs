@@ -1,0 +1,74 @@
+using System.ComponentModel;
+using System.Net;
+using Spectre.Console;
+using Spectre.Console.Cli;
+
+namespace Foldwise.Cli.Commands;
+
+/// <summary>
+/// Options of <c>foldwise worker</c>. Defaults: <c>1</c> slot using every core, a free silo port, the address
+/// facing the coordinator, the host name as the worker's name.
+/// </summary>
+public sealed class WorkerSettings : CommandSettings
+{
+    [CommandOption("--join <HOST:PORT>")]
+    [Description("The coordinator's address and --port, e.g. 192.168.1.20:11111. Required.")]
+    public string Join { get; init; } = "";
+
+    [CommandOption("--slots <N>")]
+    [Description("Slots training trials. Default 1 with all cores: ML.NET trains one LightGBM model at a time per process, so a second slot in the same process would only wait behind the first. Run a second worker process instead if you want two.")]
+    public int Slots { get; init; } = 1;
+
+    [CommandOption("--threads <N>")]
+    [Description("Threads per slot. Default: the machine's cores divided among the slots.")]
+    public int? Threads { get; init; }
+
+    [CommandOption("--port <P>")]
+    [Description("This worker's silo port (the coordinator connects back to it; open it in the firewall). Default: a free port.")]
+    public int Port { get; init; }
+
+    [CommandOption("--advertise <ADDRESS>")]
+    [Description("The address the coordinator reaches this machine on. Default: the local address facing the coordinator.")]
+    public string? Advertise { get; init; }
+
+    [CommandOption("--name <NAME>")]
+    [Description("The machine name trials record. Default: the host name.")]
+    public string? Name { get; init; }
+
+    [CommandOption("--cache <DIR>")]
+    [Description("Folder for tables fetched from the coordinator, kept for later searches. Default ~/.cache/foldwise/tables.")]
+    public string? Cache { get; init; }
+
+    [CommandOption("--cert <FILE>")]
+    [Description("The cluster certificate, copied from the coordinator's machine. Required when the coordinator uses one.")]
+    public string? Cert { get; init; }
+
+    [CommandOption("--passphrase <TEXT>")]
+    [Description("Passphrase of --cert. Default: the FOLDWISE_CERT_PASSPHRASE environment variable.")]
+    public string? Passphrase { get; init; }
+
+    public override ValidationResult Validate()
+    {
+        if (string.IsNullOrWhiteSpace(Join))
+        {
+            return ValidationResult.Error("--join HOST:PORT is required: the coordinator's address and --port");
+        }
+
+        if (Slots < 1)
+        {
+            return ValidationResult.Error("--slots must be at least 1 on a worker");
+        }
+
+        if (Port is < 0 or > 65535)
+        {
+            return ValidationResult.Error("--port must be a TCP port (1–65535)");
+        }
+
+        if (Advertise is not null && !IPAddress.TryParse(Advertise, out _))
+        {
+            return ValidationResult.Error("--advertise must be an IP address");
+        }
+
+        return Threads is < 1 ? ValidationResult.Error("--threads must be at least 1") : ValidationResult.Success();
+    }
+}

@@ -1,0 +1,144 @@
+using Foldwise.Cluster.Contracts;
+using Foldwise.Cluster.Hosting;
+using Foldwise.Cluster.Workers;
+using Foldwise.Learners;
+using Microsoft.Extensions.DependencyInjection;
+using Microsoft.Extensions.Hosting;
+using Microsoft.Extensions.Logging;
+
+namespace Foldwise.Cli.Running;
+
+/// <summary>
+/// A worker process: a silo with the worker role (no coordinator grains) that joins the coordinator and runs
+/// slots until stopped. When the coordinator goes away (restart, sleep, network) the silo is torn down and a
+/// fresh one joins again: a development-clustering cluster dies with its primary, so rejoining is the only way back.
+/// </summary>
+public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWriter output)
+{
+    /// <summary>How long the coordinator may stay unreachable before this worker starts over. Default 20 s.</summary>
+    public TimeSpan LostAfter { get; init; } = TimeSpan.FromSeconds(20);
+
+    /// <summary>The pause between attempts to join. Default 3 s.</summary>
+    public TimeSpan RetryPause { get; init; } = TimeSpan.FromSeconds(3);
+
+    public async Task RunAsync(CancellationToken stopping)
+    {
+        int attempt = 0;
+        while (!stopping.IsCancellationRequested)
+        {
+            attempt++;
+            using var host = Build();
+            try
+            {
+                await host.StartAsync(stopping);
+                output.WriteLine($"Joined the cluster at {role.Join} as {options.Name} with {options.Slots} slot(s), {options.Threads} thread(s) each");
+                string why = await WatchAsync(host, stopping);
+                if (!stopping.IsCancellationRequested)
+                {
+                    output.WriteLine($"Lost the cluster ({why}); joining again");
+                }
+            }
+            catch (OperationCanceledException) when (stopping.IsCancellationRequested)
+            {
+                // Ctrl-C while joining.
+            }
+            catch (Exception e) when (e is not OperationCanceledException)
+            {
+                output.WriteLine($"Cannot join {role.Join} (attempt {attempt}): {FirstLine(e)}; retrying in {RetryPause.TotalSeconds:F0} s");
+            }
+
+            await StopQuietly(host);
+            await PauseAsync(stopping);
+        }
+
+        output.WriteLine("Worker stopped");
+    }
+
+    private IHost Build()
+    {
+        var builder = Host.CreateApplicationBuilder([]);
+        builder.Logging.ClearProviders();
+        var level = Environment.GetEnvironmentVariable("FOLDWISE_LOG") is { Length: > 0 } text && Enum.TryParse<LogLevel>(text, true, out var parsed)
+            ? parsed
+            : LogLevel.None;
+        if (level != LogLevel.None)
+        {
+            builder.Logging.AddSimpleConsole(o => o.SingleLine = true).SetMinimumLevel(level);
+        }
+
+        // One line per trial this worker runs, whatever the log level.
+        builder.Logging.AddProvider(new TrialLines(output));
+        builder.Services.Configure<HostOptions>(o => o.ShutdownTimeout = TimeSpan.FromSeconds(10));
+        builder.UseOrleans(silo => silo.UseFoldwiseClustering(role));
+        builder.Services.AddFoldwiseWorker(options, LearnerCatalog.BuiltIn);
+        builder.Services.ExcludeCoordinatorGrains();
+        return builder.Build();
+    }
+
+    /// <summary>Returns when the worker should start over: the silo stopped itself, or the coordinator stayed unreachable.</summary>
+    private async Task<string> WatchAsync(IHost host, CancellationToken stopping)
+    {
+        var lifetime = host.Services.GetRequiredService<IHostApplicationLifetime>();
+        var board = host.Services.GetRequiredService<IGrainFactory>().GetGrain<ISearchBoardGrain>(0);
+        using var either = CancellationTokenSource.CreateLinkedTokenSource(stopping, lifetime.ApplicationStopping);
+        DateTime? unreachableSince = null;
+        while (!either.IsCancellationRequested)
+        {
+            try
+            {
+                await board.ActiveSearchesAsync().WaitAsync(TimeSpan.FromSeconds(5), either.Token);
+                unreachableSince = null;
+            }
+            catch (OperationCanceledException) when (either.IsCancellationRequested)
+            {
+                break;
+            }
+            catch (Exception e) when (e is not OperationCanceledException || !either.IsCancellationRequested)
+            {
+                unreachableSince ??= DateTime.UtcNow;
+                if (DateTime.UtcNow - unreachableSince >= LostAfter)
+                {
+                    return $"coordinator unreachable for {LostAfter.TotalSeconds:F0} s: {FirstLine(e)}";
+                }
+            }
+
+            try
+            {
+                await Task.Delay(TimeSpan.FromSeconds(2), either.Token);
+            }
+            catch (OperationCanceledException)
+            {
+                break;
+            }
+        }
+
+        return "the silo was stopped by the cluster";
+    }
+
+    private static async Task StopQuietly(IHost host)
+    {
+        try
+        {
+            using var timeout = new CancellationTokenSource(TimeSpan.FromSeconds(10));
+            await host.StopAsync(timeout.Token);
+        }
+        catch (Exception e) when (e is OperationCanceledException or InvalidOperationException or Orleans.Runtime.OrleansException or AggregateException)
+        {
+            // A silo that never joined, or lost its cluster, may not stop cleanly; the next one starts fresh.
+        }
+    }
+
+    private async Task PauseAsync(CancellationToken stopping)
+    {
+        try
+        {
+            await Task.Delay(RetryPause, stopping);
+        }
+        catch (OperationCanceledException)
+        {
+            // Stopping.
+        }
+    }
+
+    private static string FirstLine(Exception e) => (e.InnerException is { } inner && e is AggregateException ? inner : e).Message.Split('\n')[0].Trim();
+}

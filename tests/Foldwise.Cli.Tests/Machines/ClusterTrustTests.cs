@@ -1,0 +1,60 @@
+using System.Diagnostics;
+using Foldwise.Cli.Running;
+using Foldwise.Cli.Tests.Processes;
+using Foldwise.Cluster.Hosting;
+using Xunit.Abstractions;
+
+namespace Foldwise.Cli.Tests.Machines;
+
+/// <summary>An in-process coordinator with the cluster certificate, and worker processes with and without it.</summary>
+public sealed class ClusterTrustTests(ITestOutputHelper output)
+{
+    [Fact]
+    public async Task Refuses_a_silo_without_the_certificate_admits_one_with_it_and_notices_its_death_within_30_s()
+    {
+        // Given a coordinator that requires the cluster certificate
+        using var workspace = new Workspace();
+        using var certificate = ClusterCertificate.Create("test");
+        string pfx = workspace.PathOf("cluster.pfx");
+        ClusterCertificate.Export(certificate, pfx, "test-passphrase");
+        int port = MachineDefinition.FreePortPair();
+        var role = new ClusterRole { SiloPort = port, GatewayPort = port + 1, Certificate = certificate };
+        await using var coordinator = await EmbeddedCluster.StartAsync(role, slots: 0, threads: null, CancellationToken.None);
+
+        // When a stranger without the certificate tries to join
+        using var stranger = FoldwiseProcess.Start("worker", "--join", $"127.0.0.1:{port}", "--name", "stranger");
+        bool strangerJoined = await stranger.WaitForLineAsync(l => l.StartsWith("Joined", StringComparison.Ordinal), TimeSpan.FromSeconds(12));
+
+        // Then it is refused: never a member, never joined
+        Assert.False(strangerJoined, stranger.Output);
+        Assert.Single(coordinator.Members.Active);
+        stranger.Kill();
+
+        // When a worker with the certificate joins, it becomes a member
+        using var member = FoldwiseProcess.Start("worker", "--join", $"127.0.0.1:{port}", "--name", "member", "--cert", pfx, "--passphrase", "test-passphrase");
+        Assert.True(await WaitFor(() => coordinator.Members.Active.Count == 2, TimeSpan.FromSeconds(40)), member.Output);
+
+        // And when it is SIGKILLed, the coordinator declares it dead within 30 s
+        var clock = Stopwatch.StartNew();
+        member.Kill();
+        bool noticed = await WaitFor(() => coordinator.Members.Active.Count == 1, TimeSpan.FromSeconds(30));
+        output.WriteLine($"dead worker noticed after {clock.Elapsed.TotalSeconds:F1} s");
+        Assert.True(noticed, $"still {coordinator.Members.Active.Count} members after 30 s");
+    }
+
+    private static async Task<bool> WaitFor(Func<bool> condition, TimeSpan timeout)
+    {
+        var deadline = DateTime.UtcNow + timeout;
+        while (DateTime.UtcNow < deadline)
+        {
+            if (condition())
+            {
+                return true;
+            }
+
+            await Task.Delay(100);
+        }
+
+        return condition();
+    }
+}

@@ -1,0 +1,56 @@
+using System.Collections.Immutable;
+using System.Security.Cryptography;
+using Foldwise.Cluster.Contracts;
+using Foldwise.Cluster.Coordination;
+using Foldwise.Core.Data;
+using Foldwise.Core.Definition;
+using Foldwise.Core.Folds;
+using Foldwise.Core.Search;
+using Foldwise.Core.Spaces;
+using Foldwise.Testing.Fakes;
+using Microsoft.Extensions.DependencyInjection;
+
+namespace Foldwise.Cluster.Tests;
+
+/// <summary>Starts a small counting search on a <see cref="TwoSiloCluster"/>'s coordinator, with chosen lease rules.</summary>
+internal static class SearchSessions
+{
+    public static (FeatureTable Train, FeatureTable Test) Tables() => (Table("train", 30, withTarget: true), Table("test", 10, withTarget: false));
+
+    public static CoordinatorSession Start(
+        TwoSiloCluster cluster, string name, (FeatureTable Train, FeatureTable Test) tables, int trials, MemoryRecorder recorder, CoordinatorOptions? leases = null)
+    {
+        var trainBytes = TableCodec.Encode(tables.Train);
+        var testBytes = TableCodec.Encode(tables.Test);
+        string trainHash = Convert.ToHexStringLower(SHA256.HashData(trainBytes));
+        string testHash = Convert.ToHexStringLower(SHA256.HashData(testBytes));
+        var shelf = cluster.Coordinator.GetRequiredService<DatasetShelf>();
+        shelf.Put(trainHash, trainBytes);
+        shelf.Put(testHash, testBytes);
+        var folds = new FoldPlan(3, 1, [.. Enumerable.Range(0, tables.Train.RowCount).Select(r => r % 3)]);
+        var definition = new SearchDefinition
+        {
+            Name = name,
+            Data = new DataSource("train.csv", "test.csv", "id", "y"),
+            Families = [new FamilySearch(FamilyNames.LightGbm, DefaultSpaces.LightGbm)],
+            Budget = new SearchBudget(trials, null),
+        };
+        var coordinator = new SearchCoordinator(definition, new CountingSchedule(), recorder, TimeProvider.System, leases);
+        var manifest = new SearchManifest($"{name}-{Guid.NewGuid():N}", trainHash, testHash, 3, 1, [.. folds.FoldOfRow], "Rmsle");
+        var session = new CoordinatorSession(manifest, coordinator, recorder);
+        cluster.Coordinator.GetRequiredService<SessionRegistry>().Add(session);
+        return session;
+    }
+
+    private static FeatureTable Table(string name, int rows, bool withTarget)
+    {
+        int[] present = [.. Enumerable.Range(0, rows).Where(r => r % 2 == 0)];
+        var column = new SparseColumn([.. present], [.. present.Select(r => (float)r)]);
+        return new FeatureTable(
+            name,
+            [.. Enumerable.Range(0, rows).Select(r => $"{name}{r}")],
+            ["f1"],
+            [column],
+            withTarget ? [.. Enumerable.Range(0, rows).Select(r => (double)r)] : ImmutableArray<double>.Empty);
+    }
+}
