@@ -52,9 +52,10 @@ public sealed class LostSiloTests
     [Fact]
     public async Task A_later_search_on_the_same_tables_fetches_nothing_again()
     {
-        // Given a worker silo that has run one search on two tables
+        // Given a worker silo that has run one search on two tables (fits slow enough that both silos get trials)
         var cluster = new TwoSiloCluster();
         await cluster.InitializeAsync();
+        cluster.Learner.Delay = TimeSpan.FromMilliseconds(50);
         try
         {
             var tables = SearchSessions.Tables();
