@@ -19,6 +19,15 @@ public static class FoldwiseApp
         config.AddCommand<HistoryCommand>("history")
             .WithDescription("List a search's trials, best first (works while the search runs).")
             .WithExample("history", "runs/demo/search.db");
+        config.AddCommand<ShowCommand>("show")
+            .WithDescription("Show one trial: readable parameters, fold scores and spread, lineage, machine, time, attempts.")
+            .WithExample("show", "runs/demo/search.db", "12");
+        config.AddCommand<StatusCommand>("status")
+            .WithDescription("Where a search stands, from its store (works while it runs): trials by state, best per family, time, slots.")
+            .WithExample("status", "runs/demo/search.db");
+        config.AddCommand<ReportCommand>("report")
+            .WithDescription("Write one self-contained HTML page of a search's charts (no network needed to open it).")
+            .WithExample("report", "runs/demo/search.db", "--out", "runs/demo/report.html");
         config.AddCommand<PlanCommand>("plan")
             .WithDescription("Print the rung and bracket plan for a budget range, to size a search before running it.")
             .WithExample("plan", "--min-budget", "1", "--max-budget", "81", "--eta", "3");
