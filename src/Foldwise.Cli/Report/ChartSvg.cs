@@ -22,7 +22,7 @@ public static partial class ChartSvg
     {
         ArgumentNullException.ThrowIfNull(plot);
         plot.FigureBackground.Color = Colors.White;
-        plot.Font.Set(Fonts.Sans);
+        plot.Font.Set("DejaVu Sans");
         string svg = plot.GetSvgXml(width, height);
         svg = XmlDeclaration().Replace(svg, "");
 

@@ -59,6 +59,8 @@ public static class ParameterCharts
             plot.Axes.Bottom.SetTicks([.. Enumerable.Range(0, shown.Choices.Length).Select(i => (double)i)], [.. shown.Choices]);
         }
 
+        // The page names the family colours above the grid; a legend in a small chart would hide its points.
+        plot.HideLegend();
         plot.XLabel(shown is { Kind: ParameterKind.LogFloat } ? $"{name} (log10)" : name);
         plot.YLabel(search.Metric.Name);
         return new ChartSection(

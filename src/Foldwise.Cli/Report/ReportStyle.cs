@@ -15,6 +15,7 @@ public static class ReportStyle
         .reading { color: #444; margin: 0 0 8px; max-width: 62rem; }
         figure { margin: 0; overflow-x: auto; }
         figure svg { max-width: 100%; height: auto; }
+        figure svg text { font-family: "DejaVu Sans", "Segoe UI", Arial, sans-serif; }
         .grid { display: grid; grid-template-columns: repeat(auto-fill, minmax(300px, 1fr)); gap: 10px; background: #fff; border: 1px solid #ddd; border-top: none; border-radius: 0 0 6px 6px; padding: 0 12px 12px; }
         .grid section.chart { margin: 0; border: 1px solid #eee; padding: 8px; }
         .grid .reading { font-size: 0.85rem; }
