@@ -25,12 +25,21 @@ public static class FoldwiseApp
         config.AddCommand<ExportCommand>("export")
             .WithDescription("Write every full-budget trial's out-of-fold predictions (original scale) to a CSV file.")
             .WithExample("export", "runs/demo/search.db", "--oof", "runs/demo/oof.csv");
+        config.AddCommand<ShowCommand>("show")
+            .WithDescription("Show one trial: readable parameters, fold scores and spread, lineage, machine, time, attempts.")
+            .WithExample("show", "runs/demo/search.db", "12");
+        config.AddCommand<StatusCommand>("status")
+            .WithDescription("Where a search stands, from its store (works while it runs): trials by state, best per family, time, slots.")
+            .WithExample("status", "runs/demo/search.db");
+        config.AddCommand<ReportCommand>("report")
+            .WithDescription("Write one self-contained HTML page of a search's charts (no network needed to open it).")
+            .WithExample("report", "runs/demo/search.db", "--out", "runs/demo/report.html");
         config.AddCommand<PlanCommand>("plan")
             .WithDescription("Print the rung and bracket plan for a budget range, to size a search before running it.")
             .WithExample("plan", "--min-budget", "1", "--max-budget", "81", "--eta", "3");
         config.AddCommand<WorkerCommand>("worker")
             .WithDescription("Offer this machine's slots to a coordinator ('run --port P') until Ctrl-C; rejoins by itself when the coordinator restarts.")
-            .WithExample("worker", "--join", "192.168.1.20:11111", "--cert", "cluster.pfx");
+            .WithExample("worker", "--join", "office-pc-7:11111", "--cert", "cluster.pfx");
         config.AddCommand<ClusterCertCommand>("cluster-cert")
             .WithDescription("Create the certificate the machines of one cluster share (mutual TLS; machines without it are refused).")
             .WithExample("cluster-cert", "--out", "cluster.pfx");

@@ -1,3 +1,4 @@
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Core.Blending;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Metrics;
@@ -18,6 +19,7 @@ public static class BlendStep
     public static BlendSummary Run(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, IAnsiConsole console, BlendOptions? options = null)
     {
         options ??= definition.Blend;
+        using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.BlendSpan);
         var metric = Metric.For(definition.Metric);
         var trials = store.LoadTrials();
         var pool = BlendPool.Select(trials, options.Pool, definition.Schedule.MaxBudget);
@@ -42,6 +44,8 @@ public static class BlendStep
         string path = Path.Combine(outDir, PredictionFileName);
         PredictionFile.Write(path, definition.Data.IdColumn, definition.Data.TargetColumn, header.TestIds, [.. blended.Select(metric.Inverse)]);
         store.SaveBlend(result.Summary);
+        span?.SetTag("foldwise.blend.mode", result.Summary.Mode.ToString()).SetTag("foldwise.blend.pool", pool.Count)
+            .SetTag("foldwise.blend.nested", result.Summary.NestedScore).SetTag("foldwise.blend.in_sample", result.Summary.InSampleScore);
         Output.BlendView.Render(console, result.Summary, metric, trials);
         console.MarkupLine($"Wrote [bold]{Markup.Escape(path)}[/]: {header.TestIds.Length:N0} predictions.");
         return result.Summary;

@@ -1,5 +1,6 @@
 using Foldwise.Cluster.Coordination;
 using Foldwise.Cluster.Hosting;
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Cluster.Workers;
 using Foldwise.Learners;
 using Microsoft.Extensions.DependencyInjection;
@@ -39,6 +40,7 @@ public sealed class EmbeddedCluster : IAsyncDisposable
         builder.Services.Configure<HostOptions>(o => o.ShutdownTimeout = TimeSpan.FromSeconds(15));
         builder.UseOrleans(silo => silo.UseFoldwiseClustering(role));
         builder.Services.AddFoldwiseCoordinator();
+        builder.Services.AddFoldwiseTelemetry(FoldwiseTelemetryOptions.FromEnvironment());
         if (slots > 0)
         {
             builder.Services.AddFoldwiseWorker(

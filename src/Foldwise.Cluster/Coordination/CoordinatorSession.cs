@@ -1,4 +1,5 @@
 using Foldwise.Cluster.Contracts;
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Core.Search;
 
 namespace Foldwise.Cluster.Coordination;
@@ -12,12 +13,15 @@ public sealed class CoordinatorSession
     private readonly ISearchRecorder recorder;
     private readonly TaskCompletionSource finished = new(TaskCreationOptions.RunContinuationsAsynchronously);
     private readonly object gate = new();
+    private readonly SearchSpan span;
 
     public CoordinatorSession(SearchManifest manifest, SearchCoordinator coordinator, ISearchRecorder recorder)
     {
         Manifest = manifest;
         Coordinator = coordinator;
         this.recorder = recorder;
+        span = new SearchSpan(manifest.SearchId, coordinator.Definition.Name);
+        FoldwiseMetrics.Track(this);
     }
 
     public string SearchId => Manifest.SearchId;
@@ -106,8 +110,10 @@ public sealed class CoordinatorSession
 
     private void CheckFinished()
     {
-        if (Coordinator.Progress().Finished)
+        var progress = Coordinator.Progress();
+        if (progress.Finished)
         {
+            span.End(progress);
             finished.TrySetResult();
         }
     }

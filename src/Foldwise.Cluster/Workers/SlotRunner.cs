@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using Foldwise.Cluster.Contracts;
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Core.Learning;
 using Foldwise.Core.Spaces;
 using Microsoft.Extensions.Logging;
@@ -75,13 +76,19 @@ public sealed partial class SlotRunner(
         using var abandon = CancellationTokenSource.CreateLinkedTokenSource(stopping);
         var renewing = RenewAsync(search, lease, abandon);
         var clock = Stopwatch.StartNew();
+        using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.TrialSpan, ActivityKind.Consumer);
+        span?.SetTag("foldwise.search", searchId).SetTag("foldwise.trial", lease.TrialId).SetTag("foldwise.attempt", lease.Attempt)
+            .SetTag("foldwise.family", lease.Family).SetTag("foldwise.budget", lease.Budget).SetTag("foldwise.worker", options.Name).SetTag("foldwise.slot", slot);
+        FoldwiseMetrics.SlotBusy();
+        string ending = "lost";
         try
         {
             var trialData = await data.GetAsync(searchId, abandon.Token);
             var executor = new TrialExecutor(learners.Get(lease.Family));
             var parameters = ParameterSet.Of(lease.Parameters);
+            using var folds = new FoldSpans(span?.Context ?? default, lease.TrialId, trialData.Folds.FoldCount);
             var outcome = await Task.Factory.StartNew(
-                () => executor.Run(trialData, parameters, lease.Budget, lease.Seed, options.Threads, abandon.Token),
+                () => executor.Run(trialData, parameters, lease.Budget, lease.Seed, options.Threads, abandon.Token, folds.FoldDone),
                 abandon.Token,
                 TaskCreationOptions.LongRunning,
                 TaskScheduler.Default);
@@ -90,10 +97,13 @@ public sealed partial class SlotRunner(
             var report = new TrialReport(
                 lease.TrialId, lease.Attempt, options.Name, slot, outcome.Score, [.. outcome.FoldScores], outcome.OutOfFold, outcome.Test, clock.Elapsed.TotalSeconds);
             bool accepted = await search.ReportAsync(report);
+            ending = "scored";
+            span?.SetTag("foldwise.score", outcome.Score).SetTag("foldwise.accepted", accepted);
             LogTrialDone(slot, lease.TrialId, lease.Attempt, outcome.Score, clock.Elapsed.TotalSeconds, accepted);
         }
         catch (OperationCanceledException) when (stopping.IsCancellationRequested)
         {
+            ending = "interrupted";
             await ReleaseQuietly(search, lease, "the worker stopped", interrupted: true);
             throw;
         }
@@ -105,10 +115,15 @@ public sealed partial class SlotRunner(
         catch (Exception e) when (e is ArgumentException or InvalidOperationException or IOException or OutOfMemoryException)
         {
             LogTrialFailed(slot, lease.TrialId, e.Message);
+            ending = "failed";
+            span?.SetStatus(ActivityStatusCode.Error, e.Message);
             await ReleaseQuietly(search, lease, $"{e.GetType().Name}: {e.Message}", interrupted: false);
         }
         finally
         {
+            FoldwiseMetrics.SlotIdle();
+            FoldwiseMetrics.TrialEnded(lease.Family, ending, clock.Elapsed.TotalSeconds);
+            span?.SetTag("foldwise.outcome", ending);
             await abandon.CancelAsync();
             await renewing;
         }

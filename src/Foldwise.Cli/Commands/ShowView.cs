@@ -1,0 +1,86 @@
+using System.Globalization;
+using Foldwise.Cli.Output;
+using Foldwise.Cli.Report;
+using Foldwise.Core.Search;
+using Spectre.Console;
+
+namespace Foldwise.Cli.Commands;
+
+/// <summary>One trial as a person reads it: what it was, how it scored fold by fold, where and how long it ran, and what went wrong.</summary>
+public static class ShowView
+{
+    private static readonly CultureInfo Invariant = CultureInfo.InvariantCulture;
+
+    public static void Render(IAnsiConsole console, StoredSearch search, TrialRecord t)
+    {
+        string metric = search.Metric.Name;
+        console.MarkupLine($"[bold]Trial {t.Id}[/]: {t.Family}, {t.State.ToString().ToLowerInvariant()}");
+        var facts = new Grid().AddColumn(new GridColumn().NoWrap()).AddColumn();
+        void Fact(string name, string value) => facts.AddRow(name, Markup.Escape(value));
+
+        Fact("rung", $"{t.Rung} (bracket {t.Bracket}), {t.Budget} rounds");
+        Fact("proposed by", t.ParentId is { } p ? $"{t.Proposer} of trial {p}" : t.Proposer);
+        var chain = ShowLineage.Chain(t, search.Trials);
+        if (chain.Count > 1)
+        {
+            Fact("parent chain", string.Join(" ← ", chain.Select(c => $"{c.Id} ({c.Budget} rounds{ScoreText(c.Score)})")));
+        }
+
+        var children = ShowLineage.Children(t, search.Trials);
+        if (children.Count > 0)
+        {
+            Fact("promoted to", string.Join(", ", children.Select(c => $"{c.Id} ({c.Budget} rounds)")));
+        }
+
+        Fact($"OOF {metric}", t.Score?.ToString("F5", Invariant) ?? "not scored");
+        if (t.FoldScores.Length > 0)
+        {
+            Fact("fold scores", string.Join("  ", t.FoldScores.Select(s => s.ToString("F5", Invariant))));
+            Fact("fold spread", t.FoldScores.Length > 1
+                ? $"sd {BlendView.Spread(t.FoldScores).ToString("F5", Invariant)}, range {t.FoldScores.Min().ToString("F5", Invariant)} to {t.FoldScores.Max().ToString("F5", Invariant)}"
+                : "one fold only");
+        }
+
+        Fact("machine/slot", t.Worker is null ? "not leased yet" : $"{t.Worker}/{t.Slot}");
+        Fact("started", t.Started?.ToString("u", Invariant) ?? "");
+        Fact("finished", t.Finished?.ToString("u", Invariant) ?? "");
+        Fact("duration", t.Duration is { } d ? $"{d.TotalSeconds.ToString("F1", Invariant)} s" : "");
+        Fact("attempts", $"{t.Attempt} ({t.Failures} lost)");
+        foreach (string lost in t.LostAttempts)
+        {
+            Fact("  lost attempt", lost);
+        }
+
+        if (t.FailureReason is { } reason)
+        {
+            Fact("failure", reason);
+        }
+
+        console.Write(facts);
+        RenderParameters(console, search, t);
+    }
+
+    private static void RenderParameters(IAnsiConsole console, StoredSearch search, TrialRecord t)
+    {
+        var space = search.SpaceOf(t.Family);
+        var table = new Table().Border(TableBorder.Simple).AddColumns("parameter", "value", "searched over");
+        foreach (var (name, value) in t.Parameters.Values)
+        {
+            var range = space?.Find(name);
+            table.AddRow(Markup.Escape(name), Markup.Escape(search.Display(t.Family, name, value)), Markup.Escape(range is null ? "" : RangeText(range)));
+        }
+
+        console.Write(table);
+    }
+
+    /// <summary>E.g. <c>0.005 to 0.3 (log)</c>, <c>gbdt | dart</c>, <c>fixed</c>.</summary>
+    public static string RangeText(Core.Spaces.ParameterRange range) => range switch
+    {
+        { IsFixed: true } => "fixed",
+        { Kind: Core.Spaces.ParameterKind.Choice } => string.Join(" | ", range.Choices),
+        { Kind: Core.Spaces.ParameterKind.LogFloat } => $"{range.Display(range.Low)} to {range.Display(range.High)} (log)",
+        _ => $"{range.Display(range.Low)} to {range.Display(range.High)}",
+    };
+
+    private static string ScoreText(double? score) => score is { } s ? $", {s.ToString("F5", Invariant)}" : "";
+}

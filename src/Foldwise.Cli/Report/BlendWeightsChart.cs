@@ -1,0 +1,52 @@
+using System.Collections.Immutable;
+using System.Globalization;
+using ScottPlot;
+
+namespace Foldwise.Cli.Report;
+
+/// <summary>The blend's weights: one horizontal bar per pool member, heaviest on top, coloured by family.</summary>
+public static class BlendWeightsChart
+{
+    public const string Id = "blend-weights";
+
+    public static ChartSection Build(StoredSearch search)
+    {
+        var blend = search.Blend;
+        var families = search.Definition.Families.Select(f => f.Family).ToList();
+        var plot = new Plot();
+        var series = ImmutableSortedDictionary.CreateBuilder<string, int>();
+        string reading = "No blend is stored yet: the search has not reached its blend stage.";
+        if (blend is not null)
+        {
+            var members = blend.Members.OrderBy(m => m.Weight).ToList();
+            var scores = search.Trials.ToDictionary(t => t.Id, t => t.Score);
+            var bars = members.Select((m, i) => new Bar
+            {
+                Position = i,
+                Value = m.Weight,
+                FillColor = FamilyColors.For(families, m.Family),
+                Label = m.Weight.ToString("F3", CultureInfo.InvariantCulture),
+            }).ToList();
+            var plotted = plot.Add.Bars(bars);
+            plotted.Horizontal = true;
+            plot.Axes.Left.SetTicks(
+                [.. members.Select((_, i) => (double)i)],
+                [.. members.Select(m => $"trial {m.TrialId} {m.Family} ({Score(scores, m.TrialId)})")]);
+            plot.Axes.Margins(left: 0);
+            plot.XLabel("weight (non-negative, summing to one)");
+            foreach (var group in members.GroupBy(m => m.Family))
+            {
+                series.Add(group.Key, group.Count());
+            }
+
+            string m = search.Metric.Name;
+            reading = string.Create(CultureInfo.InvariantCulture,
+                $"A member with weight 0 was in the pool but adds nothing the others lack. The blend's nested estimate is {blend.NestedScore:F5} {m} (in-sample {blend.InSampleScore:F5}, which flatters itself) against {blend.BestSingleScore:F5} for the best single trial {blend.BestSingleTrialId}: the blend is worth keeping only if that gap is larger than the noise floor below.");
+        }
+
+        return new ChartSection(Id, "Blend weights", reading, ChartSvg.Render(plot, Id), series.ToImmutable());
+    }
+
+    private static string Score(Dictionary<int, double?> scores, int id) =>
+        scores.GetValueOrDefault(id) is { } s ? s.ToString("F4", CultureInfo.InvariantCulture) : "?";
+}

@@ -1,0 +1,140 @@
+using System.Collections.Immutable;
+using System.Diagnostics;
+using System.Security.Cryptography;
+using Foldwise.Cluster.Contracts;
+using Foldwise.Cluster.Coordination;
+using Foldwise.Cluster.Telemetry;
+using Foldwise.Core.Data;
+using Foldwise.Core.Definition;
+using Foldwise.Core.Folds;
+using Foldwise.Core.Search;
+using Foldwise.Core.Spaces;
+using Foldwise.Testing.Fakes;
+using Microsoft.Extensions.DependencyInjection;
+using OpenTelemetry.Metrics;
+using OpenTelemetry.Trace;
+
+namespace Foldwise.Cluster.Tests.Telemetry;
+
+[Collection(TwoSiloCollection.Name)]
+public sealed class TelemetryTests(TwoSiloCluster fixture)
+{
+    [Fact]
+    public async Task An_in_memory_exporter_sees_search_trial_and_fold_spans_and_the_trial_metrics()
+    {
+        // Given Foldwise telemetry registered with in-memory exporters
+        var spans = new List<Activity>();
+        var metrics = new List<MetricSnapshot>();
+        using var services = new ServiceCollection()
+            .AddFoldwiseTelemetry(new FoldwiseTelemetryOptions
+            {
+                Tracing = t => t.AddInMemoryExporter(spans),
+                Metrics = m => m.AddInMemoryExporter(metrics),
+            })
+            .BuildServiceProvider();
+        var tracer = services.GetRequiredService<TracerProvider>();
+        var meter = services.GetRequiredService<MeterProvider>();
+
+        // When a search of 4 trials of 3 folds runs on both silos, and metrics are collected once mid-search and once after
+        fixture.Learner.Delay = TimeSpan.FromMilliseconds(150);
+        var session = StartSession("telemetry", trials: 4);
+        var firstDone = new TaskCompletionSource(TaskCreationOptions.RunContinuationsAsynchronously);
+        session.TrialFinished += _ => firstDone.TrySetResult();
+        await firstDone.Task.WaitAsync(TimeSpan.FromSeconds(60));
+        Assert.True(meter.ForceFlush(10_000));
+        var midSearch = metrics.Select(m => m.Name).ToHashSet();
+        var bestMid = metrics.FirstOrDefault(m => m.Name == FoldwiseTelemetry.BestScore);
+        await session.Finished.WaitAsync(TimeSpan.FromSeconds(60));
+        fixture.Coordinator.GetRequiredService<SessionRegistry>().Remove(session.SearchId);
+        Assert.True(tracer.ForceFlush(10_000));
+        Assert.True(meter.ForceFlush(10_000));
+
+        // Then there is one search span, one trial span per scored trial, and each trial span holds one span per fold
+        var mine = spans.Where(s => Equals(s.GetTagItem("foldwise.search"), session.SearchId)).ToList();
+        Assert.Single(mine, s => s.OperationName == FoldwiseTelemetry.SearchSpan);
+        var trials = mine.Where(s => s.OperationName == FoldwiseTelemetry.TrialSpan && Equals(s.GetTagItem("foldwise.outcome"), "scored")).ToList();
+        Assert.Equal([1, 2, 3, 4], trials.Select(s => (int)s.GetTagItem("foldwise.trial")!).Order());
+        Assert.Contains(trials, s => Equals(s.GetTagItem("foldwise.worker"), "worker"));
+        Assert.All(trials, trial =>
+        {
+            var folds = spans.Where(s => s.OperationName == FoldwiseTelemetry.FoldSpan && s.ParentSpanId == trial.SpanId).ToList();
+            Assert.Equal([0, 1, 2], folds.Select(f => (int)f.GetTagItem("foldwise.fold")!).Order());
+            Assert.All(folds, f => Assert.Equal(trial.TraceId, f.TraceId));
+        });
+
+        // And the metrics: trials done, durations in second-scale buckets, busy slots, queue and best score while running, Orleans' own
+        Assert.Contains(FoldwiseTelemetry.QueueLength, midSearch);
+        Assert.Contains(FoldwiseTelemetry.BusySlots, midSearch);
+        Assert.NotNull(bestMid);
+        Assert.Contains(Points(bestMid), p => HasTag(p, "family", FamilyNames.LightGbm));
+        var done = metrics.Last(m => m.Name == FoldwiseTelemetry.TrialsDone);
+        Assert.True(Points(done).Where(p => Scored(p)).Sum(p => p.GetSumLong()) >= 4);
+        var duration = metrics.Last(m => m.Name == FoldwiseTelemetry.TrialDuration);
+        Assert.Equal("s", duration.Unit);
+        var point = Points(duration).First(Scored);
+        Assert.True(point.GetHistogramCount() >= 1);
+        var bounds = new List<double>();
+        foreach (var bucket in point.GetHistogramBuckets())
+        {
+            bounds.Add(bucket.ExplicitBound);
+        }
+
+        Assert.Equal([.. FoldwiseTelemetry.DurationBuckets, double.PositiveInfinity], bounds);
+        Assert.Contains(metrics, m => m.MeterName == FoldwiseTelemetry.OrleansMeter);
+    }
+
+    private static bool Scored(MetricPoint p) => HasTag(p, "outcome", "scored");
+
+    private static bool HasTag(MetricPoint point, string key, string value)
+    {
+        foreach (var tag in point.Tags)
+        {
+            if (tag.Key == key && Equals(tag.Value, value))
+            {
+                return true;
+            }
+        }
+
+        return false;
+    }
+
+    private static List<MetricPoint> Points(MetricSnapshot metric) => [.. metric.MetricPoints];
+
+    private CoordinatorSession StartSession(string name, int trials)
+    {
+        var train = Table("train", 30, withTarget: true);
+        var test = Table("test", 6, withTarget: false);
+        var trainBytes = TableCodec.Encode(train);
+        var testBytes = TableCodec.Encode(test);
+        string trainHash = Convert.ToHexStringLower(SHA256.HashData(trainBytes));
+        string testHash = Convert.ToHexStringLower(SHA256.HashData(testBytes));
+        var shelf = fixture.Coordinator.GetRequiredService<DatasetShelf>();
+        shelf.Put(trainHash, trainBytes);
+        shelf.Put(testHash, testBytes);
+        var folds = new FoldPlan(3, 1, [.. Enumerable.Range(0, train.RowCount).Select(r => r % 3)]);
+        var definition = new SearchDefinition
+        {
+            Name = name,
+            Data = new DataSource("train.csv", "test.csv", "id", "y"),
+            Families = [new FamilySearch(FamilyNames.LightGbm, DefaultSpaces.LightGbm)],
+            Budget = new SearchBudget(trials, null),
+        };
+        var recorder = new MemoryRecorder();
+        var coordinator = new SearchCoordinator(definition, new CountingSchedule(), recorder, TimeProvider.System);
+        var manifest = new SearchManifest($"{name}-{Guid.NewGuid():N}", trainHash, testHash, 3, 1, [.. folds.FoldOfRow], "Rmsle");
+        var session = new CoordinatorSession(manifest, coordinator, recorder);
+        fixture.Coordinator.GetRequiredService<SessionRegistry>().Add(session);
+        return session;
+    }
+
+    private static FeatureTable Table(string name, int rows, bool withTarget)
+    {
+        var column = new SparseColumn([.. Enumerable.Range(0, rows).Where(r => r % 2 == 0)], [.. Enumerable.Range(0, rows).Where(r => r % 2 == 0).Select(r => (float)r)]);
+        return new FeatureTable(
+            name,
+            [.. Enumerable.Range(0, rows).Select(r => $"{name}{r}")],
+            ["f1"],
+            [column],
+            withTarget ? [.. Enumerable.Range(0, rows).Select(r => (double)r)] : ImmutableArray<double>.Empty);
+    }
+}
