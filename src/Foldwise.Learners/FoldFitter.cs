@@ -12,6 +12,13 @@ namespace Foldwise.Learners;
 /// </summary>
 internal static class FoldFitter
 {
+    /// <summary>
+    /// One fit at a time per process. ML.NET already serialises LightGBM training (STACK-NOTES), and concurrent fits
+    /// of the two families in one test process crashed the process natively (seen 2026-12-02); a slot that wants its
+    /// own cores in parallel runs in a process of its own (<c>foldwise worker</c>).
+    /// </summary>
+    private static readonly Lock OneFitAtATime = new();
+
     public static FoldPrediction Fit(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation)
     {
         Check(family, job);
@@ -26,11 +33,14 @@ internal static class FoldFitter
         var trainView = SparseViews.Rows(ml, data.Train, job.TrainRows, centred);
 
         // ML.NET 5's public API offers no way to interrupt a fit, so cancellation is honoured around it.
-        var model = train(ml, trainView);
-        cancellation.ThrowIfCancellationRequested();
-        var validation = Score(model, SparseViews.Rows(ml, data.Train, job.ValidationRows, labels: null), job.ValidationRows.Length, offset);
-        var test = Score(model, SparseViews.Test(data), data.Test.RowCount, offset);
-        return new FoldPrediction(validation, test);
+        lock (OneFitAtATime)
+        {
+            var model = train(ml, trainView);
+            cancellation.ThrowIfCancellationRequested();
+            var validation = Score(model, SparseViews.Rows(ml, data.Train, job.ValidationRows, labels: null), job.ValidationRows.Length, offset);
+            var test = Score(model, SparseViews.Test(data), data.Test.RowCount, offset);
+            return new FoldPrediction(validation, test);
+        }
     }
 
     /// <summary>Refuses a job before any training: the coordinator's values are checked, never trusted.</summary>
