@@ -20,7 +20,7 @@ public sealed class SearchRun(IAnsiConsole console)
     public async Task<int> RunNewAsync(SearchDefinition definition, string outDir, int slots, int? threads, CancellationToken cancellation)
     {
         string storePath = StoreFile.PathIn(outDir);
-        if (File.Exists(storePath))
+        if (File.Exists(storePath) && !DiscardUnstarted(storePath))
         {
             throw new InputException(storePath, "a search is already stored here; continue it with 'foldwise resume' or choose another --out");
         }
@@ -56,7 +56,7 @@ public sealed class SearchRun(IAnsiConsole console)
         string storePath = Path.GetFullPath(StoreFile.Resolve(storeOrFolder));
         string outDir = Path.GetDirectoryName(storePath)!;
         using var store = SearchStore.Open(storePath);
-        var header = store.LoadHeader() ?? throw new StoreException($"{storePath} holds no search header: the search never got past its start. Run it again with 'foldwise run'.");
+        var header = store.LoadHeader() ?? throw new StoreException($"{storePath} holds no search header: it was stopped before its first record, so no trial ran. Start it again with 'foldwise run' (the same --out works).");
         var definition = DefinitionReader.Parse(header.DefinitionJson, storePath, outDir);
         if (header.Finished)
         {
@@ -79,6 +79,32 @@ public sealed class SearchRun(IAnsiConsole console)
                            $"{before.Count(t => t.State is TrialState.Running or TrialState.Queued)} to run again, " +
                            $"{TimeSpan.FromSeconds(header.SpentSeconds):hh\\:mm\\:ss} spent before.");
         return await RunAsync(store, header, definition, train, test, trainBytes, testBytes, outDir, slots, threads, cancellation);
+    }
+
+    /// <summary>
+    /// A store without a header was killed between its creation and its first record: no trial ever ran, so
+    /// <c>run</c> may start over it. Returns false (keep it) for anything else, including a file that is no store.
+    /// </summary>
+    private static bool DiscardUnstarted(string storePath)
+    {
+        try
+        {
+            using (var store = SearchStore.Open(storePath))
+            {
+                if (store.LoadHeader() is not null)
+                {
+                    return false;
+                }
+            }
+        }
+        catch (StoreException)
+        {
+            return false;
+        }
+
+        File.Delete(storePath);
+        File.Delete(Path.Combine(Path.GetDirectoryName(storePath)!, Path.GetFileNameWithoutExtension(storePath) + "-log" + Path.GetExtension(storePath)));
+        return true;
     }
 
     internal async Task<int> RunAsync(
