@@ -65,12 +65,14 @@ checks=0 opened=0 lost=0 dupes=0 early=0 finished_before=0
 prev=-
 for ((c = 1; c <= cycles; c++)); do
   if [[ -f out/search.db ]] && fw history out --json > /dev/null 2>&1; then cmd=(resume out); else cmd=(run search.json --out out); fi
-  fw "${cmd[@]}" > "cycle$c.log" 2>&1 &
+  # dotnet itself in the background (not a shell function's subshell), so the SIGKILL reaches the coordinator.
+  dotnet "$dll" "${cmd[@]}" > "cycle$c.log" 2>&1 &
   pid=$!
   delay=$(printf '%d.%03d' $((1 + RANDOM % 6)) $((RANDOM % 1000)))
   sleep "$delay"
   if kill -0 "$pid" 2> /dev/null; then kill -9 "$pid"; else finished_before=$((finished_before + 1)); fi
   wait "$pid" 2> /dev/null || true
+  if kill -0 "$pid" 2> /dev/null; then echo "cycle $c: a foldwise process outlived its kill" >&2; exit 2; fi
   if [[ ! -f out/search.db ]]; then
     early=$((early + 1)); echo "cycle $c: killed after ${delay}s (${cmd[0]}), before the store existed"; continue
   fi
@@ -92,7 +94,9 @@ fw "${final_cmd[@]}" > final.log 2>&1 && final_rc=0 || final_rc=$?
 fw history out --json > final.json
 read -r l d done < <(check final.json "$prev")
 lost=$((lost + l)); dupes=$((dupes + d))
-rows=$(($(wc -l < out/predictions.csv) - 1))
+rows=0
+[[ -f out/predictions.csv ]] && rows=$(($(wc -l < out/predictions.csv) - 1))
+[[ $final_rc -eq 0 ]] || { echo "final ${final_cmd[0]} failed:"; tail -5 final.log; }
 same=skipped
 if [[ $reference == yes ]]; then
   fw run search.json --out ref > ref.log 2>&1
