@@ -68,7 +68,7 @@ for ((c = 1; c <= cycles; c++)); do
   # dotnet itself in the background (not a shell function's subshell), so the SIGKILL reaches the coordinator.
   dotnet "$dll" "${cmd[@]}" > "cycle$c.log" 2>&1 &
   pid=$!
-  delay=$(printf '%d.%03d' $((1 + RANDOM % 6)) $((RANDOM % 1000)))
+  delay=$(printf '%d.%03d' $((1 + RANDOM % 9)) $((RANDOM % 1000)))
   sleep "$delay"
   if kill -0 "$pid" 2> /dev/null; then kill -9 "$pid"; else finished_before=$((finished_before + 1)); fi
   wait "$pid" 2> /dev/null || true
