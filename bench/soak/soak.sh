@@ -1,13 +1,13 @@
 #!/usr/bin/env bash
 # Kill-and-resume soak: SIGKILLs a small search at random moments, resumes it each time, and checks the store.
-#   bench/soak/soak.sh [CYCLES=20] [TRIALS=200] [--no-reference]
+#   bench/soak/soak.sh [CYCLES=20] [TRIALS=800] [--no-reference]
 # Reports: cycles, store opened every time, trials lost (must be 0), duplicates (must be 0), and whether the
 # resumed search equals an uninterrupted run of the same definition (one slot, same seed).
 # FOLDWISE_DLL points at foldwise.dll (default: the Release build of src/Foldwise.Cli, built if missing).
 # Exit 0 only when nothing was lost, nothing duplicated, the store always opened and the search completed.
 set -euo pipefail
 cycles=${1:-20}
-trials=${2:-200}
+trials=${2:-800}
 reference=yes
 [[ "${3:-}" == "--no-reference" ]] && reference=no
 here=$(cd "$(dirname "$0")" && pwd)
