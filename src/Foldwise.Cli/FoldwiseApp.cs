@@ -16,6 +16,9 @@ public static class FoldwiseApp
         config.AddCommand<DemoCommand>("demo")
             .WithDescription("Write the invented freight demo tables and definition into a folder, then run that search.")
             .WithExample("demo", "--quick", "--out", "runs/demo");
+        config.AddCommand<ResumeCommand>("resume")
+            .WithDescription("Continue an interrupted search from its store: done trials are kept, running ones run again, budgets go on from what was spent.")
+            .WithExample("resume", "runs/demo");
         config.AddCommand<HistoryCommand>("history")
             .WithDescription("List a search's trials, best first (works while the search runs).")
             .WithExample("history", "runs/demo/search.db");

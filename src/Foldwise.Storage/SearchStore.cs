@@ -53,8 +53,17 @@ public sealed partial class SearchStore : ISearchRecorder, IDisposable
                     $"{full} already exists: that directory holds a search already. Resume it, or choose another output directory.");
             }
 
+            // The format record is written under a temporary name and the file renamed into place, so a kill
+            // mid-creation never leaves a search.db without its format record (which no command could open again).
+            string partial = full + ".new";
+            File.Delete(partial);
+            using (var creating = Connect(partial, readOnly: false))
+            {
+                StoreFormat.Write(creating);
+            }
+
+            File.Move(partial, full);
             db = Connect(full, readOnly: false);
-            StoreFormat.Write(db);
             return new SearchStore(full, db, writerLock, StoreFormat.ToolVersion);
         }
         catch (Exception ex) when (ex is not StoreException)

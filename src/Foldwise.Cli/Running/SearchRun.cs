@@ -26,7 +26,7 @@ public sealed class SearchRun(IAnsiConsole console)
     public async Task<int> RunNewAsync(SearchDefinition definition, string outDir, int slots, int? threads, CancellationToken cancellation)
     {
         string storePath = StoreFile.PathIn(outDir);
-        if (File.Exists(storePath))
+        if (File.Exists(storePath) && !DiscardUnstarted(storePath))
         {
             throw new InputException(storePath, "a search is already stored here; continue it with 'foldwise resume' or choose another --out");
         }
@@ -51,6 +51,66 @@ public sealed class SearchRun(IAnsiConsole console)
         store.SaveHeader(header);
         store.SaveScreening(prepared.Screening);
         return await RunAsync(store, header, definition, prepared.Train, prepared.Test, prepared.TrainBytes, prepared.TestBytes, outDir, slots, threads, cancellation);
+    }
+
+    /// <summary>
+    /// Continues a stored search: done trials stay as they are, running ones are queued again, and the trial and
+    /// hour budgets go on from what was spent. A finished search is left alone unless <paramref name="reblend"/>.
+    /// </summary>
+    public async Task<int> ResumeAsync(string storeOrFolder, int slots, int? threads, bool reblend, CancellationToken cancellation)
+    {
+        string storePath = Path.GetFullPath(StoreFile.Resolve(storeOrFolder));
+        string outDir = Path.GetDirectoryName(storePath)!;
+        using var store = SearchStore.Open(storePath);
+        var header = store.LoadHeader() ?? throw new StoreException($"{storePath} holds no search header: it was stopped before its first record, so no trial ran. Start it again with 'foldwise run' (the same --out works).");
+        var definition = DefinitionReader.Parse(header.DefinitionJson, storePath, outDir);
+        if (header.Finished)
+        {
+            string predictions = Path.Combine(outDir, BlendStep.PredictionFileName);
+            if (!reblend)
+            {
+                console.MarkupLine($"Search [bold]{Markup.Escape(header.SearchId)}[/] finished already; its predictions are in [bold]{Markup.Escape(predictions)}[/]. " +
+                                   "Nothing to resume ('--blend' blends its trials again).");
+                return ExitCodes.Ok;
+            }
+
+            BlendStep.Run(store, header, definition, outDir, console);
+            return ExitCodes.Ok;
+        }
+
+        var (train, trainBytes) = TableFiles.Read(outDir, header.TrainHash, "training");
+        var (test, testBytes) = TableFiles.Read(outDir, header.TestHash, "test");
+        var before = store.LoadTrials();
+        console.MarkupLine($"Resuming [bold]{Markup.Escape(header.SearchId)}[/]: {before.Count(t => t.State == TrialState.Done)} trial(s) done, " +
+                           $"{before.Count(t => t.State is TrialState.Running or TrialState.Queued)} to run again, " +
+                           $"{TimeSpan.FromSeconds(header.SpentSeconds):hh\\:mm\\:ss} spent before.");
+        return await RunAsync(store, header, definition, train, test, trainBytes, testBytes, outDir, slots, threads, cancellation);
+    }
+
+    /// <summary>
+    /// A store without a header was killed between its creation and its first record: no trial ever ran, so
+    /// <c>run</c> may start over it. Returns false (keep it) for anything else, including a file that is no store.
+    /// </summary>
+    private static bool DiscardUnstarted(string storePath)
+    {
+        try
+        {
+            using (var store = SearchStore.Open(storePath))
+            {
+                if (store.LoadHeader() is not null)
+                {
+                    return false;
+                }
+            }
+        }
+        catch (StoreException)
+        {
+            return false;
+        }
+
+        File.Delete(storePath);
+        File.Delete(Path.Combine(Path.GetDirectoryName(storePath)!, Path.GetFileNameWithoutExtension(storePath) + "-log" + Path.GetExtension(storePath)));
+        return true;
     }
 
     internal async Task<int> RunAsync(

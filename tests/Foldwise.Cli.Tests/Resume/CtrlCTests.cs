@@ -1,0 +1,77 @@
+using System.Diagnostics;
+using Foldwise.Cli.Tests.Processes;
+
+namespace Foldwise.Cli.Tests.Resume;
+
+[Collection(ResumeProcesses.Name)]
+public sealed class CtrlCTests : IDisposable
+{
+    private static readonly TimeSpan Patience = TimeSpan.FromSeconds(120);
+    private readonly Workspace workspace = new();
+
+    public void Dispose() => workspace.Dispose();
+
+    [Fact]
+    public async Task One_ctrl_c_blends_what_is_done_two_abandon_with_130_and_resume_continues_after_either()
+    {
+        // Given a search whose trials take long enough (600 rows, 30–90 rounds) for a signal to land mid-trial
+        workspace.WriteTables(trainRows: 600);
+        string definition = workspace.Write("search.json", """
+            {
+              "name": "ctrl-c",
+              "data": { "train": "train.csv", "test": "test.csv", "id": "id", "target": "y" },
+              "folds": 3,
+              "screening": { "min_nonzero": 2 },
+              "families": { "lightgbm": { "min_leaf_rows": 3 }, "fasttree": { "min_leaf_rows": 3 } },
+              "schedule": { "kind": "asha", "proposer": "random", "min_rounds": 30, "max_rounds": 90, "eta": 3 },
+              "budget": { "trials": 9 }
+            }
+            """);
+        string store = Path.Combine(workspace.Out, "search.db");
+
+        // When Ctrl-C is pressed once after the first trial
+        using (var run = FoldwiseProcess.Start("run", definition, "--out", workspace.Out))
+        {
+            Assert.True(await ResumeAfterKillTests.WaitForTrialLinesAsync(run, 1), run.Output);
+            await InterruptAsync(run.Id);
+
+            // Then running trials finish, the blend runs and the run exits 0 short of its budget
+            Assert.True(await run.WaitForExitAsync(Patience) == 0, run.Output);
+            Assert.Contains(run.Lines, l => l.StartsWith("Stopping: no new trials", StringComparison.Ordinal));
+            Assert.Contains(run.Lines, l => l.Contains("stopped by request", StringComparison.Ordinal));
+            Assert.True(File.Exists(Path.Combine(workspace.Out, "predictions.csv")));
+        }
+
+        int afterFirst = StoredTrial.Read(store).Count(t => t.State == "done");
+        Assert.InRange(afterFirst, 1, 8);
+
+        // When the search is resumed and Ctrl-C is pressed twice during a trial
+        using (var resume = FoldwiseProcess.Start("resume", workspace.Out))
+        {
+            Assert.True(await resume.WaitForLineAsync(ResumeAfterKillTests.IsTrialLine, Patience), resume.Output);
+            await InterruptAsync(resume.Id);
+            Assert.True(await resume.WaitForLineAsync(l => l.StartsWith("Stopping:", StringComparison.Ordinal), Patience), resume.Output);
+            await InterruptAsync(resume.Id);
+
+            // Then it abandons the running trial and exits 130
+            Assert.True(await resume.WaitForExitAsync(Patience) == 130, resume.Output);
+            Assert.Contains(resume.Lines, l => l.StartsWith("Abandoned:", StringComparison.Ordinal));
+        }
+
+        // When it is resumed once more, then it reaches its budget with every trial done once
+        using var last = FoldwiseProcess.Start("resume", workspace.Out);
+        Assert.True(await last.WaitForExitAsync(Patience) == 0, last.Output);
+        var trials = StoredTrial.Read(store);
+        Assert.Equal(9, trials.Count);
+        Assert.All(trials, t => Assert.Equal("done", t.State));
+        Assert.Equal(9, trials.Select(t => t.WorkKey).Distinct().Count());
+    }
+
+    /// <summary>SIGINT, what a terminal sends on Ctrl-C.</summary>
+    private static async Task InterruptAsync(int pid)
+    {
+        using var kill = Process.Start("kill", ["-INT", pid.ToString(System.Globalization.CultureInfo.InvariantCulture)]);
+        await kill.WaitForExitAsync();
+        Assert.Equal(0, kill.ExitCode);
+    }
+}
