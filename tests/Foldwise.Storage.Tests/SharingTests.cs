@@ -33,23 +33,31 @@ public sealed class SharingTests : IDisposable
         using var writer = SearchStore.Create(_dir.StorePath);
         using var reader = SearchStore.OpenReadOnly(_dir.StorePath);
         using var stop = new CancellationTokenSource();
-        var seen = new List<int>();
+        var seen = new System.Collections.Concurrent.ConcurrentQueue<int>();
+        var firstRead = new TaskCompletionSource(TaskCreationOptions.RunContinuationsAsynchronously);
         var polling = Task.Run(() =>
         {
             while (!stop.IsCancellationRequested)
             {
                 var ids = reader.LoadTrials().Select(t => t.Id).ToList();
                 Assert.Equal(Enumerable.Range(1, ids.Count), ids); // saved in order, so always a prefix
-                seen.Add(ids.Count);
+                seen.Enqueue(ids.Count);
+                firstRead.TrySetResult();
             }
         });
 
-        // When the writer saves 300 trials (more than a page of LoadTrials) meanwhile
+        // When the writer saves 300 trials (more than a page of LoadTrials) meanwhile, once the reader is polling
+        // (pausing now and then, so a loaded machine still interleaves the two)
+        await firstRead.Task.WaitAsync(TimeSpan.FromSeconds(30));
         var writing = Task.Run(() =>
         {
             for (int id = 1; id <= 300; id++)
             {
                 writer.Save(SampleTrials.Done(id));
+                if (id % 25 == 0)
+                {
+                    Thread.Sleep(20);
+                }
             }
         });
 
@@ -58,7 +66,7 @@ public sealed class SharingTests : IDisposable
         await stop.CancelAsync();
         await polling.WaitAsync(TimeSpan.FromSeconds(30));
         Assert.Equal(300, reader.LoadTrials().Count);
-        Assert.Equal(seen.Order(), seen);
+        Assert.Equal(seen.Order(), seen.ToArray());
         Assert.Contains(seen, n => n is > 0 and < 300);
     }
 

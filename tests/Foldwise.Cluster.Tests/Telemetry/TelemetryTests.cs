@@ -46,6 +46,12 @@ public sealed class TelemetryTests(TwoSiloCluster fixture)
         var bestMid = metrics.FirstOrDefault(m => m.Name == FoldwiseTelemetry.BestScore);
         await session.Finished.WaitAsync(TimeSpan.FromSeconds(60));
         fixture.Coordinator.GetRequiredService<SessionRegistry>().Remove(session.SearchId);
+        // A slot closes its trial span just after the coordinator has the result, so the last one may trail the finish.
+        for (int wait = 0; wait < 100 && spans.Count(s => s.OperationName == FoldwiseTelemetry.TrialSpan && Equals(s.GetTagItem("foldwise.search"), session.SearchId)) < 4; wait++)
+        {
+            await Task.Delay(50);
+        }
+
         Assert.True(tracer.ForceFlush(10_000));
         Assert.True(meter.ForceFlush(10_000));
 
