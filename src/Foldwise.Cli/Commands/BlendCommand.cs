@@ -2,6 +2,7 @@ using System.Text.Json;
 using System.Text.Json.Nodes;
 using Foldwise.Cli.Output;
 using Foldwise.Cli.Running;
+using Foldwise.Cli.Report;
 using Foldwise.Core.Definition;
 using Foldwise.Storage;
 using Spectre.Console;
@@ -19,8 +20,7 @@ public sealed class BlendCommand(IAnsiConsole console) : Command<BlendSettings>
     {
         string path = StoreFile.Resolve(settings.Store);
         using var store = SearchStore.Open(path);
-        var header = store.LoadHeader() ?? throw new InvalidOperationException($"{path} holds no search header");
-        var definition = DefinitionReader.Parse(header.DefinitionJson, path, Path.GetDirectoryName(Path.GetFullPath(path))!);
+        var (header, definition) = StoredSearch.HeaderOf(store);
         var options = new BlendOptions(settings.ParsedMode ?? definition.Blend.Mode, settings.Pool ?? definition.Blend.Pool);
         var quiet = settings.Json ? new QuietConsole().Console : console;
         var blend = BlendStep.Run(store, header, definition, Path.GetDirectoryName(Path.GetFullPath(path))!, quiet, options);

@@ -1,4 +1,5 @@
 using System.Globalization;
+using Foldwise.Cli.Report;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Metrics;
 using Foldwise.Core.Search;
@@ -18,8 +19,7 @@ public sealed class ExportCommand(IAnsiConsole console) : Command<ExportSettings
     {
         string path = StoreFile.Resolve(settings.Store);
         using var store = SearchStore.OpenReadOnly(path);
-        var header = store.LoadHeader() ?? throw new InvalidOperationException($"{path} holds no search header");
-        var definition = DefinitionReader.Parse(header.DefinitionJson, path, Path.GetDirectoryName(Path.GetFullPath(path))!);
+        var (header, definition) = StoredSearch.HeaderOf(store);
         var metric = Metric.For(definition.Metric);
         var trials = store.LoadTrials()
             .Where(t => t.State == TrialState.Done && t.Budget == definition.Schedule.MaxBudget)

@@ -1,8 +1,7 @@
 using Foldwise.Cli.Output;
-using Foldwise.Core.Definition;
+using Foldwise.Cli.Report;
 using Foldwise.Core.Metrics;
 using Foldwise.Core.Search;
-using Foldwise.Storage;
 using Spectre.Console;
 using Spectre.Console.Cli;
 
@@ -13,10 +12,9 @@ public sealed class HistoryCommand(IAnsiConsole console) : Command<HistorySettin
 {
     public override int Execute(CommandContext context, HistorySettings settings, CancellationToken cancellationToken)
     {
-        using var store = SearchStore.OpenReadOnly(StoreFile.Resolve(settings.Store));
-        var header = store.LoadHeader() ?? throw new InvalidOperationException("the store has no search header");
-        var definition = DefinitionReader.Parse(header.DefinitionJson, StoreFile.Resolve(settings.Store), Path.GetDirectoryName(Path.GetFullPath(StoreFile.Resolve(settings.Store)))!);
-        var trials = Filter(store.LoadTrials(), settings);
+        var search = StoredSearch.Load(settings.Store);
+        var definition = search.Definition;
+        var trials = Filter(search.Trials, settings);
         if (settings.Json)
         {
             console.Profile.Out.Writer.WriteLine(TrialJson.Write(trials));

@@ -32,10 +32,16 @@ public sealed record StoredSearch(
 
     public static StoredSearch Load(SearchStore store)
     {
+        var (header, definition) = HeaderOf(store);
+        return new StoredSearch(store.FilePath, header, definition, store.LoadTrials(), store.LoadScreening(), store.LoadBlend());
+    }
+
+    /// <summary>The search's header and its definition as stored (paths in it are absolute already).</summary>
+    public static (SearchHeader Header, SearchDefinition Definition) HeaderOf(SearchStore store)
+    {
         ArgumentNullException.ThrowIfNull(store);
         var header = store.LoadHeader() ?? throw new StoreException($"{store.FilePath} holds no search yet (no header).");
-        var definition = DefinitionReader.Parse(header.DefinitionJson, store.FilePath, Path.GetDirectoryName(store.FilePath)!);
-        return new StoredSearch(store.FilePath, header, definition, store.LoadTrials(), store.LoadScreening(), store.LoadBlend());
+        return (header, DefinitionReader.Parse(header.DefinitionJson, store.FilePath, Path.GetDirectoryName(store.FilePath)!));
     }
 
     /// <summary>The space a family's trials were drawn from, or null for a family the definition does not name.</summary>
