@@ -20,9 +20,10 @@ public sealed class DistributedSearchTests(TwoSiloCluster fixture)
     public async Task Runs_every_trial_exactly_once_across_both_silos_and_ships_the_tables_by_hash()
     {
         // Given a search of 12 trials on a coordinator silo and a worker silo, each with one slot
-        var (train, test) = (Table("train", 30, withTarget: true), Table("test", 10, withTarget: false));
+        var tables = SearchSessions.Tables();
+        var train = tables.Train;
         var recorder = new MemoryRecorder();
-        var session = StartSession("ship", train, test, trials: 12, recorder);
+        var session = SearchSessions.Start(fixture, "ship", tables, trials: 12, recorder);
         fixture.Learner.Delay = TimeSpan.FromMilliseconds(40);
 
         // When the search runs to its budget
@@ -45,7 +46,7 @@ public sealed class DistributedSearchTests(TwoSiloCluster fixture)
     public async Task Reports_progress_through_the_search_grain()
     {
         var recorder = new MemoryRecorder();
-        var session = StartSession("progress", Table("train", 30, true), Table("test", 5, false), trials: 3, recorder);
+        var session = SearchSessions.Start(fixture, "progress", SearchSessions.Tables(), trials: 3, recorder);
         await session.Finished.WaitAsync(TimeSpan.FromSeconds(60));
 
         var progress = await fixture.Cluster.Client.GetGrain<ISearchGrain>(session.SearchId).GetProgressAsync();
@@ -57,38 +58,5 @@ public sealed class DistributedSearchTests(TwoSiloCluster fixture)
         Assert.True(progress.BestByFamily.ContainsKey(FamilyNames.LightGbm));
     }
 
-    private CoordinatorSession StartSession(string name, FeatureTable train, FeatureTable test, int trials, MemoryRecorder recorder)
-    {
-        var trainBytes = TableCodec.Encode(train);
-        var testBytes = TableCodec.Encode(test);
-        string trainHash = Convert.ToHexStringLower(SHA256.HashData(trainBytes));
-        string testHash = Convert.ToHexStringLower(SHA256.HashData(testBytes));
-        var shelf = fixture.Coordinator.GetRequiredService<DatasetShelf>();
-        shelf.Put(trainHash, trainBytes);
-        shelf.Put(testHash, testBytes);
-        var folds = new FoldPlan(3, 1, [.. Enumerable.Range(0, train.RowCount).Select(r => r % 3)]);
-        var definition = new SearchDefinition
-        {
-            Name = name,
-            Data = new DataSource("train.csv", "test.csv", "id", "y"),
-            Families = [new FamilySearch(FamilyNames.LightGbm, DefaultSpaces.LightGbm)],
-            Budget = new SearchBudget(trials, null),
-        };
-        var coordinator = new SearchCoordinator(definition, new CountingSchedule(), recorder, TimeProvider.System);
-        var manifest = new SearchManifest($"{name}-{Guid.NewGuid():N}", trainHash, testHash, 3, 1, [.. folds.FoldOfRow], "Rmsle");
-        var session = new CoordinatorSession(manifest, coordinator, recorder);
-        fixture.Coordinator.GetRequiredService<SessionRegistry>().Add(session);
-        return session;
-    }
 
-    private static FeatureTable Table(string name, int rows, bool withTarget)
-    {
-        var column = new SparseColumn([.. Enumerable.Range(0, rows).Where(r => r % 2 == 0)], [.. Enumerable.Range(0, rows).Where(r => r % 2 == 0).Select(r => (float)r)]);
-        return new FeatureTable(
-            name,
-            [.. Enumerable.Range(0, rows).Select(r => $"{name}{r}")],
-            ["f1"],
-            [column],
-            withTarget ? [.. Enumerable.Range(0, rows).Select(r => (double)r)] : ImmutableArray<double>.Empty);
-    }
 }

@@ -37,7 +37,7 @@ public sealed class TelemetryTests(TwoSiloCluster fixture)
 
         // When a search of 4 trials of 3 folds runs on both silos, and metrics are collected once mid-search and once after
         fixture.Learner.Delay = TimeSpan.FromMilliseconds(150);
-        var session = StartSession("telemetry", trials: 4);
+        var session = SearchSessions.Start(fixture, "telemetry", SearchSessions.Tables(), trials: 4, new MemoryRecorder());
         var firstDone = new TaskCompletionSource(TaskCreationOptions.RunContinuationsAsynchronously);
         session.TrialFinished += _ => firstDone.TrySetResult();
         await firstDone.Task.WaitAsync(TimeSpan.FromSeconds(60));
@@ -106,41 +106,5 @@ public sealed class TelemetryTests(TwoSiloCluster fixture)
 
     private static List<MetricPoint> Points(MetricSnapshot metric) => [.. metric.MetricPoints];
 
-    private CoordinatorSession StartSession(string name, int trials)
-    {
-        var train = Table("train", 30, withTarget: true);
-        var test = Table("test", 6, withTarget: false);
-        var trainBytes = TableCodec.Encode(train);
-        var testBytes = TableCodec.Encode(test);
-        string trainHash = Convert.ToHexStringLower(SHA256.HashData(trainBytes));
-        string testHash = Convert.ToHexStringLower(SHA256.HashData(testBytes));
-        var shelf = fixture.Coordinator.GetRequiredService<DatasetShelf>();
-        shelf.Put(trainHash, trainBytes);
-        shelf.Put(testHash, testBytes);
-        var folds = new FoldPlan(3, 1, [.. Enumerable.Range(0, train.RowCount).Select(r => r % 3)]);
-        var definition = new SearchDefinition
-        {
-            Name = name,
-            Data = new DataSource("train.csv", "test.csv", "id", "y"),
-            Families = [new FamilySearch(FamilyNames.LightGbm, DefaultSpaces.LightGbm)],
-            Budget = new SearchBudget(trials, null),
-        };
-        var recorder = new MemoryRecorder();
-        var coordinator = new SearchCoordinator(definition, new CountingSchedule(), recorder, TimeProvider.System);
-        var manifest = new SearchManifest($"{name}-{Guid.NewGuid():N}", trainHash, testHash, 3, 1, [.. folds.FoldOfRow], "Rmsle");
-        var session = new CoordinatorSession(manifest, coordinator, recorder);
-        fixture.Coordinator.GetRequiredService<SessionRegistry>().Add(session);
-        return session;
-    }
 
-    private static FeatureTable Table(string name, int rows, bool withTarget)
-    {
-        var column = new SparseColumn([.. Enumerable.Range(0, rows).Where(r => r % 2 == 0)], [.. Enumerable.Range(0, rows).Where(r => r % 2 == 0).Select(r => (float)r)]);
-        return new FeatureTable(
-            name,
-            [.. Enumerable.Range(0, rows).Select(r => $"{name}{r}")],
-            ["f1"],
-            [column],
-            withTarget ? [.. Enumerable.Range(0, rows).Select(r => (double)r)] : ImmutableArray<double>.Empty);
-    }
 }
