@@ -18,6 +18,6 @@ public static class DemoDefinition
         Schedule = quick
             ? new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, MinBudget: 20, MaxBudget: 180, Eta: 3)
             : new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, MinBudget: 25, MaxBudget: 400, Eta: 3),
-        Budget = quick ? new SearchBudget(Trials: 24, Hours: null) : new SearchBudget(Trials: 60, Hours: 3),
+        Budget = quick ? new SearchBudget(Trials: 40, Hours: null) : new SearchBudget(Trials: 60, Hours: 3),
     };
 }
