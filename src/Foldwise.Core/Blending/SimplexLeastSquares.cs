@@ -121,21 +121,7 @@ public static class SimplexLeastSquares
         for (bool firstStep = true; ; firstStep = false)
         {
             var z = OnSupport(e, support);
-            int blocking = -1;
-            double step = 1;
-            for (int p = 0; p < support.Count; p++)
-            {
-                if (z[p] <= 0)
-                {
-                    int j = support[p];
-                    double ratio = w[j] / (w[j] - z[p]);
-                    if (ratio < step || blocking < 0)
-                    {
-                        step = Math.Min(step, ratio);
-                        blocking = j;
-                    }
-                }
-            }
+            int blocking = ActiveSetStep.Blocking(w, support, z, out double step);
 
             if (blocking < 0)
             {
