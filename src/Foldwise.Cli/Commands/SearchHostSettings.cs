@@ -55,6 +55,7 @@ public class SearchHostSettings : CommandSettings
             SiloPort = Port ?? 0,
             GatewayPort = GatewayPort ?? (Port is { } port ? port + 1 : 0),
             Advertise = advertise,
+            SiloName = $"coordinator@{Environment.MachineName}",
             Certificate = ClusterTrust.Load(Cert, Passphrase),
         };
     }

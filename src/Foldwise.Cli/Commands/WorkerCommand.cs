@@ -24,17 +24,18 @@ public sealed class WorkerCommand(IAnsiConsole console) : AsyncCommand<WorkerSet
             throw new InputException("--join", e.Message);
         }
 
+        var options = new WorkerOptions { Slots = settings.Slots, ThreadsPerSlot = settings.Threads };
+        options.Name = settings.Name ?? options.Name;
+        options.CacheDirectory = settings.Cache ?? options.CacheDirectory;
         var role = new ClusterRole
         {
             IsCoordinator = false,
             Join = join,
             SiloPort = settings.Port,
             Advertise = settings.Advertise is { } advertise ? IPAddress.Parse(advertise) : LocalAddress.Facing(join),
+            SiloName = options.Name,
             Certificate = ClusterTrust.Load(settings.Cert, settings.Passphrase),
         };
-        var options = new WorkerOptions { Slots = settings.Slots, ThreadsPerSlot = settings.Threads };
-        options.Name = settings.Name ?? options.Name;
-        options.CacheDirectory = settings.Cache ?? options.CacheDirectory;
 
         using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancellationToken);
         using var sigterm = PosixSignalRegistration.Create(PosixSignal.SIGTERM, s => { s.Cancel = true; stop.Cancel(); });

@@ -72,6 +72,8 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
         builder.UseOrleans(silo => silo.UseFoldwiseClustering(role));
         builder.Services.AddFoldwiseWorker(options, LearnerCatalog.BuiltIn);
         builder.Services.ExcludeCoordinatorGrains();
+        // Registered after UseOrleans so it replaces Orleans' handler, which would end the whole process.
+        builder.Services.AddSingleton<IFatalErrorHandler, StopSiloOnFatalError>();
         return builder.Build();
     }
 

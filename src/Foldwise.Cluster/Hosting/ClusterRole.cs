@@ -27,6 +27,9 @@ public sealed class ClusterRole
     /// <summary>Shared by every silo of one Foldwise cluster.</summary>
     public string ClusterId { get; init; } = "foldwise";
 
+    /// <summary>How this silo is named in membership lines ("joined: 10.0.0.7:11111 (office-pc-3)"). Null keeps Orleans' generated name.</summary>
+    public string? SiloName { get; init; }
+
     /// <summary>The cluster certificate; when set, silos talk only over mutual TLS with peers holding it.</summary>
     public X509Certificate2? Certificate { get; init; }
 }

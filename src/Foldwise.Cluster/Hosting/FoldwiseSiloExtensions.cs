@@ -32,6 +32,11 @@ public static class FoldwiseSiloExtensions
             o.ClusterId = role.ClusterId;
             o.ServiceId = role.ClusterId;
         });
+        if (role.SiloName is { Length: > 0 } name)
+        {
+            silo.Configure<SiloOptions>(o => o.SiloName = name);
+        }
+
         silo.Configure<ClusterMembershipOptions>(o =>
         {
             // Orleans 10 adapts each probe's timeout between MinProbeTimeout and MaxProbeTimeout (by default

@@ -44,7 +44,7 @@ public sealed partial class SlotRunner(
             catch (Exception e) when (e is not OperationCanceledException)
             {
                 // The coordinator may be restarting or unreachable: wait and ask again.
-                LogCoordinatorUnreachable(slot, e.Message);
+                LogCoordinatorUnreachable(slot, e.Message.Split('\n')[0].Trim());
                 await DelayQuietly(backoff, stopping);
                 backoff = TimeSpan.FromTicks(Math.Min(MaxBackoff.Ticks, backoff.Ticks * 2));
             }

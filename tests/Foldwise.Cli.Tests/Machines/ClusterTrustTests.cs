@@ -33,6 +33,7 @@ public sealed class ClusterTrustTests(ITestOutputHelper output)
         // When a worker with the certificate joins, it becomes a member
         using var member = FoldwiseProcess.Start("worker", "--join", $"127.0.0.1:{port}", "--name", "member", "--cert", pfx, "--passphrase", "test-passphrase");
         Assert.True(await WaitFor(() => coordinator.Members.Active.Count == 2, TimeSpan.FromSeconds(40)), member.Output);
+        Assert.Contains(coordinator.Members.Active, m => m.EndsWith("(member)", StringComparison.Ordinal));
 
         // And when it is SIGKILLed, the coordinator declares it dead within 30 s
         var clock = Stopwatch.StartNew();
@@ -40,6 +41,29 @@ public sealed class ClusterTrustTests(ITestOutputHelper output)
         bool noticed = await WaitFor(() => coordinator.Members.Active.Count == 1, TimeSpan.FromSeconds(30));
         output.WriteLine($"dead worker noticed after {clock.Elapsed.TotalSeconds:F1} s");
         Assert.True(noticed, $"still {coordinator.Members.Active.Count} members after 30 s");
+    }
+
+    [Fact]
+    public async Task Live_status_through_a_tls_gateway_needs_the_cluster_certificate()
+    {
+        // Given a coordinator that requires the cluster certificate
+        using var workspace = new Workspace();
+        using var certificate = ClusterCertificate.Create("test");
+        string pfx = workspace.PathOf("cluster.pfx");
+        ClusterCertificate.Export(certificate, pfx, "test-passphrase");
+        int port = MachineDefinition.FreePortPair();
+        var role = new ClusterRole { SiloPort = port, GatewayPort = port + 1, Certificate = certificate };
+        await using var coordinator = await EmbeddedCluster.StartAsync(role, slots: 0, threads: null, CancellationToken.None);
+
+        // When status asks its gateway with the certificate, and without it
+        var trusted = CliHarness.Run("status", $"127.0.0.1:{port + 1}", "--cert", pfx, "--passphrase", "test-passphrase");
+        var untrusted = CliHarness.Run("status", $"127.0.0.1:{port + 1}");
+
+        // Then only the client holding the certificate gets an answer
+        Assert.True(trusted.ExitCode == 0, trusted.Output);
+        Assert.Contains("runs no search now", trusted.Output);
+        Assert.NotEqual(0, untrusted.ExitCode);
+        Assert.Contains("no coordinator answered", untrusted.Output);
     }
 
     private static async Task<bool> WaitFor(Func<bool> condition, TimeSpan timeout)
