@@ -2,13 +2,23 @@ namespace Foldwise.Core.Search;
 
 /// <summary>
 /// Lease rules of the coordinator. Defaults: a lease lasts <c>90 s</c> unless renewed (slots renew every
-/// third of that), and a trial whose lease is lost <c>3</c> times is failed.
+/// third of that), a trial whose lease is lost <c>3</c> times is failed, and an idle slot backs up a trial
+/// running twice as long as expected.
 /// </summary>
 public sealed record CoordinatorOptions
 {
     public TimeSpan LeaseDuration { get; init; } = TimeSpan.FromSeconds(90);
 
     public int MaxAttempts { get; init; } = 3;
+
+    /// <summary>
+    /// An idle slot runs a backup copy of a trial that has run this many times its expected time
+    /// (see <see cref="StragglerWatch"/>). Null: never. Default 2.
+    /// </summary>
+    public double? BackupAfter { get; init; } = 2.0;
+
+    /// <summary>Finished trials needed before a trial can be called overdue. Default 5.</summary>
+    public int BackupMinimumDone { get; init; } = 5;
 
     public void Validate()
     {
@@ -20,6 +30,11 @@ public sealed record CoordinatorOptions
         if (MaxAttempts < 1)
         {
             throw new ArgumentOutOfRangeException(nameof(MaxAttempts), MaxAttempts, "a trial needs at least one attempt");
+        }
+
+        if (BackupAfter is <= 1.0)
+        {
+            throw new ArgumentOutOfRangeException(nameof(BackupAfter), BackupAfter, "a backup copy needs a trial overdue by more than its expected time");
         }
     }
 }

@@ -19,6 +19,10 @@ public sealed class SearchCoordinator
     private readonly Dictionary<int, TrialRecord> trials = [];
     private readonly SortedSet<int> queued = [];
     private readonly Dictionary<int, TrialRecord> running = [];
+
+    /// <summary>Each running trial's live leases: one, or two while a backup copy runs.</summary>
+    private readonly Dictionary<int, List<LeaseHold>> holds = [];
+    private readonly StragglerWatch? stragglers;
     private readonly double spentBefore;
     private readonly DateTimeOffset sessionStart;
     private int nextId = 1;
@@ -42,6 +46,7 @@ public sealed class SearchCoordinator
         this.time = time;
         this.options = options ?? new CoordinatorOptions();
         this.options.Validate();
+        stragglers = this.options.BackupAfter is { } factor ? new StragglerWatch(factor, this.options.BackupMinimumDone) : null;
         spentBefore = spentSeconds;
         sessionStart = time.GetUtcNow();
         foreach (var trial in (history ?? []).OrderBy(t => t.Id))
@@ -63,20 +68,22 @@ public sealed class SearchCoordinator
             int? id = queued.Count > 0 && stopping is not (StopReason.Requested or StopReason.HoursBudget) ? queued.Min : CreateLocked(now);
             if (id is not { } trialId)
             {
-                return IsFinishedLocked() ? LeaseGrant.Finished : LeaseGrant.Wait;
+                return BackupLocked(worker, slot, now) ?? (IsFinishedLocked() ? LeaseGrant.Finished : LeaseGrant.Wait);
             }
 
             queued.Remove(trialId);
+            var hold = new LeaseHold(trials[trialId].Attempt + 1, worker, slot, now, now + options.LeaseDuration);
             var leased = trials[trialId] with
             {
                 State = TrialState.Running,
-                Attempt = trials[trialId].Attempt + 1,
+                Attempt = hold.Attempt,
                 Worker = worker,
                 Slot = slot,
                 Started = now,
-                LeaseExpires = now + options.LeaseDuration,
+                LeaseExpires = hold.Expires,
             };
             CommitLocked(leased);
+            holds[trialId] = [hold];
             return new LeaseGrant(LeaseKind.Granted, leased, SeedOf(leased));
         }
     }
@@ -86,12 +93,14 @@ public sealed class SearchCoordinator
     {
         lock (gate)
         {
-            if (!running.TryGetValue(trialId, out var trial) || trial.Attempt != attempt)
+            if (HoldLocked(trialId, attempt) is not { } hold)
             {
                 return false;
             }
 
-            running[trialId] = trials[trialId] = trial with { LeaseExpires = time.GetUtcNow() + options.LeaseDuration };
+            var live = holds[trialId];
+            live[live.IndexOf(hold)] = hold with { Expires = time.GetUtcNow() + options.LeaseDuration };
+            running[trialId] = trials[trialId] = running[trialId] with { LeaseExpires = live.Max(h => h.Expires) };
             return true;
         }
     }
@@ -104,19 +113,24 @@ public sealed class SearchCoordinator
     {
         lock (gate)
         {
-            if (!IsCurrentLocked(trialId, attempt))
+            if (HoldLocked(trialId, attempt) is not { } winner)
             {
                 return false;
             }
 
-            CommitLocked(trials[trialId] with
+            var done = trials[trialId] with
             {
                 State = TrialState.Done,
                 Score = score,
                 FoldScores = foldScores,
+                Worker = winner.Worker,
+                Slot = winner.Slot,
+                Started = winner.Started,
                 Finished = time.GetUtcNow(),
                 LeaseExpires = null,
-            });
+            };
+            CommitLocked(done);
+            stragglers?.Finished(done.Budget, done.Duration!.Value);
             return true;
         }
     }
@@ -129,12 +143,12 @@ public sealed class SearchCoordinator
     {
         lock (gate)
         {
-            if (!IsCurrentLocked(trialId, attempt))
+            if (HoldLocked(trialId, attempt) is not { } hold)
             {
                 return false;
             }
 
-            CommitLocked(LoseAttempt(trials[trialId], reason, counts: !interrupted));
+            DropHoldLocked(trialId, hold, reason, counts: !interrupted);
             return true;
         }
     }
@@ -144,7 +158,7 @@ public sealed class SearchCoordinator
     {
         lock (gate)
         {
-            return IsCurrentLocked(trialId, attempt);
+            return HoldLocked(trialId, attempt) is not null;
         }
     }
 
@@ -274,13 +288,62 @@ public sealed class SearchCoordinator
 
     private void ExpireLeasesLocked(DateTimeOffset now)
     {
-        foreach (var trial in running.Values.Where(t => t.LeaseExpires < now).ToList())
+        foreach (var (trialId, hold) in holds.SelectMany(kv => kv.Value.Where(h => h.Expires < now).Select(h => (kv.Key, h))).ToList())
         {
-            CommitLocked(LoseAttempt(trial, $"lease expired on {trial.Worker}/{trial.Slot}", counts: true));
+            DropHoldLocked(trialId, hold, $"lease expired on {hold.Worker}/{hold.Slot}", counts: true);
         }
     }
 
-    private TrialRecord LoseAttempt(TrialRecord trial, string reason, bool counts)
+    /// <summary>
+    /// Ends one lease of a running trial without a result. With a backup copy still running the trial carries
+    /// on there (nothing counted against it); otherwise it goes back to the queue, or fails at the attempt limit.
+    /// </summary>
+    private void DropHoldLocked(int trialId, LeaseHold hold, string reason, bool counts)
+    {
+        var live = holds[trialId];
+        live.Remove(hold);
+        var trial = trials[trialId];
+        if (live.Count == 0)
+        {
+            CommitLocked(LoseAttempt(trial, reason, counts, hold.Attempt));
+            return;
+        }
+
+        var other = live[0];
+        CommitLocked(trial with
+        {
+            Worker = other.Worker,
+            Slot = other.Slot,
+            Started = other.Started,
+            LeaseExpires = other.Expires,
+            LostAttempts = trial.LostAttempts.Add($"attempt {hold.Attempt}: {reason} (attempt {other.Attempt} carries on)"),
+        });
+    }
+
+    /// <summary>An idle slot's backup copy of the most overdue trial, when the straggler watch names one.</summary>
+    private LeaseGrant? BackupLocked(string worker, string slot, DateTimeOffset now)
+    {
+        if (stragglers is null || stopping is StopReason.Requested or StopReason.HoursBudget ||
+            stragglers.Pick(running.Values.Select(t => (t.Id, t.Budget, (IReadOnlyList<LeaseHold>)holds[t.Id])), worker, now,
+                draining: stopping is StopReason.TrialBudget or StopReason.ScheduleExhausted) is not { } trialId)
+        {
+            return null;
+        }
+
+        var trial = trials[trialId];
+        var hold = new LeaseHold(trial.Attempt + 1, worker, slot, now, now + options.LeaseDuration);
+        // The record keeps the first copy's place (history shows where it ran) and the highest attempt issued,
+        // so attempt numbers are never reused.
+        var backedUp = trial with { Attempt = hold.Attempt, LeaseExpires = new[] { trial.LeaseExpires ?? now, hold.Expires }.Max() };
+        CommitLocked(backedUp);
+        holds[trialId].Add(hold);
+        return new LeaseGrant(LeaseKind.Granted, backedUp with { Worker = worker, Slot = slot, Started = now }, SeedOf(backedUp));
+    }
+
+    private LeaseHold? HoldLocked(int trialId, int attempt) =>
+        running.ContainsKey(trialId) ? holds[trialId].Find(h => h.Attempt == attempt) : null;
+
+    private TrialRecord LoseAttempt(TrialRecord trial, string reason, bool counts, int? attempt = null)
     {
         int failures = trial.Failures + (counts ? 1 : 0);
         bool failed = failures >= options.MaxAttempts;
@@ -288,7 +351,7 @@ public sealed class SearchCoordinator
         {
             State = failed ? TrialState.Failed : TrialState.Queued,
             Failures = failures,
-            LostAttempts = trial.LostAttempts.Add($"attempt {trial.Attempt}: {reason}"),
+            LostAttempts = trial.LostAttempts.Add($"attempt {attempt ?? trial.Attempt}: {reason}"),
             FailureReason = failed ? $"gave up after {failures} lost attempts; last: {reason}" : null,
             Finished = failed ? time.GetUtcNow() : null,
             LeaseExpires = null,
@@ -296,9 +359,6 @@ public sealed class SearchCoordinator
             Slot = failed ? trial.Slot : null,
         };
     }
-
-    private bool IsCurrentLocked(int trialId, int attempt) =>
-        running.TryGetValue(trialId, out var trial) && trial.Attempt == attempt;
 
     /// <summary>Journal first, then memory: a record the journal refused never becomes the coordinator's truth.</summary>
     private void CommitLocked(TrialRecord trial)
@@ -314,6 +374,11 @@ public sealed class SearchCoordinator
         nextId = Math.Max(nextId, trial.Id + 1);
         queued.Remove(trial.Id);
         running.Remove(trial.Id);
+        if (trial.State != TrialState.Running)
+        {
+            holds.Remove(trial.Id);
+        }
+
         switch (trial.State)
         {
             case TrialState.Queued:
