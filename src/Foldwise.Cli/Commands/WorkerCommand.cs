@@ -42,7 +42,8 @@ public sealed class WorkerCommand(IAnsiConsole console) : AsyncCommand<WorkerSet
         using var sigint = PosixSignalRegistration.Create(PosixSignal.SIGINT, s => { s.Cancel = true; stop.Cancel(); });
         console.MarkupLine($"Worker [bold]{Markup.Escape(options.Name)}[/] joining {Markup.Escape(join.ToString())} from {role.Advertise}" +
                            (role.Certificate is null ? " (no certificate)" : " (mutual TLS)") + "; Ctrl-C to leave");
-        await new WorkerHost(role, options, Console.Out).RunAsync(stop.Token);
+        string[] commandLine = [.. context.Arguments];
+        await new WorkerHost(role, options, Console.Out) { StartOver = () => FreshProcess.Restart(commandLine) }.RunAsync(stop.Token);
         return ExitCodes.Ok;
     }
 }

@@ -21,6 +21,12 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
     /// <summary>The pause between attempts to join. Default 3 s.</summary>
     public TimeSpan RetryPause { get; init; } = TimeSpan.FromSeconds(3);
 
+    /// <summary>
+    /// Called before a new attempt to join; <see cref="FreshProcess.Restart"/> in the real command, so each attempt
+    /// starts in a clean process. If it returns, the next attempt is made in this process.
+    /// </summary>
+    public Action? StartOver { get; init; }
+
     public async Task RunAsync(CancellationToken stopping)
     {
         int attempt = 0;
@@ -49,6 +55,11 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
 
             await StopQuietly(host);
             await PauseAsync(stopping);
+            if (StartOver is { } startOver && !stopping.IsCancellationRequested)
+            {
+                host.Dispose();
+                startOver();
+            }
         }
 
         output.WriteLine("Worker stopped");

@@ -33,6 +33,8 @@ public sealed class CoordinatorRestartTests
         int rejoined = lines.FindLastIndex(l => l.StartsWith("Joined the cluster", StringComparison.Ordinal));
         Assert.True(lines.Count(l => l.StartsWith("Joined the cluster", StringComparison.Ordinal)) >= 2, worker.Output);
         Assert.Contains(lines.Skip(rejoined), l => l.Contains("scored", StringComparison.Ordinal));
+        // The command's banner again: the worker started over as a fresh process (same PID, execv), not a rebuilt silo.
+        Assert.True(lines.Count(l => l.StartsWith("Worker w1 joining", StringComparison.Ordinal)) >= 2, worker.Output);
 
         var trials = MachineDefinition.History(workspace.Out);
         var ids = trials.Select(t => (int)t!["id"]!).ToList();
