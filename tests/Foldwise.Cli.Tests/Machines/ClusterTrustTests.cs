@@ -15,11 +15,9 @@ public sealed class ClusterTrustTests(ITestOutputHelper output)
         // Given a coordinator that requires the cluster certificate
         using var workspace = new Workspace();
         using var certificate = ClusterCertificate.Create("test");
-        string pfx = workspace.PathOf("cluster.pfx");
-        ClusterCertificate.Export(certificate, pfx, "test-passphrase");
-        int port = MachineDefinition.FreePortPair();
-        var role = new ClusterRole { SiloPort = port, GatewayPort = port + 1, Certificate = certificate };
-        await using var coordinator = await EmbeddedCluster.StartAsync(role, slots: 0, threads: null, CancellationToken.None);
+        var (pfx, port) = ExportAndPickPorts(workspace, certificate);
+        await using var coordinator = await EmbeddedCluster.StartAsync(
+            new ClusterRole { SiloPort = port, GatewayPort = port + 1, Certificate = certificate }, slots: 0, threads: null, CancellationToken.None);
 
         // When a stranger without the certificate tries to join
         using var stranger = FoldwiseProcess.Start("worker", "--join", $"127.0.0.1:{port}", "--name", "stranger");
@@ -49,11 +47,9 @@ public sealed class ClusterTrustTests(ITestOutputHelper output)
         // Given a coordinator that requires the cluster certificate
         using var workspace = new Workspace();
         using var certificate = ClusterCertificate.Create("test");
-        string pfx = workspace.PathOf("cluster.pfx");
-        ClusterCertificate.Export(certificate, pfx, "test-passphrase");
-        int port = MachineDefinition.FreePortPair();
-        var role = new ClusterRole { SiloPort = port, GatewayPort = port + 1, Certificate = certificate };
-        await using var coordinator = await EmbeddedCluster.StartAsync(role, slots: 0, threads: null, CancellationToken.None);
+        var (pfx, port) = ExportAndPickPorts(workspace, certificate);
+        await using var coordinator = await EmbeddedCluster.StartAsync(
+            new ClusterRole { SiloPort = port, GatewayPort = port + 1, Certificate = certificate }, slots: 0, threads: null, CancellationToken.None);
 
         // When status asks its gateway with the certificate, and without it
         var trusted = CliHarness.Run("status", $"127.0.0.1:{port + 1}", "--cert", pfx, "--passphrase", "test-passphrase");
@@ -64,6 +60,14 @@ public sealed class ClusterTrustTests(ITestOutputHelper output)
         Assert.Contains("runs no search now", trusted.Output);
         Assert.NotEqual(0, untrusted.ExitCode);
         Assert.Contains("no coordinator answered", untrusted.Output);
+    }
+
+    /// <summary>The certificate as the file a user copies to each machine (passphrase "test-passphrase"), and a free silo/gateway port pair.</summary>
+    private static (string Pfx, int Port) ExportAndPickPorts(Workspace workspace, System.Security.Cryptography.X509Certificates.X509Certificate2 certificate)
+    {
+        string pfx = workspace.PathOf("cluster.pfx");
+        ClusterCertificate.Export(certificate, pfx, "test-passphrase");
+        return (pfx, MachineDefinition.FreePortPair());
     }
 
     private static async Task<bool> WaitFor(Func<bool> condition, TimeSpan timeout)
