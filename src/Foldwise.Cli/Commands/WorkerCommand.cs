@@ -43,7 +43,11 @@ public sealed class WorkerCommand(IAnsiConsole console) : AsyncCommand<WorkerSet
         console.MarkupLine($"Worker [bold]{Markup.Escape(options.Name)}[/] joining {Markup.Escape(join.ToString())} from {role.Advertise}" +
                            (role.Certificate is null ? " (no certificate)" : " (mutual TLS)") + "; Ctrl-C to leave");
         string[] commandLine = [.. context.Arguments];
-        await new WorkerHost(role, options, Console.Out) { StartOver = () => FreshProcess.Restart(commandLine) }.RunAsync(stop.Token);
+        await new WorkerHost(role, options, Console.Out) 
+        {
+            StartOver = attempts => FreshProcess.Restart(commandLine, attempts),
+            EarlierAttempts = int.TryParse(Environment.GetEnvironmentVariable(FreshProcess.AttemptVariable), out int earlier) ? earlier : 0,
+        }.RunAsync(stop.Token);
         return ExitCodes.Ok;
     }
 }

@@ -25,11 +25,14 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
     /// Called before a new attempt to join; <see cref="FreshProcess.Restart"/> in the real command, so each attempt
     /// starts in a clean process. If it returns, the next attempt is made in this process.
     /// </summary>
-    public Action? StartOver { get; init; }
+    public Action<int>? StartOver { get; init; }
+
+    /// <summary>Attempts made before this process started (a fresh process continues the count).</summary>
+    public int EarlierAttempts { get; init; }
 
     public async Task RunAsync(CancellationToken stopping)
     {
-        int attempt = 0;
+        int attempt = EarlierAttempts;
         while (!stopping.IsCancellationRequested)
         {
             attempt++;
@@ -58,7 +61,7 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
             if (StartOver is { } startOver && !stopping.IsCancellationRequested)
             {
                 host.Dispose();
-                startOver();
+                startOver(attempt);
             }
         }
 
