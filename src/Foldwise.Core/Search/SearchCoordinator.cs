@@ -20,7 +20,7 @@ public sealed class SearchCoordinator
     private readonly SortedSet<int> queued = [];
     private readonly Dictionary<int, TrialRecord> running = [];
 
-    /// <summary>Each running trial's live leases: one, or two while a backup copy runs.</summary>
+    /// <summary>Each running trial's live leases: one, or more while backup copies run (see StragglerWatch).</summary>
     private readonly Dictionary<int, List<LeaseHold>> holds = [];
     private readonly StragglerWatch? stragglers;
     private readonly double spentBefore;
