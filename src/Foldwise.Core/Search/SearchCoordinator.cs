@@ -20,8 +20,7 @@ public sealed class SearchCoordinator
     private readonly SortedSet<int> queued = [];
     private readonly Dictionary<int, TrialRecord> running = [];
 
-    /// <summary>Each running trial's live leases: one, or more while backup copies run (see StragglerWatch).</summary>
-    private readonly Dictionary<int, List<LeaseHold>> holds = [];
+    private readonly LeaseTable leases = new();
     private readonly StragglerWatch? stragglers;
     private readonly double spentBefore;
     private readonly DateTimeOffset sessionStart;
@@ -83,7 +82,7 @@ public sealed class SearchCoordinator
                 LeaseExpires = hold.Expires,
             };
             CommitLocked(leased);
-            holds[trialId] = [hold];
+            leases.Start(trialId, hold);
             return new LeaseGrant(LeaseKind.Granted, leased, SeedOf(leased));
         }
     }
@@ -98,9 +97,8 @@ public sealed class SearchCoordinator
                 return false;
             }
 
-            var live = holds[trialId];
-            live[live.IndexOf(hold)] = hold with { Expires = time.GetUtcNow() + options.LeaseDuration };
-            running[trialId] = trials[trialId] = running[trialId] with { LeaseExpires = live.Max(h => h.Expires) };
+            var lastExpiry = leases.Renew(trialId, hold, time.GetUtcNow() + options.LeaseDuration);
+            running[trialId] = trials[trialId] = running[trialId] with { LeaseExpires = lastExpiry };
             return true;
         }
     }
@@ -257,38 +255,14 @@ public sealed class SearchCoordinator
         return created.Id;
     }
 
-    private void UpdateStoppingLocked(DateTimeOffset now)
-    {
-        if (stopping is not null)
-        {
-            return;
-        }
+    private void UpdateStoppingLocked(DateTimeOffset now) =>
+        stopping ??= StopRules.Reason(stopRequested, definition.Budget, SpentSecondsLocked(now), trials.Count, schedule.Exhausted);
 
-        if (stopRequested)
-        {
-            stopping = StopReason.Requested;
-        }
-        else if (definition.Budget.Hours is { } hours && SpentSecondsLocked(now) >= hours * 3600)
-        {
-            stopping = StopReason.HoursBudget;
-        }
-        else if (definition.Budget.Trials is { } budget && trials.Count >= budget)
-        {
-            stopping = StopReason.TrialBudget;
-        }
-        else if (schedule.Exhausted)
-        {
-            stopping = StopReason.ScheduleExhausted;
-        }
-    }
-
-    private bool IsFinishedLocked() =>
-        stopping is not null && running.Count == 0 &&
-        (queued.Count == 0 || stopping is StopReason.Requested or StopReason.HoursBudget);
+    private bool IsFinishedLocked() => StopRules.Finished(stopping, running.Count, queued.Count);
 
     private void ExpireLeasesLocked(DateTimeOffset now)
     {
-        foreach (var (trialId, hold) in holds.SelectMany(kv => kv.Value.Where(h => h.Expires < now).Select(h => (kv.Key, h))).ToList())
+        foreach (var (trialId, hold) in leases.Expired(now))
         {
             DropHoldLocked(trialId, hold, $"lease expired on {hold.Worker}/{hold.Slot}", counts: true);
         }
@@ -300,8 +274,7 @@ public sealed class SearchCoordinator
     /// </summary>
     private void DropHoldLocked(int trialId, LeaseHold hold, string reason, bool counts)
     {
-        var live = holds[trialId];
-        live.Remove(hold);
+        var live = leases.Drop(trialId, hold);
         var trial = trials[trialId];
         if (live.Count == 0)
         {
@@ -324,7 +297,7 @@ public sealed class SearchCoordinator
     private LeaseGrant? BackupLocked(string worker, string slot, DateTimeOffset now)
     {
         if (stragglers is null || stopping is StopReason.Requested or StopReason.HoursBudget ||
-            stragglers.Pick(running.Values.Select(t => (t.Id, t.Budget, (IReadOnlyList<LeaseHold>)holds[t.Id])), worker, now,
+            stragglers.Pick(running.Values.Select(t => (t.Id, t.Budget, leases.Of(t.Id))), worker, now,
                 draining: stopping is StopReason.TrialBudget or StopReason.ScheduleExhausted) is not { } trialId)
         {
             return null;
@@ -336,12 +309,12 @@ public sealed class SearchCoordinator
         // so attempt numbers are never reused.
         var backedUp = trial with { Attempt = hold.Attempt, LeaseExpires = new[] { trial.LeaseExpires ?? now, hold.Expires }.Max() };
         CommitLocked(backedUp);
-        holds[trialId].Add(hold);
+        leases.Add(trialId, hold);
         return new LeaseGrant(LeaseKind.Granted, backedUp with { Worker = worker, Slot = slot, Started = now }, SeedOf(backedUp));
     }
 
     private LeaseHold? HoldLocked(int trialId, int attempt) =>
-        running.ContainsKey(trialId) ? holds[trialId].Find(h => h.Attempt == attempt) : null;
+        running.ContainsKey(trialId) ? leases.Find(trialId, attempt) : null;
 
     private TrialRecord LoseAttempt(TrialRecord trial, string reason, bool counts, int? attempt = null)
     {
@@ -376,7 +349,7 @@ public sealed class SearchCoordinator
         running.Remove(trial.Id);
         if (trial.State != TrialState.Running)
         {
-            holds.Remove(trial.Id);
+            leases.Forget(trial.Id);
         }
 
         switch (trial.State)
