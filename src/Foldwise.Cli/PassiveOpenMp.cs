@@ -21,13 +21,8 @@ public static class PassiveOpenMp
 
     public static async Task<int> RelaunchAsync(string[] args)
     {
-        var info = new ProcessStartInfo(Environment.ProcessPath!) { UseShellExecute = false };
-        if (Path.GetFileNameWithoutExtension(Environment.ProcessPath) == "dotnet")
-        {
-            info.ArgumentList.Add(typeof(PassiveOpenMp).Assembly.Location);
-        }
-
-        foreach (string arg in args)
+        var info = new ProcessStartInfo(OwnCommand.Executable) { UseShellExecute = false };
+        foreach (string arg in OwnCommand.Arguments(args))
         {
             info.ArgumentList.Add(arg);
         }

@@ -21,14 +21,7 @@ public static class FreshProcess
             return;
         }
 
-        var argv = new List<string?> { executable };
-        if (Path.GetFileNameWithoutExtension(executable) == "dotnet")
-        {
-            argv.Add(typeof(FreshProcess).Assembly.Location);
-        }
-
-        argv.AddRange(args);
-        argv.Add(null);
+        string?[] argv = [executable, .. OwnCommand.Arguments(args), null];
         var environment = Environment.GetEnvironmentVariables().Cast<System.Collections.DictionaryEntry>()
             .Where(e => (string)e.Key != AttemptVariable)
             .Select(e => $"{e.Key}={e.Value}")
@@ -39,11 +32,11 @@ public static class FreshProcess
         Console.Error.Flush();
         try
         {
-            _ = Exec(executable, [.. argv], [.. environment]);
+            _ = Exec(executable, argv, [.. environment]);
         }
         catch (Exception e) when (e is MarshalDirectiveException or DllNotFoundException or EntryPointNotFoundException)
         {
-            // No execv here: start over in-process.
+            // No execve here: start over in-process.
         }
     }
 
