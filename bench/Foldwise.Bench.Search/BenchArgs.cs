@@ -1,0 +1,49 @@
+using System.Globalization;
+using Foldwise.Core.Definition;
+using Foldwise.Core.Demo;
+using Foldwise.Core.Spaces;
+
+internal sealed record BenchArgs(
+    string Part, DemoSize Size, int[] SeedList, int RandomTrials, int AshaTrials, ScheduleKind Schedule,
+    int Min, int Max, int Eta, int Threads, string Family, string Out, string Tag)
+{
+    public string RandomFile(int seed) => $"random-{Size}-{Family}-r{Max}-seed{seed}.tsv".ToLowerInvariant();
+
+    public string AshaFile(int seed) => $"{Schedule}-tpe-{Size}-{Family}-r{Min}-{Max}-e{Eta}{(Tag.Length > 0 ? "-" + Tag : "")}-seed{seed}.tsv".ToLowerInvariant();
+
+    public static BenchArgs Parse(string[] args)
+    {
+        string Get(string name, string fallback)
+        {
+            int at = Array.IndexOf(args, name);
+            return at >= 0 && at + 1 < args.Length ? args[at + 1] : fallback;
+        }
+
+        int Int(string name, string fallback) => int.Parse(Get(name, fallback), CultureInfo.InvariantCulture);
+
+        // --seeds 5 means seeds 1..5; --seed-list 2,5 picks some.
+        int[] seeds = Get("--seed-list", "") is { Length: > 0 } list
+            ? [.. list.Split(',').Select(s => int.Parse(s, CultureInfo.InvariantCulture))]
+            : [.. Enumerable.Range(1, Int("--seeds", "5"))];
+        string part = Get("--part", "both");
+        if (part is not ("both" or "random" or "asha" or "report"))
+        {
+            throw new ArgumentException($"--part must be both, random, asha or report, not '{part}'");
+        }
+
+        return new BenchArgs(
+            part,
+            Enum.Parse<DemoSize>(Get("--size", "Quick"), ignoreCase: true),
+            seeds,
+            Int("--random-trials", "16"),
+            Int("--asha-trials", "10000"),
+            Enum.Parse<ScheduleKind>(Get("--schedule", "asha"), ignoreCase: true),
+            Int("--min", "20"),
+            Int("--max", "180"),
+            Int("--eta", "3"),
+            Int("--threads", "2"),
+            Get("--family", FamilyNames.LightGbm),
+            Get("--out", Path.Combine("bench", "results", "search")),
+            Get("--tag", ""));
+    }
+}
