@@ -5,11 +5,11 @@ using Foldwise.Core.Spaces;
 
 internal sealed record BenchArgs(
     string Part, DemoSize Size, int[] SeedList, int RandomTrials, int AshaTrials, ScheduleKind Schedule,
-    int Min, int Max, int Eta, int Threads, string Family, string Out, string Tag)
+    int Min, int Max, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents)
 {
     public string RandomFile(int seed) => $"random-{Size}-{Family}-r{Max}-seed{seed}.tsv".ToLowerInvariant();
 
-    public string AshaFile(int seed) => $"{Schedule}-tpe-{Size}-{Family}-r{Min}-{Max}-e{Eta}{(Tag.Length > 0 ? "-" + Tag : "")}-seed{seed}.tsv".ToLowerInvariant();
+    public string AshaFile(int seed) => $"{Schedule}-tpe-{Size}-{Family}-r{Min}-{Max}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}-seed{seed}.tsv".ToLowerInvariant();
 
     public static BenchArgs Parse(string[] args)
     {
@@ -26,9 +26,9 @@ internal sealed record BenchArgs(
             ? [.. list.Split(',').Select(s => int.Parse(s, CultureInfo.InvariantCulture))]
             : [.. Enumerable.Range(1, Int("--seeds", "5"))];
         string part = Get("--part", "both");
-        if (part is not ("both" or "random" or "asha" or "report"))
+        if (part is not ("both" or "random" or "asha" or "report" or "probe"))
         {
-            throw new ArgumentException($"--part must be both, random, asha or report, not '{part}'");
+            throw new ArgumentException($"--part must be both, random, asha, report or probe, not '{part}'");
         }
 
         return new BenchArgs(
@@ -44,6 +44,9 @@ internal sealed record BenchArgs(
             Int("--threads", "2"),
             Get("--family", FamilyNames.LightGbm),
             Get("--out", Path.Combine("bench", "results", "search")),
-            Get("--tag", ""));
+            Get("--tag", ""),
+            double.Parse(Get("--rate-exponent", "0.5"), CultureInfo.InvariantCulture),
+            Int("--probe-rounds", "20"),
+            [.. Get("--probe-exponents", "0,0.5,1").Split(',').Select(s => double.Parse(s, CultureInfo.InvariantCulture))]);
     }
 }

@@ -38,6 +38,12 @@ if (options.Part != "report")
         var data = TrialData.From(train, test, folds, metric) with { Test = testSlice };
         string randomPath = Path.Combine(options.Out, options.RandomFile(seed));
         var random = Trace.ReadIfComplete(randomPath, options.RandomTrials);
+        if (options.Part == "probe")
+        {
+            Probe.Run(data, options, random ?? throw new InvalidOperationException($"--part probe needs the random trace {randomPath}"), seed, options.ProbeBudget, options.ProbeExponents);
+            continue;
+        }
+
         if (options.Part is "both" or "random" && random is null)
         {
             random = SearchRun.Run(data, options, ScheduleKind.Full, ProposerKind.Random, options.RandomTrials, seed, stopBelow: double.NegativeInfinity, computeCap: double.PositiveInfinity);
@@ -57,4 +63,7 @@ if (options.Part != "report")
     }
 }
 
-Comparison.Print(options);
+if (options.Part != "probe")
+{
+    Comparison.Print(options);
+}

@@ -17,7 +17,7 @@ internal static class SearchRun
             Data = new DataSource("-", "-", "id", "y"),
             Seed = seed,
             Families = [new FamilySearch(options.Family, DefaultSpaces.For(options.Family))],
-            Schedule = new ScheduleOptions(kind, proposer, options.Min, options.Max, options.Eta),
+            Schedule = new ScheduleOptions(kind, proposer, options.Min, options.Max, options.Eta, options.RateExponent),
             Budget = new SearchBudget(trials, null),
         };
         var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition), new NoJournal(), TimeProvider.System);
@@ -34,7 +34,7 @@ internal static class SearchRun
 
             var trial = grant.Trial!;
             var clock = Stopwatch.StartNew();
-            var outcome = executor.Run(data, trial.Parameters, trial.Budget, grant.Seed, options.Threads, CancellationToken.None);
+            var outcome = executor.Run(data, grant.Run!, trial.Budget, grant.Seed, options.Threads, CancellationToken.None);
             coordinator.Complete(trial.Id, trial.Attempt, outcome.Score, outcome.FoldScores);
             compute += (double)trial.Budget * data.Train.RowCount;
             best = Math.Min(best, outcome.Score);

@@ -46,5 +46,12 @@ public static class TrialTable
         console.MarkupLine($"{trials.Count} trial(s): {trials.Count(t => t.State == TrialState.Done)} done, " +
                            $"{trials.Count(t => t.State == TrialState.Running)} running, {trials.Count(t => t.State == TrialState.Queued)} queued, " +
                            $"{trials.Count(t => t.State == TrialState.Failed)} failed.");
+        var schedule = definition.Schedule;
+        if (wide && schedule.RateScaling > 0 && trials.Any(t => t.Budget < schedule.MaxBudget))
+        {
+            console.MarkupLine(Markup.Escape(
+                $"Parameters are as drawn; a trial below {schedule.MaxBudget} rounds ran learning_rate × ({schedule.MaxBudget} / rounds)" +
+                $"{(schedule.RateScaling == 1 ? "" : $"^{schedule.RateScaling:G3}")}, at most {Core.Schedules.ShortRungRate.Ceiling:G} (schedule.rate_scaling)."));
+        }
     }
 }

@@ -47,7 +47,7 @@ public sealed class CoordinatorSession
                 grant.Trial!.Id,
                 grant.Trial.Attempt,
                 grant.Trial.Family,
-                grant.Trial.Parameters.Values.ToDictionary(),
+                grant.Run!.Values.ToDictionary(),
                 grant.Trial.Budget,
                 grant.Seed,
                 grant.Trial.LeaseExpires!.Value - grant.Trial.Started!.Value),

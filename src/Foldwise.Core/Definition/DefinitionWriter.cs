@@ -54,6 +54,7 @@ public static class DefinitionWriter
                 json.WriteNumber("min_rounds", schedule.MinBudget);
                 json.WriteNumber("max_rounds", schedule.MaxBudget);
                 json.WriteNumber("eta", schedule.Eta);
+                json.WriteNumber("rate_scaling", schedule.RateScaling);
             });
             Section(json, "budget", () =>
             {

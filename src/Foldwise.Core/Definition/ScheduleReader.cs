@@ -14,7 +14,8 @@ internal static class ScheduleReader
             schedule.Get("proposer") is { } p ? check.Word(p.Value, DefinitionNames.Proposers) : standard.Proposer,
             min is null ? standard.MinBudget : check.Whole(min, 1),
             max is null ? standard.MaxBudget : check.Whole(max, 1),
-            schedule.Get("eta") is { } e ? check.Whole(e.Value, 2, " (each rung keeps 1/eta)") : standard.Eta);
+            schedule.Get("eta") is { } e ? check.Whole(e.Value, 2, " (each rung keeps 1/eta)") : standard.Eta,
+            schedule.Get("rate_scaling") is { } r ? Scaling(check, r.Value) : standard.RateScaling);
 
         if (options.MaxBudget < options.MinBudget)
         {
@@ -25,5 +26,13 @@ internal static class ScheduleReader
         }
 
         return options;
+    }
+
+    private static double Scaling(DefinitionCheck check, DefinitionNode node)
+    {
+        double value = check.Number(node);
+        return value is >= 0 and <= 1
+            ? value
+            : throw check.Fail(node, $"'{node.Path}' must be between 0 (short rungs run the drawn learning rate) and 1 (scaled by max_rounds / rounds), got {node.Describe()}");
     }
 }

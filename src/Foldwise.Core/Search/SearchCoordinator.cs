@@ -83,7 +83,7 @@ public sealed class SearchCoordinator
             };
             CommitLocked(leased);
             leases.Start(trialId, hold);
-            return new LeaseGrant(LeaseKind.Granted, leased, SeedOf(leased));
+            return Granted(leased);
         }
     }
 
@@ -310,7 +310,7 @@ public sealed class SearchCoordinator
         var backedUp = trial with { Attempt = hold.Attempt, LeaseExpires = new[] { trial.LeaseExpires ?? now, hold.Expires }.Max() };
         CommitLocked(backedUp);
         leases.Add(trialId, hold);
-        return new LeaseGrant(LeaseKind.Granted, backedUp with { Worker = worker, Slot = slot, Started = now }, SeedOf(backedUp));
+        return Granted(backedUp with { Worker = worker, Slot = slot, Started = now });
     }
 
     private LeaseHold? HoldLocked(int trialId, int attempt) =>
@@ -381,6 +381,9 @@ public sealed class SearchCoordinator
     }
 
     /// <summary>Promotions share their first candidate's seed, so a longer fit grows the same trees.</summary>
+    private LeaseGrant Granted(TrialRecord trial) => new(
+        LeaseKind.Granted, trial, SeedOf(trial), definition.Schedule.ShortRungRate.For(trial.Parameters, trial.Budget, definition.Schedule.MaxBudget));
+
     private int SeedOf(TrialRecord trial)
     {
         var root = trial;
