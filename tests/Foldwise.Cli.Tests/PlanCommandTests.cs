@@ -34,6 +34,8 @@ public sealed class PlanCommandTests
 
         Assert.Equal(0, plan.ExitCode);
         Assert.Contains("ASHA rungs (rounds): 25 → 75 → 225 → 400", plan.Output);
+        // √(400/25) = 4, √(400/75) ≈ 2.31, √(400/225) ≈ 1.33, worked by hand.
+        Assert.Contains("× the drawn one (default schedule.rate_scaling 0.5; at most 1): 4 → 2.31 → 1.33 → 1.", plan.Output);
         Assert.Contains("each cell: candidates × rounds", plan.Output);
     }
 

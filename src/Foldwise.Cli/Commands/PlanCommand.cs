@@ -15,6 +15,8 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
     {
         var plan = HyperbandPlan.For(settings.MinBudget, settings.MaxBudget, settings.Eta);
         var rungs = RungBudgets.For(settings.MinBudget, settings.MaxBudget, settings.Eta);
+        // What a drawn learning rate of 0.1 runs at on each rung under the default rule.
+        var rates = rungs.Select(b => ShortRungRate.Default.For(Core.Spaces.ParameterSet.Of([new(ShortRungRate.Parameter, 0.1)]), b, settings.MaxBudget)[ShortRungRate.Parameter] / 0.1).ToArray();
         if (settings.Json)
         {
             var brackets = new JsonArray([.. plan.Brackets.Select(b => (JsonNode?)new JsonObject
@@ -29,6 +31,7 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
                 ["max_budget"] = settings.MaxBudget,
                 ["eta"] = settings.Eta,
                 ["asha_rungs"] = new JsonArray([.. rungs.Select(r => (JsonNode?)r)]),
+                ["rate_multipliers"] = new JsonArray([.. rates.Select(r => (JsonNode?)Math.Round(r, 4))]),
                 ["hyperband"] = brackets,
             };
             console.Profile.Out.Writer.WriteLine(root.ToJsonString(new System.Text.Json.JsonSerializerOptions { WriteIndented = true }));
@@ -36,6 +39,7 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
         }
 
         console.MarkupLine($"ASHA rungs (rounds): {string.Join(" → ", rungs)}; a candidate moves up when it is in the top 1/{settings.Eta} of its rung.");
+        console.MarkupLine($"Learning rate on each rung, × the drawn one (default schedule.rate_scaling 0.5; at most 1): {string.Join(" → ", rates.Select(r => r.ToString("0.##")))}.");
         int widest = plan.Brackets.Max(b => b.Rungs.Length);
         var table = new Table()
             .Title($"Hyperband brackets, {settings.MinBudget} to {settings.MaxBudget} rounds, η = {settings.Eta}")
