@@ -47,6 +47,7 @@ internal static class Probe
         return cov / Math.Sqrt(va * vb);
     }
 
+    /// <summary>Ranks 0..n−1 in score order; ties are not averaged (scores here are continuous).</summary>
     private static double[] Ranks(double[] values)
     {
         var ranks = new double[values.Length];

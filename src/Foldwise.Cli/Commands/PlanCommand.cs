@@ -15,8 +15,7 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
     {
         var plan = HyperbandPlan.For(settings.MinBudget, settings.MaxBudget, settings.Eta);
         var rungs = RungBudgets.For(settings.MinBudget, settings.MaxBudget, settings.Eta);
-        // What a drawn learning rate of 0.1 runs at on each rung under the default rule.
-        var rates = rungs.Select(b => ShortRungRate.Default.For(Core.Spaces.ParameterSet.Of([new(ShortRungRate.Parameter, 0.1)]), b, settings.MaxBudget)[ShortRungRate.Parameter] / 0.1).ToArray();
+        var rates = rungs.Select(b => ShortRungRate.Default.Multiplier(b, settings.MaxBudget)).ToArray();
         if (settings.Json)
         {
             var brackets = new JsonArray([.. plan.Brackets.Select(b => (JsonNode?)new JsonObject

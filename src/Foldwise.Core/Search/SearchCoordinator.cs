@@ -380,10 +380,10 @@ public sealed class SearchCoordinator
         }
     }
 
-    /// <summary>Promotions share their first candidate's seed, so a longer fit grows the same trees.</summary>
     private LeaseGrant Granted(TrialRecord trial) => new(
         LeaseKind.Granted, trial, SeedOf(trial), definition.Schedule.ShortRungRate.For(trial.Parameters, trial.Budget, definition.Schedule.MaxBudget));
 
+    /// <summary>Promotions share their first candidate's seed, so a longer fit grows the same trees.</summary>
     private int SeedOf(TrialRecord trial)
     {
         var root = trial;

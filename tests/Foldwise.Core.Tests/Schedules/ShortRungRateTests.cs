@@ -10,7 +10,7 @@ public sealed class ShortRungRateTests
     [Fact]
     public void A_rung_at_a_ninth_of_the_rounds_runs_nine_times_the_rate()
     {
-        var run = ShortRungRate.Proportional.For(Drawn(0.05), budget: 20, fullBudget: 180);
+        var run = new ShortRungRate(1.0).For(Drawn(0.05), budget: 20, fullBudget: 180);
 
         Assert.Equal(0.45, run["learning_rate"], 12);
         Assert.Equal(31, run["leaves"]);
@@ -27,15 +27,15 @@ public sealed class ShortRungRateTests
     [Fact]
     public void The_top_rung_and_the_as_drawn_rule_run_the_drawn_rate()
     {
-        Assert.Equal(Drawn(0.05), ShortRungRate.Proportional.For(Drawn(0.05), budget: 180, fullBudget: 180));
-        Assert.Equal(Drawn(0.05), ShortRungRate.AsDrawn.For(Drawn(0.05), budget: 20, fullBudget: 180));
+        Assert.Equal(Drawn(0.05), new ShortRungRate(1.0).For(Drawn(0.05), budget: 180, fullBudget: 180));
+        Assert.Equal(Drawn(0.05), new ShortRungRate(0.0).For(Drawn(0.05), budget: 20, fullBudget: 180));
     }
 
     [Fact]
     public void No_short_rung_runs_faster_than_the_ceiling_unless_the_drawn_rate_already_does()
     {
-        Assert.Equal(ShortRungRate.Ceiling, ShortRungRate.Proportional.For(Drawn(0.2), budget: 20, fullBudget: 180)["learning_rate"]);
-        Assert.Equal(1.5, ShortRungRate.Proportional.For(Drawn(1.5), budget: 20, fullBudget: 180)["learning_rate"]);
+        Assert.Equal(ShortRungRate.Ceiling, new ShortRungRate(1.0).For(Drawn(0.2), budget: 20, fullBudget: 180)["learning_rate"]);
+        Assert.Equal(1.5, new ShortRungRate(1.0).For(Drawn(1.5), budget: 20, fullBudget: 180)["learning_rate"]);
     }
 
     [Fact]
@@ -43,6 +43,6 @@ public sealed class ShortRungRateTests
     {
         var drawn = ParameterSet.Of([new("trees_depth", 6)]);
 
-        Assert.Same(drawn, ShortRungRate.Proportional.For(drawn, budget: 20, fullBudget: 180));
+        Assert.Same(drawn, new ShortRungRate(1.0).For(drawn, budget: 20, fullBudget: 180));
     }
 }
