@@ -5,11 +5,11 @@ using Foldwise.Core.Spaces;
 
 internal sealed record BenchArgs(
     string Part, DemoSize Size, int[] SeedList, int RandomTrials, int AshaTrials, ScheduleKind Schedule,
-    int Min, int Max, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents)
+    int Min, int Max, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe)
 {
     public string RandomFile(int seed) => $"random-{Size}-{Family}-r{Max}-seed{seed}.tsv".ToLowerInvariant();
 
-    public string AshaFile(int seed) => $"{Schedule}-tpe-{Size}-{Family}-r{Min}-{Max}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}-seed{seed}.tsv".ToLowerInvariant();
+    public string AshaFile(int seed) => $"{Schedule}-tpe{(JointTpe ? "joint" : "1d")}-{Size}-{Family}-r{Min}-{Max}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}-seed{seed}.tsv".ToLowerInvariant();
 
     public static BenchArgs Parse(string[] args)
     {
@@ -47,6 +47,12 @@ internal sealed record BenchArgs(
             Get("--tag", ""),
             double.Parse(Get("--rate-exponent", "0.5"), CultureInfo.InvariantCulture),
             Int("--probe-rounds", "20"),
-            [.. Get("--probe-exponents", "0,0.5,1").Split(',').Select(s => double.Parse(s, CultureInfo.InvariantCulture))]);
+            [.. Get("--probe-exponents", "0,0.5,1").Split(',').Select(s => double.Parse(s, CultureInfo.InvariantCulture))],
+            Get("--tpe", "joint") switch
+            {
+                "joint" => true,
+                "independent" => false,
+                var other => throw new ArgumentException($"--tpe must be joint or independent, not '{other}'"),
+            });
     }
 }

@@ -11,7 +11,7 @@ internal static class Comparison
         var c = CultureInfo.InvariantCulture;
         int[] targets = [options.RandomTrials / 2, options.RandomTrials];
         var fractions = targets.ToDictionary(t => t, _ => new List<double>());
-        Console.WriteLine($"{options.Schedule}+TPE rounds {options.Min}..{options.Max}, eta {options.Eta} against random search at {options.Max} rounds; {options.Size} table, {options.Family}");
+        Console.WriteLine($"{options.Schedule}+TPE ({(options.JointTpe ? "joint" : "independent")}) rounds {options.Min}..{options.Max}, eta {options.Eta}, rate exponent {options.RateExponent} against random search at {options.Max} rounds; {options.Size} table, {options.Family}");
         Console.WriteLine("seed  random trials  random best  random compute  asha compute to reach  fraction  asha trials so far  asha best (trials, at max)");
         foreach (int seed in options.SeedList)
         {

@@ -1,6 +1,7 @@
 using System.Diagnostics;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Learning;
+using Foldwise.Core.Proposers;
 using Foldwise.Core.Schedules;
 using Foldwise.Core.Search;
 using Foldwise.Core.Spaces;
@@ -20,7 +21,7 @@ internal static class SearchRun
             Schedule = new ScheduleOptions(kind, proposer, options.Min, options.Max, options.Eta, options.RateExponent),
             Budget = new SearchBudget(trials, null),
         };
-        var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition), new NoJournal(), TimeProvider.System);
+        var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition, new TpeOptions(Multivariate: options.JointTpe)), new NoJournal(), TimeProvider.System);
         var executor = new TrialExecutor(LearnerCatalog.BuiltIn.Get(options.Family));
         var rows = new List<TraceRow>();
         double compute = 0, best = double.PositiveInfinity;

@@ -16,6 +16,7 @@ internal sealed class ParzenEstimator : IUnivariateDensity
     private readonly double[] _inverseSigmas;
     private readonly double[] _sigmas;
     private readonly double[] _scales;
+    private readonly double[] _logNorms;
     private readonly double[] _cumulative;
 
     private ParzenEstimator(double low, double high, double[] means, double[] sigmas, double[] weights)
@@ -26,6 +27,7 @@ internal sealed class ParzenEstimator : IUnivariateDensity
         _sigmas = sigmas;
         _inverseSigmas = new double[means.Length];
         _scales = new double[means.Length];
+        _logNorms = new double[means.Length];
         _cumulative = new double[means.Length];
         double total = weights.Sum();
         double running = 0;
@@ -34,7 +36,9 @@ internal sealed class ParzenEstimator : IUnivariateDensity
             // Truncation to [low, high] renormalises each kernel by the mass it keeps inside the interval.
             double mass = Gaussian.Cdf((high - means[i]) / sigmas[i]) - Gaussian.Cdf((low - means[i]) / sigmas[i]);
             _inverseSigmas[i] = 1.0 / sigmas[i];
-            _scales[i] = weights[i] / total * Gaussian.InverseSqrtTwoPi / (sigmas[i] * Math.Max(mass, 1e-12));
+            double norm = Gaussian.InverseSqrtTwoPi / (sigmas[i] * Math.Max(mass, 1e-12));
+            _scales[i] = weights[i] / total * norm;
+            _logNorms[i] = Math.Log(norm);
             running += weights[i] / total;
             _cumulative[i] = running;
         }
@@ -109,7 +113,19 @@ internal sealed class ParzenEstimator : IUnivariateDensity
     {
         double u = random.NextDouble();
         int i = Array.BinarySearch(_cumulative, u);
-        i = Math.Min(i >= 0 ? i + 1 : ~i, _means.Length - 1);
+        return SampleKernel(Math.Min(i >= 0 ? i + 1 : ~i, _means.Length - 1), random);
+    }
+
+    /// <summary>log of kernel <paramref name="i"/>'s own (truncated, unweighted) density at x; kernel i is point i, the prior last.</summary>
+    public double KernelLogDensity(int i, double x)
+    {
+        double z = (x - _means[i]) * _inverseSigmas[i];
+        return _logNorms[i] - (0.5 * z * z);
+    }
+
+    /// <summary>A draw from kernel <paramref name="i"/> alone, inside [low, high].</summary>
+    public double SampleKernel(int i, Random random)
+    {
         for (int attempt = 0; attempt < SampleTries; attempt++)
         {
             double x = _means[i] + (_sigmas[i] * Gaussian.Sample(random));

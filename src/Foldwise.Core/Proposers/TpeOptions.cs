@@ -20,12 +20,16 @@ namespace Foldwise.Core.Proposers;
 /// </param>
 /// <param name="Window">Most recent results at the chosen budget the model is fitted on (bounds the cost of a decision).</param>
 /// <param name="PriorWeight">Weight of the wide prior kernel, and the pseudo-count of every choice.</param>
+/// <param name="Multivariate">
+/// Model the parameters jointly (<see cref="ProductKernelDensity"/>) rather than one by one (<see cref="IndependentDensity"/>).
+/// </param>
 public sealed record TpeOptions(
     double Gamma = 0.25,
     int Candidates = 24,
     int? StartupResults = null,
     int Window = 128,
-    double PriorWeight = 1.0)
+    double PriorWeight = 1.0,
+    bool Multivariate = true)
 {
     public int StartupFor(int dimensions) => StartupResults ?? Math.Max(2, dimensions + 1);
 

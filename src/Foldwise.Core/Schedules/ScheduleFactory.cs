@@ -7,10 +7,11 @@ namespace Foldwise.Core.Schedules;
 /// <summary>Builds the schedule and proposer a definition asks for (the defaults: ASHA with TPE), seeded by its Seed.</summary>
 public static class ScheduleFactory
 {
-    public static ISchedule Create(SearchDefinition definition)
+    /// <param name="tpe">TPE settings other than the defaults (benchmarks compare them); ignored for random proposals.</param>
+    public static ISchedule Create(SearchDefinition definition, TpeOptions? tpe = null)
     {
         var options = definition.Schedule;
-        var proposer = CreateProposer(options.Proposer);
+        var proposer = CreateProposer(options.Proposer, tpe);
         return options.Kind switch
         {
             ScheduleKind.Full => new FullBudgetSchedule(definition.Families, options, proposer, definition.Seed),
@@ -20,10 +21,10 @@ public static class ScheduleFactory
         };
     }
 
-    public static IProposer CreateProposer(ProposerKind kind) => kind switch
+    public static IProposer CreateProposer(ProposerKind kind, TpeOptions? tpe = null) => kind switch
     {
         ProposerKind.Random => new RandomProposer(),
-        ProposerKind.Tpe => new TpeProposer(),
+        ProposerKind.Tpe => new TpeProposer(tpe),
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "unknown proposer kind"),
     };
 }

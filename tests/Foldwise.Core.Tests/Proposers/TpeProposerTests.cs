@@ -166,6 +166,18 @@ public sealed class TpeProposerTests
     }
 
     [Fact]
+    public void Does_better_on_Hartmann_six_with_joint_densities_than_with_independent_ones()
+    {
+        // Measured here, median best over 40 seeds (random search in brackets): at 20/30/50/100 evaluations joint
+        // −1.961/−2.439/−2.848/−3.141, independent −1.906/−2.220/−2.735/−3.127 (−1.295/−1.406/−1.712/−1.961); on Branin
+        // at 15/25/40/60 joint 1.256/0.658/0.498/0.441, independent 1.414/0.681/0.504/0.454. The widest gap is checked.
+        double joint = ProposerRuns.MedianBest(new TpeProposer(new TpeOptions(Multivariate: true)), TestFunctions.HartmannSpace, TestFunctions.Hartmann, 30, 40);
+        double independent = ProposerRuns.MedianBest(new TpeProposer(new TpeOptions(Multivariate: false)), TestFunctions.HartmannSpace, TestFunctions.Hartmann, 30, 40);
+
+        Assert.True(joint < independent - 0.1, $"joint {joint:F3}, independent {independent:F3}");
+    }
+
+    [Fact]
     public void Is_repeatable_for_the_same_history_and_seed()
     {
         var first = ProposerRuns.Minimise(new TpeProposer(), TestFunctions.BraninSpace, TestFunctions.Branin, 30, seed: 4);
