@@ -48,7 +48,7 @@ internal sealed record BenchArgs(
             double.Parse(Get("--rate-exponent", "0.5"), CultureInfo.InvariantCulture),
             Int("--probe-rounds", "20"),
             [.. Get("--probe-exponents", "0,0.5,1").Split(',').Select(s => double.Parse(s, CultureInfo.InvariantCulture))],
-            Get("--tpe", "joint") switch
+            Get("--tpe", "independent") switch
             {
                 "joint" => true,
                 "independent" => false,

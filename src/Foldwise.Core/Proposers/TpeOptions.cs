@@ -29,7 +29,7 @@ public sealed record TpeOptions(
     int? StartupResults = null,
     int Window = 128,
     double PriorWeight = 1.0,
-    bool Multivariate = true)
+    bool Multivariate = false)
 {
     public int StartupFor(int dimensions) => StartupResults ?? Math.Max(2, dimensions + 1);
 
