@@ -19,7 +19,7 @@ internal sealed class ProductKernelDensity : IJointDensity
     private readonly double[] _logWeights;
     private readonly double[] _cumulative;
     private readonly bool _prior;
-    private readonly double[] _terms;
+    private readonly double[] _terms; // scratch for LogDensity: a model serves one decision at a time (the coordinator is single-threaded)
 
     private ProductKernelDensity(TpeDimension[] dimensions, ParzenEstimator?[] numeric, int[][] choices, double[] weights, bool prior)
     {
@@ -40,8 +40,6 @@ internal sealed class ProductKernelDensity : IJointDensity
 
         _terms = new double[weights.Length];
     }
-
-    public int Kernels => _logWeights.Length;
 
     /// <summary>Fits one product kernel per point; a prior weight of 0 leaves the prior kernel out (for the liars' density).</summary>
     public static ProductKernelDensity Fit(TpeDimension[] dimensions, IReadOnlyList<double[]> points, double priorWeight)
