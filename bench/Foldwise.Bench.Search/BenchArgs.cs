@@ -5,11 +5,14 @@ using Foldwise.Core.Spaces;
 
 internal sealed record BenchArgs(
     string Part, DemoSize Size, int[] SeedList, int RandomTrials, int AshaTrials, ScheduleKind Schedule,
-    int Min, int Max, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe)
+    int Min, int Max, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe, ProposerKind Proposer)
 {
     public string RandomFile(int seed) => $"random-{Size}-{Family}-r{Max}-seed{seed}.tsv".ToLowerInvariant();
 
-    public string AshaFile(int seed) => $"{Schedule}-tpe{(JointTpe ? "joint" : "1d")}-{Size}-{Family}-r{Min}-{Max}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}-seed{seed}.tsv".ToLowerInvariant();
+    /// <summary>What proposes the scheduled search's new candidates: TPE, independent or joint, or random draws (a control).</summary>
+    public string ProposerLabel => Proposer == ProposerKind.Random ? "random" : JointTpe ? "TPE joint" : "TPE independent";
+
+    public string AshaFile(int seed) => $"{Schedule}-{(Proposer == ProposerKind.Random ? "random" : JointTpe ? "tpejoint" : "tpe1d")}-{Size}-{Family}-r{Min}-{Max}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}-seed{seed}.tsv".ToLowerInvariant();
 
     public static BenchArgs Parse(string[] args)
     {
@@ -53,6 +56,7 @@ internal sealed record BenchArgs(
                 "joint" => true,
                 "independent" => false,
                 var other => throw new ArgumentException($"--tpe must be joint or independent, not '{other}'"),
-            });
+            },
+            Enum.Parse<ProposerKind>(Get("--proposer", "tpe"), ignoreCase: true));
     }
 }

@@ -11,7 +11,7 @@ internal static class Comparison
         var c = CultureInfo.InvariantCulture;
         int[] targets = [options.RandomTrials / 2, options.RandomTrials];
         var fractions = targets.ToDictionary(t => t, _ => new List<double>());
-        Console.WriteLine($"{options.Schedule}+TPE ({(options.JointTpe ? "joint" : "independent")}) rounds {options.Min}..{options.Max}, eta {options.Eta}, rate exponent {options.RateExponent} against random search at {options.Max} rounds; {options.Size} table, {options.Family}");
+        Console.WriteLine($"{options.Schedule} ({options.ProposerLabel}) rounds {options.Min}..{options.Max}, eta {options.Eta}, rate exponent {options.RateExponent} against random search at {options.Max} rounds; {options.Size} table, {options.Family}");
         Console.WriteLine("seed  random trials  random best  random compute  asha compute to reach  fraction  asha trials so far  asha best (trials, at max)");
         foreach (int seed in options.SeedList)
         {
@@ -49,7 +49,7 @@ internal static class Comparison
             var sorted = list.Order().ToList();
             double median = sorted.Count % 2 == 1 ? sorted[sorted.Count / 2] : (sorted[(sorted.Count / 2) - 1] + sorted[sorted.Count / 2]) / 2;
             Console.WriteLine(string.Create(c,
-                $"random {count} trials: median fraction of its compute that ASHA+TPE needed to match its best: {(double.IsInfinity(median) ? "not reached" : median.ToString("P1", c))} " +
+                $"random {count} trials: median fraction of its compute that the scheduled search needed to match its best: {(double.IsInfinity(median) ? "not reached" : median.ToString("P1", c))} " +
                 $"(seeds: {string.Join(", ", list.Select(f => double.IsInfinity(f) ? ">1" : f.ToString("P1", c)))}; aim: ≤ 25%)"));
         }
     }

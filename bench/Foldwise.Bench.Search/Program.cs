@@ -24,7 +24,7 @@ if (options.Part != "report")
     var train = ColumnScreen.Apply(report, rawTrain);
     var test = ColumnScreen.Apply(report, rawTest);
     Console.WriteLine($"table {options.Size}: {train.RowCount} × {train.FeatureCount} after screening; family {options.Family}; " +
-                      $"{options.Schedule} rounds {options.Min}..{options.Max}, eta {options.Eta}, rate exponent {options.RateExponent}, TPE {(options.JointTpe ? "joint" : "independent")}; random {options.RandomTrials} trials at {options.Max}; {options.Threads} threads");
+                      $"{options.Schedule} rounds {options.Min}..{options.Max}, eta {options.Eta}, rate exponent {options.RateExponent}, proposer {options.ProposerLabel}; random {options.RandomTrials} trials at {options.Max}; {options.Threads} threads");
 
     // Test predictions are part of every trial but not of the comparison: a 50-row test slice keeps them cheap.
     var testRows = test.ToRows();
@@ -55,10 +55,10 @@ if (options.Part != "report")
         {
             // Without random's result at hand (the searches running side by side) ASHA+TPE runs to the compute cap.
             double stopBelow = random is null ? double.NegativeInfinity : random[^1].Best;
-            var asha = SearchRun.Run(data, options, options.Schedule, ProposerKind.Tpe, options.AshaTrials, seed, stopBelow, computeCap: randomCompute);
+            var asha = SearchRun.Run(data, options, options.Schedule, options.Proposer, options.AshaTrials, seed, stopBelow, computeCap: randomCompute);
             string ashaPath = Path.Combine(options.Out, options.AshaFile(seed));
             Trace.Write(ashaPath, asha);
-            Console.WriteLine($"seed {seed}: {options.Schedule}+TPE best {asha.Min(r => r.Score):F5} after {asha.Count} trials ({asha.Count(r => r.Budget == options.Max)} at {options.Max} rounds), {asha.Sum(r => r.Seconds):F0} s → {ashaPath}");
+            Console.WriteLine($"seed {seed}: {options.Schedule} ({options.ProposerLabel}) best {asha.Min(r => r.Score):F5} after {asha.Count} trials ({asha.Count(r => r.Budget == options.Max)} at {options.Max} rounds), {asha.Sum(r => r.Seconds):F0} s → {ashaPath}");
         }
     }
 }

@@ -22,6 +22,17 @@ internal static class TestFunctions
 
     public const double BraninMinimum = 0.397887; // 5/(4π) — Dixon & Szegő 1978
 
+    // Multi-fidelity Branin of Kandasamy et al., "Multi-fidelity Bayesian Optimisation with Continuous Approximations"
+    // (ICML 2017), from memory: b, c and t move with fidelities z₁, z₂, z₃ ∈ [0, 1] as b − 0.01(1 − z₁), c − 0.1(1 − z₂),
+    // t + 0.05(1 − z₃); z = 1 is Branin itself. Here one fidelity, budget / full budget, drives all three.
+    public static double BraninAt(ParameterSet p, int budget, int fullBudget)
+    {
+        double x1 = p["x1"], x2 = p["x2"], missing = 1 - ((double)budget / fullBudget);
+        double b = (5.1 / (4 * Math.PI * Math.PI)) - (0.01 * missing), c = (5 / Math.PI) - (0.1 * missing), t = (1 / (8 * Math.PI)) + (0.05 * missing);
+        double u = x2 - (b * x1 * x1) + (c * x1) - 6;
+        return (u * u) + (10 * (1 - t) * Math.Cos(x1)) + 10;
+    }
+
     // Hartmann 6-D coefficients α, A, P of Dixon & Szegő 1978 as tabulated by Surjanovic & Bingham,
     // Virtual Library of Simulation Experiments (sfu.ca/~ssurjano/hart6.html); minimum −3.32237 at
     // (0.20169, 0.150011, 0.476874, 0.275332, 0.311652, 0.6573) on [0, 1]^6.
@@ -49,7 +60,14 @@ internal static class TestFunctions
 
     public static double Hartmann(ParameterSet p) => Hartmann(Enumerable.Range(1, 6).Select(i => p[$"x{i}"]).ToArray());
 
-    public static double Hartmann(double[] x)
+    public static double Hartmann(double[] x) => Hartmann(x, 0);
+
+    // Multi-fidelity Hartmann-6 of Kandasamy et al. (ICML 2017), from memory: every αᵢ becomes αᵢ − 0.1(1 − z); here
+    // z = budget / full budget, and z = 1 is Hartmann-6 itself.
+    public static double HartmannAt(ParameterSet p, int budget, int fullBudget) =>
+        Hartmann(Enumerable.Range(1, 6).Select(i => p[$"x{i}"]).ToArray(), 0.1 * (1 - ((double)budget / fullBudget)));
+
+    private static double Hartmann(double[] x, double alphaShift)
     {
         double sum = 0;
         for (int i = 0; i < 4; i++)
@@ -61,7 +79,7 @@ internal static class TestFunctions
                 inner += A[i, j] * d * d;
             }
 
-            sum += Alpha[i] * Math.Exp(-inner);
+            sum += (Alpha[i] - alphaShift) * Math.Exp(-inner);
         }
 
         return -sum;

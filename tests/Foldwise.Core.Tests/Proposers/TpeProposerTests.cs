@@ -45,6 +45,14 @@ public sealed class TpeProposerTests
 
         // Hartmann-6 minimum −3.32237 — Surjanovic & Bingham, after Dixon & Szegő 1978
         Assert.Equal(TestFunctions.HartmannMinimum, TestFunctions.Hartmann(TestFunctions.HartmannArgMin), 5);
+
+        // The multi-fidelity versions (Kandasamy et al. 2017) are the originals at the full budget and differ below it
+        var branin = ParameterSet.Of([new("x1", Math.PI), new("x2", 2.275)]);
+        var hartmann = ParameterSet.Of([.. TestFunctions.HartmannArgMin.Select((x, i) => new KeyValuePair<string, double>($"x{i + 1}", x))]);
+        Assert.Equal(TestFunctions.BraninMinimum, TestFunctions.BraninAt(branin, 9, 9), 5);
+        Assert.Equal(TestFunctions.HartmannMinimum, TestFunctions.HartmannAt(hartmann, 9, 9), 5);
+        Assert.NotEqual(TestFunctions.BraninMinimum, TestFunctions.BraninAt(branin, 1, 9), 2);
+        Assert.True(TestFunctions.HartmannAt(hartmann, 1, 9) > TestFunctions.HartmannMinimum + 0.05);
     }
 
     [Fact]
