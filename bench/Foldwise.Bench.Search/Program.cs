@@ -6,7 +6,8 @@
 // Every trial is written to a trace file (bench/results/search/), so the two searches can run as two processes
 // side by side (--part random / --part asha, one thread each: ML.NET trains one LightGBM model per process at a
 // time) and be compared afterwards (--part report). A random trace already on disk for the same table, family,
-// budget and seed is reused instead of being recomputed (fits are deterministic for a seed).
+// budget and seed is reused instead of being recomputed (fits are deterministic for a seed). --proposer random runs
+// the schedule with random candidates instead of TPE's: a control that separates the schedule's saving from the proposer's.
 using System.Globalization;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Demo;

@@ -21,7 +21,7 @@ internal static class SearchRun
             Schedule = new ScheduleOptions(kind, proposer, options.Min, options.Max, options.Eta, options.RateExponent),
             Budget = new SearchBudget(trials, null),
         };
-        var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition, new TpeOptions(Multivariate: options.JointTpe)), new NoJournal(), TimeProvider.System);
+        var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition, new TpeOptions(Multivariate: options.JointTpe, Ladder: options.Ladder)), new NoJournal(), TimeProvider.System);
         var executor = new TrialExecutor(LearnerCatalog.BuiltIn.Get(options.Family));
         var rows = new List<TraceRow>();
         double compute = 0, best = double.PositiveInfinity;

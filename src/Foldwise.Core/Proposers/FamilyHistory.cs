@@ -14,6 +14,8 @@ public sealed class FamilyHistory
     private readonly TrialTracker _tracker = new();
     private readonly SortedList<int, List<Observation>> _results = [];
     private readonly SortedDictionary<int, double[]> _pending = [];
+    private readonly Dictionary<int, int> _candidates = [];
+    private readonly SortedList<int, (int Budget, Observation Result)> _furthest = [];
     private readonly ReadOnlyCollection<int> _budgets;
 
     public FamilyHistory(string family, ParameterSpace space)
@@ -36,6 +38,15 @@ public sealed class FamilyHistory
     /// <summary>Values of new candidates not yet finished, by trial id.</summary>
     public IReadOnlyCollection<double[]> Pending => _pending.Values;
 
+    /// <summary>Finished results at every budget.</summary>
+    public int Results { get; private set; }
+
+    /// <summary>
+    /// Each candidate once, at the highest budget it has a result at (its <see cref="Observation.TrialId"/> is the trial
+    /// that started it), oldest candidate first: the most recent ones are at the end, without a sort.
+    /// </summary>
+    public IList<(int Budget, Observation Result)> Furthest => _furthest.Values;
+
     /// <summary>Results at a budget, oldest first; empty when there are none.</summary>
     public IReadOnlyList<Observation> ResultsAt(int budget) =>
         _results.TryGetValue(budget, out var list) ? list : [];
@@ -44,6 +55,11 @@ public sealed class FamilyHistory
     public TrialChange Observe(TrialRecord trial)
     {
         var change = _tracker.Observe(trial);
+        if (change.Created)
+        {
+            _candidates[trial.Id] = trial.ParentId is int parent ? CandidateOf(parent) : trial.Id;
+        }
+
         if (change.Created && trial.ParentId is null)
         {
             NewCandidates++;
@@ -64,12 +80,22 @@ public sealed class FamilyHistory
                     _results.Add(trial.Budget, list);
                 }
 
-                list.Add(new Observation(trial.Id, Encode(trial.Parameters), score));
+                var result = new Observation(trial.Id, Encode(trial.Parameters), score);
+                list.Add(result);
+                Results++;
+                int candidate = CandidateOf(trial.Id);
+                if (!_furthest.TryGetValue(candidate, out var known) || known.Budget <= trial.Budget)
+                {
+                    _furthest[candidate] = (trial.Budget, result with { TrialId = candidate });
+                }
             }
         }
 
         return change;
     }
+
+    /// <summary>The trial that started <paramref name="trialId"/>'s candidate (itself when it is new or unknown).</summary>
+    public int CandidateOf(int trialId) => _candidates.TryGetValue(trialId, out int candidate) ? candidate : trialId;
 
     /// <summary>The values in the space's order; a name the set lacks takes the range's low end.</summary>
     public double[] Encode(ParameterSet parameters)

@@ -30,9 +30,13 @@ internal sealed class TpeModel
 
     public int Results { get; }
 
+    /// <summary>Orders results best first by (score, trial id).</summary>
+    public static void SortByScore(List<Observation> window) =>
+        window.Sort(static (a, b) => a.Score != b.Score ? a.Score.CompareTo(b.Score) : a.TrialId.CompareTo(b.TrialId));
+
+    /// <param name="window">The results, already ordered best first.</param>
     public static TpeModel Fit(int budget, int results, TpeDimension[] dimensions, List<Observation> window, TpeOptions options)
     {
-        window.Sort(static (a, b) => a.Score != b.Score ? a.Score.CompareTo(b.Score) : a.TrialId.CompareTo(b.TrialId));
         int n = window.Count;
 
         // The quantile is taken over real results only; liars always join the rest (they carry the worst score).

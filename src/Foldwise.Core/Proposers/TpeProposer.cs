@@ -5,14 +5,16 @@ namespace Foldwise.Core.Proposers;
 
 /// <summary>
 /// Tree-structured Parzen Estimator (Bergstra et al., NeurIPS 2011) with the defaults of <see cref="TpeOptions"/>.
-/// It fits on the highest budget that has enough results (Falkner et al., BOHB, ICML 2018), splits them at the
-/// γ-quantile into good and the rest, counts unfinished new candidates among the rest at the worst observed score
-/// (constant liar, Ginsbourger et al. 2010) so parallel proposals spread out, draws candidates from the good density
-/// l(x) and proposes the one with the largest l(x)/g(x). Parameters are modelled one by one as in the paper by default, or jointly
-/// (one product kernel per result, <see cref="ProductKernelDensity"/>, as BOHB's densities are): joint won on Branin and
-/// Hartmann-6 but lost on the full-size demo bench (20 → 180, η 9), where it exploited the short rung's bias harder.
-/// Until some budget has enough results it proposes at random and says so. A family's fitted densities are kept
-/// until a result arrives at the budget they were fitted on; only the liars' density is fitted per proposal.
+/// By default it ranks every candidate of the family by the highest budget it reached, then by its score there (the
+/// ladder, <see cref="TpeOptions.Ladder"/>); or, as in BOHB (Falkner et al., ICML 2018), it fits on the results at the
+/// highest budget that has enough of them. It splits the ranked results at the γ-quantile into good and the rest, counts
+/// unfinished new candidates among the rest at the worst observed score (constant liar, Ginsbourger et al. 2010) so
+/// parallel proposals spread out, draws candidates from the good density l(x) and proposes the one with the largest
+/// l(x)/g(x). Parameters are modelled one by one as in the paper by default, or jointly (one product kernel per result,
+/// <see cref="ProductKernelDensity"/>, as BOHB's densities are): joint won on Branin and Hartmann-6 but lost on the
+/// full-size demo bench (20 → 180, η 9), where it exploited the short rung's bias harder.
+/// Until enough results are in it proposes at random and says so. A family's fitted densities are kept until a result
+/// arrives that they were not fitted on; only the liars' density is fitted per proposal.
 /// </summary>
 public sealed class TpeProposer : IProposer
 {
@@ -36,16 +38,17 @@ public sealed class TpeProposer : IProposer
         var space = history.Space;
         var dimensions = Dimensions(space);
         int startup = _options.StartupFor(dimensions.Length);
-        int budget = dimensions.Length == 0 ? -1 : BudgetToFit(history, startup);
+        int budget = dimensions.Length == 0 ? -1 : _options.Ladder ? LadderBudget(history, startup) : BudgetToFit(history, startup);
         if (budget < 0)
         {
             return new Proposal(RandomProposer.Draw(space, random), RandomProposer.ProposerName);
         }
 
-        int results = history.ResultsAt(budget).Count;
+        int results = _options.Ladder ? history.Results : history.ResultsAt(budget).Count;
         if (!_models.TryGetValue(history, out var model) || model.Budget != budget || model.Results != results)
         {
-            model = TpeModel.Fit(budget, results, dimensions, Window(history.ResultsAt(budget), startup), _options);
+            var window = _options.Ladder ? LadderWindow(history) : Window(history.ResultsAt(budget), startup);
+            model = TpeModel.Fit(budget, results, dimensions, window, _options);
             _models.AddOrUpdate(history, model);
         }
 
@@ -68,6 +71,30 @@ public sealed class TpeProposer : IProposer
         return -1;
     }
 
+    /// <summary>0 (the model spans every budget) once enough candidates have a result, else −1.</summary>
+    private static int LadderBudget(FamilyHistory history, int startup) => history.Furthest.Count >= startup ? 0 : -1;
+
+    /// <summary>
+    /// Every candidate once, best first in the order successive halving itself implies: further up the ladder first (a
+    /// candidate promoted to a budget beat the ones stopped below it), then by score at that budget. The most recent
+    /// <see cref="TpeOptions.Window"/> candidates.
+    /// </summary>
+    private List<Observation> LadderWindow(FamilyHistory history)
+    {
+        var all = history.Furthest;
+        var recent = new List<(int Budget, Observation Result)>(Math.Min(all.Count, _options.Window));
+        for (int i = Math.Max(0, all.Count - _options.Window); i < all.Count; i++)
+        {
+            recent.Add(all[i]);
+        }
+
+        recent.Sort(static (a, b) =>
+            a.Budget != b.Budget ? b.Budget.CompareTo(a.Budget)
+            : a.Result.Score != b.Result.Score ? a.Result.Score.CompareTo(b.Result.Score)
+            : a.Result.TrialId.CompareTo(b.Result.TrialId));
+        return recent.ConvertAll(static f => f.Result);
+    }
+
     /// <summary>The most recent results the model is fitted on (a copy, which the model sorts).</summary>
     private List<Observation> Window(IReadOnlyList<Observation> all, int startup)
     {
@@ -78,6 +105,7 @@ public sealed class TpeProposer : IProposer
             window.Add(all[i]);
         }
 
+        TpeModel.SortByScore(window);
         return window;
     }
 

@@ -47,6 +47,25 @@ public sealed class FamilyHistoryTests
     }
 
     [Fact]
+    public void Follows_each_candidate_up_its_promotions_to_the_highest_budget_it_has_a_result_at()
+    {
+        var history = new FamilyHistory("f", Space);
+
+        // Given candidate 1 promoted twice (1 → 3 → 5), candidate 2 stopped at the first budget, candidate 4 still running
+        history.Observe(Trial(1, TrialState.Done, 0.5));
+        history.Observe(Trial(2, TrialState.Done, 0.6));
+        history.Observe(Trial(3, TrialState.Done, 0.4, parent: 1, budget: 3));
+        history.Observe(Trial(4, TrialState.Running));
+        history.Observe(Trial(5, TrialState.Done, 0.3, parent: 3, budget: 9));
+
+        // Then each finished candidate appears once, under the trial that started it, at its furthest budget
+        Assert.Equal(1, history.CandidateOf(5));
+        Assert.Equal(4, history.Results);
+        var furthest = history.Furthest.OrderBy(f => f.Result.TrialId).Select(f => (f.Result.TrialId, f.Budget, f.Result.Score)).ToList();
+        Assert.Equal([(1, 9, 0.3), (2, 1, 0.6)], furthest);
+    }
+
+    [Fact]
     public void Counts_a_record_seen_twice_once_and_ignores_scores_that_are_not_finite()
     {
         var history = new FamilyHistory("f", Space);

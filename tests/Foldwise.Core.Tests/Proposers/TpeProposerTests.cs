@@ -129,7 +129,7 @@ public sealed class TpeProposerTests
 
         Add(budget: 1, count: 40, best: 0.1);
         Add(budget: 9, count: 9, best: 0.9);
-        var tpe = new TpeProposer(new TpeOptions(StartupResults: 10));
+        var tpe = new TpeProposer(new TpeOptions(StartupResults: 10, Ladder: false));
         double Mean() => Enumerable.Range(0, 40).Average(s => tpe.Propose(history, new Random(s)).Parameters["x"]);
 
         // When the full budget has fewer than the ten results this model is set to need, proposals follow the low budget
@@ -138,6 +138,32 @@ public sealed class TpeProposerTests
         // Then once it has ten, they follow the full budget
         Add(budget: 9, count: 1, best: 0.9);
         Assert.InRange(Mean(), 0.7, 1.0);
+    }
+
+    [Fact]
+    public void On_the_ladder_ranks_candidates_promoted_further_first_whatever_they_scored_lower_down()
+    {
+        // Given 20 candidates at budget 1 where x near 0.1 scores best, and four candidates near 0.9 promoted to budget 9
+        var space = new ParameterSpace([ParameterRange.Float("x", 0, 1)]);
+        TpeProposer Tpe(bool ladder) => new(new TpeOptions(StartupResults: 10, Ladder: ladder));
+        var history = new FamilyHistory("f", space);
+        var xs = Enumerable.Range(0, 20).Select(i => (i + 0.5) / 20).ToArray();
+        for (int i = 0; i < xs.Length; i++)
+        {
+            history.Observe(ProposerRuns.Done(i + 1, ParameterSet.Of([new("x", xs[i])]), Math.Abs(xs[i] - 0.1)));
+        }
+
+        foreach (int parent in new[] { 17, 18, 19, 20 })
+        {
+            history.Observe(ProposerRuns.Done(history.Results + 1, ParameterSet.Of([new("x", xs[parent - 1])]), Math.Abs(xs[parent - 1] - 0.9), budget: 9) with { ParentId = parent });
+        }
+
+        double Mean(TpeProposer tpe) => Enumerable.Range(0, 40).Average(s => tpe.Propose(history, new Random(s)).Parameters["x"]);
+
+        // Then the ladder's good share (5 of 20 candidates) is the four promoted ones and the best of the rest, so proposals go high,
+        // while BOHB's rule, with fewer than ten results at budget 9, fits on budget 1 and proposes near 0.1
+        Assert.InRange(Mean(Tpe(ladder: true)), 0.6, 1.0);
+        Assert.InRange(Mean(Tpe(ladder: false)), 0.0, 0.3);
     }
 
     [Fact]
