@@ -138,23 +138,22 @@ public sealed class SearchRun(IAnsiConsole console)
 
         console.MarkupLine($"Search [bold]{Markup.Escape(header.SearchId)}[/]: {definition.Schedule.Kind} with {definition.Schedule.Proposer}, " +
                            $"{string.Join(" + ", definition.Families.Select(f => f.Family))}, {definition.Folds}-fold, {slots} local slot(s)");
-        await using (var cluster = await EmbeddedCluster.StartAsync(Role, slots, threads, linked.Token))
+        try
         {
+            await using var cluster = await EmbeddedCluster.StartAsync(Role, slots, threads, linked.Token);
             cluster.Shelf.Put(header.TrainHash, trainBytes);
             cluster.Shelf.Put(header.TestHash, testBytes);
             cluster.LocalTables?.Seed(header.TrainHash, train);
             cluster.LocalTables?.Seed(header.TestHash, test);
             cluster.Sessions.Add(session);
-            try
-            {
-                await new ProgressView(console).FollowAsync(session, definition, linked.Token);
-            }
-            catch (OperationCanceledException) when (stopping.Abandon.IsCancellationRequested)
-            {
-                store.UpdateSpent(coordinator.Progress().SpentSeconds, finished: false);
-                console.MarkupLine("[yellow]Abandoned: running trials go back to the queue; 'foldwise resume' continues the search.[/]");
-                return ExitCodes.Interrupted;
-            }
+            await new ProgressView(console).FollowAsync(session, definition, linked.Token);
+        }
+        catch (OperationCanceledException) when (stopping.Abandon.IsCancellationRequested)
+        {
+            // Also while the cluster is still starting: a second Ctrl-C then abandons before any trial ran.
+            store.UpdateSpent(coordinator.Progress().SpentSeconds, finished: false);
+            console.MarkupLine("[yellow]Abandoned: running trials go back to the queue; 'foldwise resume' continues the search.[/]");
+            return ExitCodes.Interrupted;
         }
 
         var progress = coordinator.Progress();

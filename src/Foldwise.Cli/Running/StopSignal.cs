@@ -41,8 +41,9 @@ public sealed class StopSignal : IDisposable
         e.Cancel = true;
         if (Interlocked.Increment(ref presses) == 1)
         {
-            console.MarkupLine("[yellow]Stopping: no new trials; running ones finish, then the blend runs. Ctrl-C again to abandon them.[/]");
+            // Stop first, then print: a slot asking for work meanwhile must already be refused.
             StopRequested?.Invoke();
+            console.MarkupLine("[yellow]Stopping: no new trials; running ones finish, then the blend runs. Ctrl-C again to abandon them.[/]");
         }
         else
         {
