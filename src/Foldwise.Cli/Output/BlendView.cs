@@ -12,7 +12,7 @@ public static class BlendView
     {
         var byId = trials.ToDictionary(t => t.Id);
         var table = new Table().Title($"Blend ({blend.Mode})").AddColumns("trial", "family", "rounds", $"OOF {metric.Name}", "weight");
-        foreach (var member in blend.Members.OrderByDescending(m => m.Weight))
+        foreach (var member in blend.Members.Where(m => m.Weight > 0).OrderByDescending(m => m.Weight))
         {
             var trial = byId.GetValueOrDefault(member.TrialId);
             table.AddRow(
@@ -24,6 +24,13 @@ public static class BlendView
         }
 
         console.Write(table);
+        var unused = blend.Members.Where(m => m.Weight <= 0).OrderBy(m => m.TrialId).ToList();
+        if (unused.Count > 0)
+        {
+            // A pooled trial the solver gave no weight is left out of the table, but said: the lead sees it was considered.
+            console.MarkupLine("Pooled but given no weight: " + string.Join(", ", unused.Select(m => $"trial {m.TrialId} ({Markup.Escape(m.Family)})")));
+        }
+
         double spread = Spread(blend.NestedFoldScores);
         console.MarkupLine(
             $"Blend {metric.Name}: in-sample [bold]{blend.InSampleScore:F5}[/], nested estimate [bold]{blend.NestedScore:F5}[/] " +
