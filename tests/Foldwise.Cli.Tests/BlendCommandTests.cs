@@ -1,5 +1,10 @@
 using System.Globalization;
 using System.Text.Json;
+using Foldwise.Cli.Report;
+using Foldwise.Cli.Running;
+using Foldwise.Core.Definition;
+using Foldwise.Storage;
+using Spectre.Console.Testing;
 
 namespace Foldwise.Cli.Tests;
 
@@ -73,5 +78,28 @@ public sealed class BlendCommandTests(FinishedSearch search) : IClassFixture<Fin
 
         double stored = history.RootElement.EnumerateArray().Single(t => t.GetProperty("id").GetInt32() == trialId).GetProperty("score").GetDouble();
         Assert.Equal(stored, Math.Sqrt(sum / 90), 9);
+    }
+
+    [Fact]
+    public void An_abandoned_blend_writes_neither_the_prediction_file_nor_the_blend_record()
+    {
+        // Given the finished search's prediction file and stored blend (simplex, the definition's mode)
+        string predictions = Path.Combine(search.Workspace.Out, BlendStep.PredictionFileName);
+        Assert.Equal(0, CliHarness.Run("blend", search.Store).ExitCode);
+        byte[] before = File.ReadAllBytes(predictions);
+
+        // When a blend in another mode is abandoned (a second Ctrl-C) before it writes
+        using (var store = SearchStore.Open(search.Store))
+        {
+            var (header, definition) = StoredSearch.HeaderOf(store);
+            Assert.Throws<OperationCanceledException>(() => BlendStep.Run(
+                store, header, definition, search.Workspace.Out, new TestConsole(), new BlendOptions(BlendMode.Greedy, 2), new CancellationToken(canceled: true)));
+
+            // Then the store still holds the earlier blend, and the file is byte for byte the earlier one
+            Assert.Equal(BlendMode.Simplex, store.LoadBlend()!.Mode);
+        }
+
+        Assert.Equal(before, File.ReadAllBytes(predictions));
+        Assert.False(File.Exists(predictions + ".part"));
     }
 }

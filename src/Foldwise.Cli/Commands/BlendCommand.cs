@@ -23,7 +23,7 @@ public sealed class BlendCommand(IAnsiConsole console) : Command<BlendSettings>
         var (header, definition) = StoredSearch.HeaderOf(store);
         var options = new BlendOptions(settings.ParsedMode ?? definition.Blend.Mode, settings.Pool ?? definition.Blend.Pool);
         var quiet = settings.Json ? new QuietConsole().Console : console;
-        var blend = BlendStep.Run(store, header, definition, Path.GetDirectoryName(Path.GetFullPath(path))!, quiet, options);
+        var blend = BlendStep.Run(store, header, definition, Path.GetDirectoryName(Path.GetFullPath(path))!, quiet, options, cancellationToken);
         if (settings.Json)
         {
             var root = new JsonObject

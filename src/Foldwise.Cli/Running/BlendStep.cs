@@ -16,7 +16,11 @@ public static class BlendStep
 {
     public const string PredictionFileName = "predictions.csv";
 
-    public static BlendSummary Run(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, IAnsiConsole console, BlendOptions? options = null)
+    /// <summary>
+    /// <paramref name="abandon"/> is checked before the solve and again before anything is written, so an abandoned
+    /// blend leaves the previous prediction file and blend record as they were.
+    /// </summary>
+    public static BlendSummary Run(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, IAnsiConsole console, BlendOptions? options = null, CancellationToken abandon = default)
     {
         options ??= definition.Blend;
         using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.BlendSpan);
@@ -32,6 +36,7 @@ public static class BlendStep
         }
 
         var vectors = pool.Select(t => store.LoadVectors(t.Id) ?? throw new InvalidOperationException($"trial {t.Id} is done but its predictions are missing from the store")).ToList();
+        abandon.ThrowIfCancellationRequested();
         var target = header.TrainTarget.Select(metric.Forward).ToArray();
         var result = BlendStage.Run(new BlendInput(
             options,
@@ -39,6 +44,7 @@ public static class BlendStep
             target,
             header.Folds,
             metric));
+        abandon.ThrowIfCancellationRequested();
         var weights = pool.Select(t => result.Summary.Members.Single(m => m.TrialId == t.Id).Weight).ToList();
         var blended = BlendStage.Combine(weights, [.. vectors.Select(v => v.Test)]);
         string path = Path.Combine(outDir, PredictionFileName);

@@ -74,7 +74,7 @@ public sealed class SearchRun(IAnsiConsole console)
                 return ExitCodes.Ok;
             }
 
-            BlendStep.Run(store, header, definition, outDir, console);
+            BlendStep.Run(store, header, definition, outDir, console, abandon: cancellation);
             return ExitCodes.Ok;
         }
 
@@ -164,7 +164,17 @@ public sealed class SearchRun(IAnsiConsole console)
             return ExitCodes.Failed;
         }
 
-        BlendStep.Run(store, header, definition, outDir, console);
+        try
+        {
+            BlendStep.Run(store, header, definition, outDir, console, abandon: stopping.Abandon);
+        }
+        catch (OperationCanceledException) when (stopping.Abandon.IsCancellationRequested)
+        {
+            // The search stays unfinished: 'resume' blends it (after any trials its budget still allows).
+            console.MarkupLine($"[yellow]Abandoned the blend: every trial is stored, the prediction file was not written. 'foldwise blend {Markup.Escape(outDir)}' blends them.[/]");
+            return ExitCodes.Interrupted;
+        }
+
         store.UpdateSpent(progress.SpentSeconds, finished: progress.Stopping != StopReason.Requested);
         return ExitCodes.Ok;
     }

@@ -5,7 +5,7 @@ namespace Foldwise.Cli.Running;
 
 /// <summary>
 /// Ctrl-C once: stop creating trials, let running ones finish, then blend. Ctrl-C again (or SIGTERM):
-/// abandon running trials; everything done is already in the store.
+/// abandon running trials (or the blend, if it has begun); everything done is already in the store.
 /// </summary>
 public sealed class StopSignal : IDisposable
 {
