@@ -8,6 +8,9 @@
 // time) and be compared afterwards (--part report). A random trace already on disk for the same table, family,
 // budget and seed is reused instead of being recomputed (fits are deterministic for a seed). --proposer random runs
 // the schedule with random candidates instead of TPE's: a control that separates the schedule's saving from the proposer's.
+// Both searches draw from the same seed, so ASHA's random start-up proposals are random search's first draws (common
+// random numbers). --draw-offset N gives the scheduled search seed + N instead: its draws independent of random's,
+// the same folds.
 using System.Globalization;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Demo;
@@ -56,7 +59,7 @@ if (options.Part != "report")
         {
             // Without random's result at hand (the searches running side by side) ASHA+TPE runs to the compute cap.
             double stopBelow = random is null ? double.NegativeInfinity : random[^1].Best;
-            var asha = SearchRun.Run(data, options, options.Schedule, options.Proposer, options.AshaTrials, seed, stopBelow, computeCap: randomCompute);
+            var asha = SearchRun.Run(data, options, options.Schedule, options.Proposer, options.AshaTrials, seed + options.DrawOffset, stopBelow, computeCap: randomCompute);
             string ashaPath = Path.Combine(options.Out, options.AshaFile(seed));
             Trace.Write(ashaPath, asha);
             Console.WriteLine($"seed {seed}: {options.Schedule} ({options.ProposerLabel}) best {asha.Min(r => r.Score):F5} after {asha.Count} trials ({asha.Count(r => r.Budget == options.Max)} at {options.Max} rounds), {asha.Sum(r => r.Seconds):F0} s → {ashaPath}");
