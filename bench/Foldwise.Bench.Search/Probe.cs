@@ -7,6 +7,7 @@ using Foldwise.Learners;
 /// <summary>
 /// How well a short rung ranks candidates: reruns random search's traced candidates (already scored at the full
 /// budget) at a short budget, with the learning rate scaled by each exponent asked for, and compares the orders.
+/// At the full budget (--probe-rounds equal to --max) it refits them with other fit seeds: the fitting noise.
 /// </summary>
 internal static class Probe
 {
@@ -25,6 +26,13 @@ internal static class Probe
             double bestPromoted = promoted.Min(i => full[i]);
             Console.WriteLine(string.Create(c,
                 $"seed {seed}  rounds {budget}  exponent {exponent:F2}  spearman {Spearman(shortScores, full),6:F3}  best of top {kept} at {options.Max}: {bestPromoted:F5} (regret {bestPromoted - bestFull:F5})  top-1 regret {full[promoted[0]] - bestFull:F5}  best at {budget}: {shortScores.Min():F5}"));
+            if (budget == options.Max)
+            {
+                // At the full budget the probe only changes the fit seed: how much of a score is fitting noise.
+                int bestAt = Array.IndexOf(full, bestFull);
+                Console.WriteLine(string.Create(c,
+                    $"seed {seed}  refit with other fit seeds: random's best {bestFull:F5} refits to {shortScores[bestAt]:F5}; mean |refit − traced| {shortScores.Zip(full, (a, b) => Math.Abs(a - b)).Average():F5}"));
+            }
         }
     }
 
