@@ -12,6 +12,11 @@ namespace Foldwise.Core.Tests.Schedules;
 /// </summary>
 internal static class MultiFidelityRuns
 {
+    // The scheduled search draws from seed + 1000: with the same seed its random start-up candidates would be random
+    // search's own first draws, and every seed whose best came early would be matched at the floor (shared draws took
+    // the medians below from 25.0 % to 13.2 % on Branin and hid 9 of 41 misses of ASHA with random candidates).
+    private const int DrawOffset = 1000;
+
     /// <summary>The best score after each trial and the compute spent by then, in trial order.</summary>
     public static List<(double Compute, double Best)> Run(
         ScheduleOptions options, ParameterSpace space, Func<ParameterSet, int, double> f, int trials, int seed, TpeOptions? tpe = null,
@@ -47,7 +52,7 @@ internal static class MultiFidelityRuns
         {
             var random = Run(options with { Kind = ScheduleKind.Full, Proposer = ProposerKind.Random }, space, f, randomTrials, seed);
             double target = random[^1].Best, cap = random[^1].Compute;
-            var asha = Run(options, space, f, 100_000, seed, tpe, stopBelow: target);
+            var asha = Run(options, space, f, 100_000, seed + DrawOffset, tpe, stopBelow: target);
             int reached = asha.FindIndex(s => s.Best <= target);
             shares[seed - 1] = reached < 0 || asha[reached].Compute > cap ? double.PositiveInfinity : asha[reached].Compute / cap;
         }

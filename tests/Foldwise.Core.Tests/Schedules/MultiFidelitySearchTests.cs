@@ -32,8 +32,9 @@ public sealed class MultiFidelitySearchTests
         var asha = Shares(ScheduleKind.Asha, ProposerKind.Tpe, hartmann);
         var full = Shares(ScheduleKind.Full, ProposerKind.Tpe, hartmann);
 
-        // Then ASHA's median share is within the aim of 25 % (measured 13.2 % on Branin, 12.5 % on Hartmann-6)
-        // and under half of full-budget TPE's (measured 62.5 % and 56.2 %): the short rung, not the proposer alone, saves the compute
+        // Then ASHA's median share is within the aim of 25 % (measured 25.0 % on Branin, on the line, and 13.2 % on
+        // Hartmann-6) and under half of full-budget TPE's (measured 87.5 % and 62.5 %): the short rung, not the proposer alone,
+        // saves the compute
         Assert.True(Median(asha) <= 0.25, $"ASHA+TPE median share {Median(asha):P1}");
         Assert.True(Median(asha) <= 0.5 * Median(full), $"ASHA+TPE {Median(asha):P1} against full-budget TPE {Median(full):P1}");
     }
@@ -41,15 +42,16 @@ public sealed class MultiFidelitySearchTests
     [Theory]
     [InlineData(false)]
     [InlineData(true)]
-    public void Asha_with_random_candidates_never_misses_on_these_functions(bool hartmann)
+    public void Asha_with_random_candidates_matches_random_search_on_a_quarter_of_its_compute_but_misses_more_often_than_with_tpe(bool hartmann)
     {
         // When ASHA screens random candidates instead (the control the search bench can also run)
-        var shares = Shares(ScheduleKind.Asha, ProposerKind.Random, hartmann);
+        var random = Shares(ScheduleKind.Asha, ProposerKind.Random, hartmann);
+        var tpe = Shares(ScheduleKind.Asha, ProposerKind.Tpe, hartmann);
 
-        // Then every seed reaches random search's best within its compute, the median within a quarter (measured 12.5 % on both;
-        // TPE's proposals miss on some seeds here, 4 of 41 on Branin, 2 on Hartmann-6: they exploit, and random search sometimes got lucky)
-        Assert.DoesNotContain(shares, double.IsInfinity);
-        Assert.True(Median(shares) <= 0.25, $"ASHA+random median share {Median(shares):P1}");
+        // Then its median is within a quarter too (measured 19.4 % on Branin, 15.3 % on Hartmann-6), but it misses random
+        // search's best within its compute on more seeds than with TPE (measured 9 against 3 of 41 on Branin, 7 against 2)
+        Assert.True(Median(random) <= 0.25, $"ASHA+random median share {Median(random):P1}");
+        Assert.True(random.Count(double.IsInfinity) > tpe.Count(double.IsInfinity), $"missed with random candidates {random.Count(double.IsInfinity)}, with TPE {tpe.Count(double.IsInfinity)}");
     }
 
     [Theory]
@@ -65,7 +67,7 @@ public sealed class MultiFidelitySearchTests
         var top = Shares(ScheduleKind.Asha, ProposerKind.Tpe, hartmann, randomTrials: 48, eta: eta, new TpeOptions(Ladder: false));
 
         // Then the ladder misses the target within random search's compute on at most half as many seeds (measured, of 41:
-        // Branin 0 against 9 at η 9, 4 against 14 at η 3; Hartmann-6 2 against 5, 2 against 7)
+        // Branin 0 against 11 at η 9, 1 against 15 at η 3; Hartmann-6 0 against 3, 1 against 14)
         int missedLadder = ladder.Count(double.IsInfinity), missedTop = top.Count(double.IsInfinity);
         Assert.True(2 * missedLadder <= missedTop, $"missed on the ladder {missedLadder}, on the top budget {missedTop}");
     }
