@@ -64,6 +64,6 @@ internal sealed record BenchArgs(
                 "top" => false,
                 var other => throw new ArgumentException($"--fit must be ladder or top, not '{other}'"),
             },
-            Int("--draw-offset", "0"));
+            Int("--draw-offset", "1000"));
     }
 }

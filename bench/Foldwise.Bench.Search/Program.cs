@@ -8,9 +8,9 @@
 // time) and be compared afterwards (--part report). A random trace already on disk for the same table, family,
 // budget and seed is reused instead of being recomputed (fits are deterministic for a seed). --proposer random runs
 // the schedule with random candidates instead of TPE's: a control that separates the schedule's saving from the proposer's.
-// Both searches draw from the same seed, so ASHA's random start-up proposals are random search's first draws (common
-// random numbers). --draw-offset N gives the scheduled search seed + N instead: its draws independent of random's,
-// the same folds.
+// The scheduled search draws from seed + --draw-offset (default 1000), the same folds: its draws independent of random
+// search's. --draw-offset 0 reproduces the older traces, where ASHA's random start-up candidates were random search's
+// own first draws and matched its best at the schedule's floor whenever that came early.
 using System.Globalization;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Demo;

@@ -33,9 +33,9 @@ namespace Foldwise.Core.Proposers;
 /// target random search's best of 48 full-budget trials; MultiFidelitySearchTests): seeds that missed the target within
 /// random search's compute fell from 9, 14, 12 to 0, 4, 2 (Branin; budgets 1–9 η 9, 1–9 η 3, 1–27 η 3) and from 5, 7, 6
 /// to 2, 2, 3 (Hartmann-6), at equal or better medians. Those runs shared random search's draws; with draws of its own
-/// (as the checks now run) the misses at 1–9 η 9 and η 3 fell from 11, 15 to 0, 1 (Branin) and from 3, 14 to 0, 1 (Hartmann-6). With one budget the two rules are the same; under Hyperband a
-/// candidate that started at a higher budget ranks with those promoted there (there fewer seeds missed too: 16 against 27
-/// of the same six runs).
+/// (as the checks now run) the misses at 1–9 η 9 and η 3 fell from 11, 15 to 0, 1 (Branin) and from 3, 14 to 0, 1
+/// (Hartmann-6). With one budget the two rules are the same; under Hyperband a candidate that started at a higher
+/// budget ranks with those promoted there (there fewer seeds missed too: 16 against 27 of the same six runs).
 /// </param>
 public sealed record TpeOptions(
     double Gamma = 0.25,
