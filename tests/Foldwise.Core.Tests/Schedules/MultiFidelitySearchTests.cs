@@ -16,7 +16,13 @@ public sealed class MultiFidelitySearchTests
 
     private static double Median(double[] sorted) => sorted[sorted.Length / 2];
 
+    // Two checks ask for ASHA+TPE's shares on each function; the runs are deterministic, so the second reuses the first's.
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<(ScheduleKind, ProposerKind, bool, int, int, TpeOptions?), Lazy<double[]>> Computed = new();
+
     private static double[] Shares(ScheduleKind kind, ProposerKind proposer, bool hartmann, int randomTrials = RandomTrials, int eta = 9, TpeOptions? tpe = null) =>
+        Computed.GetOrAdd((kind, proposer, hartmann, randomTrials, eta, tpe), _ => new Lazy<double[]>(() => Compute(kind, proposer, hartmann, randomTrials, eta, tpe))).Value;
+
+    private static double[] Compute(ScheduleKind kind, ProposerKind proposer, bool hartmann, int randomTrials, int eta, TpeOptions? tpe) =>
         MultiFidelityRuns.ComputeShares(
             new ScheduleOptions(kind, proposer, MinBudget: 1, MaxBudget: Max, Eta: eta),
             hartmann ? TestFunctions.HartmannSpace : TestFunctions.BraninSpace,
