@@ -2,7 +2,8 @@ using System.Globalization;
 
 /// <summary>
 /// Reads the traces of the seeds asked for and prints, for random search after half and after all of its trials,
-/// how much of its compute ASHA+TPE needed to reach the same best score; then the medians over seeds.
+/// how much of its compute ASHA+TPE needed to reach the same best score; then the medians over seeds; then, at equal
+/// compute (an eighth, a quarter, half and all of random search's), on how many seeds the scheduled search was ahead.
 /// </summary>
 internal static class Comparison
 {
@@ -11,6 +12,8 @@ internal static class Comparison
         var c = CultureInfo.InvariantCulture;
         int[] targets = [options.RandomTrials / 2, options.RandomTrials];
         var fractions = targets.ToDictionary(t => t, _ => new List<double>());
+        double[] shares = [0.125, 0.25, 0.5, 1.0];
+        var gaps = shares.ToDictionary(f => f, _ => new List<double>());
         Console.WriteLine($"{options.Schedule} ({options.ProposerLabel}) rounds {options.Min}..{options.Max}, eta {options.Eta}, rate exponent {options.RateExponent} against random search at {options.Max} rounds; {options.Size} table, {options.Family}");
         Console.WriteLine("seed  random trials  random best  random compute  asha compute to reach  fraction  asha trials so far  asha best (trials, at max)");
         foreach (int seed in options.SeedList)
@@ -21,6 +24,11 @@ internal static class Comparison
             {
                 Console.WriteLine($"{seed,4}  (no {(random is null ? "random" : "asha")} trace yet)");
                 continue;
+            }
+
+            foreach (double share in shares)
+            {
+                gaps[share].Add(EqualComputeGap(random, asha, share * random[^1].Compute));
             }
 
             string ashaBest = string.Create(c, $"{asha[^1].Best:F5} ({asha.Count}, {asha.Count(r => r.Budget == options.Max)})");
@@ -52,5 +60,27 @@ internal static class Comparison
                 $"random {count} trials: median fraction of its compute that the scheduled search needed to match its best: {(double.IsInfinity(median) ? "not reached" : median.ToString("P1", c))} " +
                 $"(seeds: {string.Join(", ", list.Select(f => double.IsInfinity(f) ? ">1" : f.ToString("P1", c)))}; aim: ≤ 25%)"));
         }
+
+        foreach (double share in shares.Where(s => gaps[s].Count > 0))
+        {
+            var list = gaps[share];
+            var sorted = list.Order().ToList();
+            double median = sorted.Count % 2 == 1 ? sorted[sorted.Count / 2] : (sorted[(sorted.Count / 2) - 1] + sorted[sorted.Count / 2]) / 2;
+            Console.WriteLine(string.Create(c,
+                $"at {share,6:P1} of random's {options.RandomTrials}-trial compute: scheduled search ahead on {list.Count(g => g > 0)} of {list.Count} seeds, " +
+                $"median lead {median:+0.00000;-0.00000} (seeds: {string.Join(", ", list.Select(g => g.ToString("+0.0000;-0.0000", c)))})"));
+        }
+    }
+
+    /// <summary>
+    /// Random search's best within <paramref name="compute"/> minus the scheduled search's: positive when the scheduled
+    /// search is ahead. A scheduled run that stopped before that compute (it had matched random search's final best) is
+    /// taken at its final best, which understates its lead there but never turns a lead into a loss.
+    /// </summary>
+    private static double EqualComputeGap(List<TraceRow> random, List<TraceRow> asha, double compute)
+    {
+        double BestWithin(List<TraceRow> rows) => rows.Where(r => r.Compute <= compute * (1 + 1e-9)).Select(r => r.Best).DefaultIfEmpty(double.PositiveInfinity).Min();
+        double scheduled = asha[^1].Compute < compute ? asha[^1].Best : BestWithin(asha);
+        return BestWithin(random) - scheduled;
     }
 }
