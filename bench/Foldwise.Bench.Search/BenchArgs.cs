@@ -5,14 +5,14 @@ using Foldwise.Core.Spaces;
 
 internal sealed record BenchArgs(
     string Part, DemoSize Size, int[] SeedList, int RandomTrials, int AshaTrials, ScheduleKind Schedule,
-    int Min, int Max, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe, ProposerKind Proposer, bool Ladder, int DrawOffset)
+    int Min, int Max, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe, ProposerKind Proposer, bool Ladder, int DrawOffset, int Brackets)
 {
     public string RandomFile(int seed) => $"random-{Size}-{Family}-r{Max}-seed{seed}.tsv".ToLowerInvariant();
 
     /// <summary>What proposes the scheduled search's new candidates: TPE, independent or joint, or random draws (a control).</summary>
     public string ProposerLabel => Proposer == ProposerKind.Random ? "random" : $"TPE {(JointTpe ? "joint" : "independent")}, {(Ladder ? "ladder" : "top budget")}";
 
-    public string AshaFile(int seed) => $"{Schedule}-{(Proposer == ProposerKind.Random ? "random" : (JointTpe ? "tpejoint" : "tpe1d") + (Ladder ? "ladder" : ""))}-{Size}-{Family}-r{Min}-{Max}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}{(DrawOffset != 0 ? $"-d{DrawOffset}" : "")}-seed{seed}.tsv".ToLowerInvariant();
+    public string AshaFile(int seed) => $"{Schedule}-{(Proposer == ProposerKind.Random ? "random" : (JointTpe ? "tpejoint" : "tpe1d") + (Ladder ? "ladder" : ""))}-{Size}-{Family}-r{Min}-{Max}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}{(DrawOffset != 0 ? $"-d{DrawOffset}" : "")}{(Brackets > 1 ? $"-b{Brackets}" : "")}-seed{seed}.tsv".ToLowerInvariant();
 
     public static BenchArgs Parse(string[] args)
     {
@@ -64,6 +64,7 @@ internal sealed record BenchArgs(
                 "top" => false,
                 var other => throw new ArgumentException($"--fit must be ladder or top, not '{other}'"),
             },
-            Int("--draw-offset", "1000"));
+            Int("--draw-offset", "1000"),
+            Int("--brackets", "1"));
     }
 }

@@ -14,7 +14,7 @@ internal static class Comparison
         var fractions = targets.ToDictionary(t => t, _ => new List<double>());
         double[] shares = [0.125, 0.25, 0.5, 1.0];
         var gaps = shares.ToDictionary(f => f, _ => new List<double>());
-        Console.WriteLine($"{options.Schedule} ({options.ProposerLabel}) rounds {options.Min}..{options.Max}, eta {options.Eta}, rate exponent {options.RateExponent} against random search at {options.Max} rounds; {options.Size} table, {options.Family}");
+        Console.WriteLine($"{options.Schedule}{(options.Brackets > 1 ? $" in {options.Brackets} brackets" : "")} ({options.ProposerLabel}) rounds {options.Min}..{options.Max}, eta {options.Eta}, rate exponent {options.RateExponent} against random search at {options.Max} rounds; {options.Size} table, {options.Family}");
         Console.WriteLine("seed  random trials  random best  random compute  asha compute to reach  fraction  asha trials so far  asha best (trials, at max)");
         foreach (int seed in options.SeedList)
         {

@@ -28,7 +28,7 @@ if (options.Part != "report")
     var train = ColumnScreen.Apply(report, rawTrain);
     var test = ColumnScreen.Apply(report, rawTest);
     Console.WriteLine($"table {options.Size}: {train.RowCount} × {train.FeatureCount} after screening; family {options.Family}; " +
-                      $"{options.Schedule} rounds {options.Min}..{options.Max}, eta {options.Eta}, rate exponent {options.RateExponent}, proposer {options.ProposerLabel}; random {options.RandomTrials} trials at {options.Max}; {options.Threads} threads");
+                      $"{options.Schedule} rounds {options.Min}..{options.Max}, eta {options.Eta}, rate exponent {options.RateExponent}, proposer {options.ProposerLabel}, brackets {options.Brackets}; random {options.RandomTrials} trials at {options.Max}; {options.Threads} threads");
 
     // Test predictions are part of every trial but not of the comparison: a 50-row test slice keeps them cheap.
     var testRows = test.ToRows();

@@ -18,7 +18,7 @@ internal static class SearchRun
             Data = new DataSource("-", "-", "id", "y"),
             Seed = seed,
             Families = [new FamilySearch(options.Family, DefaultSpaces.For(options.Family))],
-            Schedule = new ScheduleOptions(kind, proposer, options.Min, options.Max, options.Eta, options.RateExponent),
+            Schedule = new ScheduleOptions(kind, proposer, options.Min, options.Max, options.Eta, options.RateExponent, kind == ScheduleKind.Asha ? options.Brackets : 1),
             Budget = new SearchBudget(trials, null),
         };
         var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition, new TpeOptions(Multivariate: options.JointTpe, Ladder: options.Ladder)), new NoJournal(), TimeProvider.System);

@@ -55,6 +55,7 @@ public static class DefinitionWriter
                 json.WriteNumber("max_rounds", schedule.MaxBudget);
                 json.WriteNumber("eta", schedule.Eta);
                 json.WriteNumber("rate_scaling", schedule.RateScaling);
+                json.WriteNumber("brackets", schedule.Brackets);
             });
             Section(json, "budget", () =>
             {

@@ -15,7 +15,8 @@ internal static class ScheduleReader
             min is null ? standard.MinBudget : check.Whole(min, 1),
             max is null ? standard.MaxBudget : check.Whole(max, 1),
             schedule.Get("eta") is { } e ? check.Whole(e.Value, 2, " (each rung keeps 1/eta)") : standard.Eta,
-            schedule.Get("rate_scaling") is { } r ? Scaling(check, r.Value) : standard.RateScaling);
+            schedule.Get("rate_scaling") is { } r ? Scaling(check, r.Value) : standard.RateScaling,
+            schedule.Get("brackets") is { } b ? check.Whole(b.Value, 1) : standard.Brackets);
 
         if (options.MaxBudget < options.MinBudget)
         {
@@ -23,6 +24,14 @@ internal static class ScheduleReader
             string problem = $"'schedule.max_rounds' ({options.MaxBudget}{(max is null ? ", the default" : "")}) " +
                              $"is below 'schedule.min_rounds' ({options.MinBudget}{(min is null ? ", the default" : "")})";
             throw check.Fail(max ?? min!, problem);
+        }
+
+        int rungs = options.MaxBudget >= options.MinBudget ? Schedules.RungBudgets.For(options.MinBudget, options.MaxBudget, options.Eta).Length : 1;
+        if (schedule.Get("brackets") is { } given && ((options.Kind != ScheduleKind.Asha && options.Brackets != 1) || options.Brackets > rungs))
+        {
+            throw check.Fail(given.Value, options.Kind != ScheduleKind.Asha
+                ? $"'schedule.brackets' applies to the asha schedule only, not '{DefinitionNames.Schedules.NameOf(options.Kind)}'"
+                : $"'schedule.brackets' ({options.Brackets}) is more than the schedule's {rungs} rungs ({string.Join(", ", Schedules.RungBudgets.For(options.MinBudget, options.MaxBudget, options.Eta))} rounds)");
         }
 
         return options;

@@ -10,27 +10,47 @@ namespace Foldwise.Core.Schedules;
 /// its own rungs. Asked for a plan, it scans rungs from the top down and promotes the first result that is in the
 /// top ⌊n_k/η⌋ of its rung and not yet promoted (families in definition order within a rung); when nothing can be
 /// promoted it starts a new candidate at rung 0 for the family whose turn it is. It never waits and never runs out.
+/// With more than one bracket (<see cref="AshaBrackets"/>) a new candidate starts at its bracket's first rung, and
+/// promotions rank it only against candidates of its own bracket; trials carry the bracket as 1, 2, … (0 when
+/// there is one).
 /// </summary>
 public sealed class AshaSchedule : ISchedule
 {
     private readonly CandidateSource _source;
     private readonly ImmutableArray<int> _budgets;
     private readonly int _eta;
-    private readonly AshaRung[][] _rungs;
+    private readonly AshaBrackets _brackets;
+
+    /// <summary>[bracket][family][rung]; a bracket's rungs below its first stay empty.</summary>
+    private readonly AshaRung[][][] _rungs;
+
+    /// <summary>[family][bracket]: new candidates started.</summary>
+    private readonly int[][] _started;
 
     public AshaSchedule(ImmutableArray<FamilySearch> families, ScheduleOptions options, IProposer proposer, int seed)
     {
         _budgets = RungBudgets.For(options.MinBudget, options.MaxBudget, options.Eta);
         _eta = options.Eta;
         _source = new CandidateSource(families, proposer, seed);
-        _rungs = new AshaRung[_source.Count][];
-        for (int f = 0; f < _rungs.Length; f++)
+        _brackets = AshaBrackets.For(_budgets, _eta, options.Brackets);
+        _rungs = new AshaRung[_brackets.Count][][];
+        for (int b = 0; b < _rungs.Length; b++)
         {
-            _rungs[f] = new AshaRung[_budgets.Length];
-            for (int k = 0; k < _budgets.Length; k++)
+            _rungs[b] = new AshaRung[_source.Count][];
+            for (int f = 0; f < _source.Count; f++)
             {
-                _rungs[f][k] = new AshaRung();
+                _rungs[b][f] = new AshaRung[_budgets.Length];
+                for (int k = 0; k < _budgets.Length; k++)
+                {
+                    _rungs[b][f][k] = new AshaRung();
+                }
             }
+        }
+
+        _started = new int[_source.Count][];
+        for (int f = 0; f < _started.Length; f++)
+        {
+            _started[f] = new int[_brackets.Count];
         }
     }
 
@@ -41,13 +61,20 @@ public sealed class AshaSchedule : ISchedule
     public void Observe(TrialRecord trial)
     {
         var (family, change) = _source.Observe(trial);
-        if (family < 0 || trial.Rung < 0 || trial.Rung >= _budgets.Length)
+        // Bracket 0 on a trial means plain ASHA (one bracket, or a store written before brackets): the first bracket.
+        int bracket = trial.Bracket <= 1 ? 0 : trial.Bracket - 1;
+        if (family < 0 || bracket >= _brackets.Count || trial.Rung < bracket || trial.Rung >= _budgets.Length)
         {
             return;
         }
 
-        var rungs = _rungs[family];
-        if (change.Created && trial.ParentId is int parent && trial.Rung > 0)
+        var rungs = _rungs[bracket][family];
+        if (change.Created && trial.ParentId is null)
+        {
+            _started[family][bracket]++;
+        }
+
+        if (change.Created && trial.ParentId is int parent && trial.Rung > bracket)
         {
             rungs[trial.Rung - 1].MarkPromoted(parent);
         }
@@ -62,15 +89,22 @@ public sealed class AshaSchedule : ISchedule
     {
         for (int k = _budgets.Length - 2; k >= 0; k--)
         {
-            for (int f = 0; f < _rungs.Length; f++)
+            for (int b = 0; b < _brackets.Count && b <= k; b++)
             {
-                if (_rungs[f][k].TryPromotable(_eta, out int parent, out var parameters))
+                for (int f = 0; f < _source.Count; f++)
                 {
-                    return new TrialPlan(_source[f].Family, parameters, _budgets[k + 1], k + 1, parent, Promotion.ProposerName);
+                    if (_rungs[b][f][k].TryPromotable(_eta, out int parent, out var parameters))
+                    {
+                        return new TrialPlan(_source[f].Family, parameters, _budgets[k + 1], k + 1, parent, Promotion.ProposerName, BracketLabel(b));
+                    }
                 }
             }
         }
 
-        return _source.NewCandidate(_source.NextFamily(), _budgets[0]);
+        int family = _source.NextFamily();
+        int start = _brackets.Next(_started[family]);
+        return _source.NewCandidate(family, _budgets[start], BracketLabel(start), rung: start);
     }
+
+    private int BracketLabel(int bracket) => _brackets.Count == 1 ? 0 : bracket + 1;
 }

@@ -72,10 +72,11 @@ internal sealed class CandidateSource
         return best;
     }
 
-    public TrialPlan NewCandidate(int family, int budget, int bracket = 0)
+    /// <param name="rung">The rung the candidate starts at: 0 but in an ASHA bracket that starts higher.</param>
+    public TrialPlan NewCandidate(int family, int budget, int bracket = 0, int rung = 0)
     {
         var history = _families[family];
         var proposal = _proposer.Propose(history, ProposalSeeds.For(_seed, family, history.NewCandidates));
-        return new TrialPlan(history.Family, proposal.Parameters, budget, Rung: 0, ParentId: null, proposal.Proposer, bracket);
+        return new TrialPlan(history.Family, proposal.Parameters, budget, rung, ParentId: null, proposal.Proposer, bracket);
     }
 }

@@ -43,6 +43,9 @@ public sealed class DefinitionErrorTests
         // bounds of the scalar keys
         { "\"folds\": 5", "\"folds\": 1", "'folds' must be at least 2 (K of a K-fold plan), got 1", "1," },
         { "\"eta\": 3", "\"eta\": 1", "'schedule.eta' must be at least 2", "1 }" },
+        { "\"eta\": 3", "\"eta\": 3, \"brackets\": 5", "'schedule.brackets' (5) is more than the schedule's 4 rungs (25, 75, 225, 400 rounds)", "5 }" },
+        { "\"kind\": \"asha\"", "\"kind\": \"hyperband\", \"brackets\": 2", "'schedule.brackets' applies to the asha schedule only, not 'hyperband'", "2," },
+        { "\"eta\": 3", "\"eta\": 3, \"brackets\": 0", "'schedule.brackets' must be at least 1, got 0", "0 }" },
         { "\"eta\": 3", "\"eta\": 3, \"rate_scaling\": 2", "'schedule.rate_scaling' must be between 0 (short rungs run the drawn learning rate) and 1 (scaled by max_rounds / rounds), got 2", "2 }" },
         { "\"min_rounds\": 25", "\"min_rounds\": 0", "'schedule.min_rounds' must be at least 1, got 0", "0," },
         { "\"max_rounds\": 400", "\"max_rounds\": 20", "'schedule.max_rounds' (20) is below 'schedule.min_rounds' (25)", "20" },
@@ -94,7 +97,7 @@ public sealed class DefinitionErrorTests
 
         // Then the error is at the key's opening quote
         Assert.Equal((4L, 5), (e.Line, e.Column));
-        Assert.Equal("s.json:4:5: unknown key 'schedule.min_round'; did you mean 'min_rounds'? (known keys here: kind, proposer, min_rounds, max_rounds, eta, rate_scaling)", e.Message);
+        Assert.Equal("s.json:4:5: unknown key 'schedule.min_round'; did you mean 'min_rounds'? (known keys here: kind, proposer, min_rounds, max_rounds, eta, rate_scaling, brackets)", e.Message);
     }
 
     [Fact]

@@ -6,20 +6,21 @@ namespace Foldwise.Core.Tests.Schedules;
 
 public sealed class ResumeTests
 {
-    public static TheoryData<ScheduleKind, ProposerKind> Kinds => new()
+    public static TheoryData<ScheduleKind, ProposerKind, int> Kinds => new()
     {
-        { ScheduleKind.Asha, ProposerKind.Tpe },
-        { ScheduleKind.Hyperband, ProposerKind.Tpe },
-        { ScheduleKind.Full, ProposerKind.Tpe },
-        { ScheduleKind.Asha, ProposerKind.Random },
+        { ScheduleKind.Asha, ProposerKind.Tpe, 1 },
+        { ScheduleKind.Asha, ProposerKind.Tpe, 3 },
+        { ScheduleKind.Hyperband, ProposerKind.Tpe, 1 },
+        { ScheduleKind.Full, ProposerKind.Tpe, 1 },
+        { ScheduleKind.Asha, ProposerKind.Random, 1 },
     };
 
     [Theory]
     [MemberData(nameof(Kinds))]
-    public void Replaying_the_journal_into_a_fresh_schedule_gives_the_same_next_plans(ScheduleKind kind, ProposerKind proposer)
+    public void Replaying_the_journal_into_a_fresh_schedule_gives_the_same_next_plans(ScheduleKind kind, ProposerKind proposer, int brackets)
     {
         // Given a search that ran 150 trials on four slots, with failures and lost leases along the way
-        var definition = FakeCoordinator.Definition(new ScheduleOptions(kind, proposer, MinBudget: 1, MaxBudget: 27, Eta: 3), seed: 11,
+        var definition = FakeCoordinator.Definition(new ScheduleOptions(kind, proposer, MinBudget: 1, MaxBudget: 27, Eta: 3, Brackets: brackets), seed: 11,
             FakeCoordinator.Family("first"), FakeCoordinator.Family("second"));
         var original = new FakeCoordinator(ScheduleFactory.Create(definition));
         Simulate(original, trials: 150, slots: 4, seed: 5);
@@ -42,6 +43,7 @@ public sealed class ResumeTests
         Simulate(original, trials: 40, slots: 4, seed: 9);
         Simulate(again, trials: 40, slots: 4, seed: 9);
         Assert.Equal(original.Trials.Select(t => (t.Family, t.Parameters, t.Budget, t.ParentId)), again.Trials.Select(t => (t.Family, t.Parameters, t.Budget, t.ParentId)));
+        Assert.Equal(original.Trials.Select(t => t.Bracket), again.Trials.Select(t => t.Bracket));
     }
 
     [Fact]
