@@ -40,6 +40,23 @@ public sealed class PlanCommandTests
     }
 
     [Fact]
+    public void Prints_what_each_asha_bracket_costs_and_its_share_of_new_candidates()
+    {
+        var plan = CliHarness.Run("plan", "--min-budget", "20", "--max-budget", "180", "--eta", "3", "--json");
+
+        // Worked by hand: 20 + 60/3 + 180/9 = 60, 60 + 180/3 = 120, 180; equal compute gives shares 1/60 : 1/120 : 1/180 = 6 : 3 : 2 of 11
+        Assert.Equal(0, plan.ExitCode);
+        using var json = JsonDocument.Parse(plan.Output);
+        var brackets = json.RootElement.GetProperty("asha_brackets").EnumerateArray().ToArray();
+        Assert.Equal([20, 60, 180], brackets.Select(b => b.GetProperty("start_budget").GetInt32()));
+        Assert.Equal([60.0, 120.0, 180.0], brackets.Select(b => b.GetProperty("mean_rounds").GetDouble()));
+        Assert.Equal([Math.Round(6 / 11.0, 4), Math.Round(3 / 11.0, 4), Math.Round(2 / 11.0, 4)], brackets.Select(b => b.GetProperty("share_of_new_candidates").GetDouble()));
+
+        var text = CliHarness.Run("plan", "--min-budget", "20", "--max-budget", "180", "--eta", "3");
+        Assert.Contains("bracket 3 starts at 180 rounds, 180 per candidate on average; with all 3, new candidates split 55 % : 27 % : 18 %", text.Output.ReplaceLineEndings(" ").Replace("  ", " "));
+    }
+
+    [Fact]
     public void Refuses_an_eta_below_two()
     {
         var plan = CliHarness.Run("plan", "--eta", "1");

@@ -16,6 +16,12 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
         var plan = HyperbandPlan.For(settings.MinBudget, settings.MaxBudget, settings.Eta);
         var rungs = RungBudgets.For(settings.MinBudget, settings.MaxBudget, settings.Eta);
         var rates = rungs.Select(b => ShortRungRate.Default.Multiplier(b, settings.MaxBudget)).ToArray();
+
+        // With every bracket asked for (schedule.brackets = rungs): where each starts, what a candidate costs there on
+        // average, and the share of new candidates that equal compute per bracket gives it.
+        var hedge = AshaBrackets.For(rungs, settings.Eta, rungs.Length);
+        double inverse = Enumerable.Range(0, hedge.Count).Sum(b => 1 / hedge.CostOf(b));
+        var starts = Enumerable.Range(0, hedge.Count).Select(b => (Bracket: b + 1, Budget: rungs[b], Rounds: hedge.CostOf(b), Share: 1 / hedge.CostOf(b) / inverse)).ToArray();
         if (settings.Json)
         {
             var brackets = new JsonArray([.. plan.Brackets.Select(b => (JsonNode?)new JsonObject
@@ -31,6 +37,13 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
                 ["eta"] = settings.Eta,
                 ["asha_rungs"] = new JsonArray([.. rungs.Select(r => (JsonNode?)r)]),
                 ["rate_multipliers"] = new JsonArray([.. rates.Select(r => (JsonNode?)Math.Round(r, 4))]),
+                ["asha_brackets"] = new JsonArray([.. starts.Select(b => (JsonNode?)new JsonObject
+                {
+                    ["bracket"] = b.Bracket,
+                    ["start_budget"] = b.Budget,
+                    ["mean_rounds"] = Math.Round(b.Rounds, 2),
+                    ["share_of_new_candidates"] = Math.Round(b.Share, 4),
+                })]),
                 ["hyperband"] = brackets,
             };
             console.Profile.Out.Writer.WriteLine(root.ToJsonString(new System.Text.Json.JsonSerializerOptions { WriteIndented = true }));
@@ -39,6 +52,9 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
 
         console.MarkupLine($"ASHA rungs (rounds): {string.Join(" → ", rungs)}; a candidate moves up when it is in the top 1/{settings.Eta} of its rung.");
         console.MarkupLine($"Learning rate on each rung, × the drawn one (default schedule.rate_scaling 0.5; at most 1): {string.Join(" → ", rates.Select(r => r.ToString("0.##")))}.");
+        console.MarkupLine($"ASHA brackets (schedule.brackets k runs the first k, each with an equal share of compute): " +
+            string.Join("; ", starts.Select(b => $"bracket {b.Bracket} starts at {b.Budget} rounds, {b.Rounds:0.#} per candidate on average")) +
+            $"; with all {starts.Length}, new candidates split {string.Join(" : ", starts.Select(b => b.Share.ToString("P0")))}.");
         int widest = plan.Brackets.Max(b => b.Rungs.Length);
         var table = new Table()
             .Title($"Hyperband brackets, {settings.MinBudget} to {settings.MaxBudget} rounds, η = {settings.Eta}")
