@@ -54,8 +54,7 @@ internal static class Comparison
                 continue;
             }
 
-            var sorted = list.Order().ToList();
-            double median = sorted.Count % 2 == 1 ? sorted[sorted.Count / 2] : (sorted[(sorted.Count / 2) - 1] + sorted[sorted.Count / 2]) / 2;
+            double median = Median(list);
             Console.WriteLine(string.Create(c,
                 $"random {count} trials: median fraction of its compute that the scheduled search needed to match its best: {(double.IsInfinity(median) ? "not reached" : median.ToString("P1", c))} " +
                 $"(seeds: {string.Join(", ", list.Select(f => double.IsInfinity(f) ? ">1" : f.ToString("P1", c)))}; aim: ≤ 25%)"));
@@ -64,12 +63,17 @@ internal static class Comparison
         foreach (double share in shares.Where(s => gaps[s].Count > 0))
         {
             var list = gaps[share];
-            var sorted = list.Order().ToList();
-            double median = sorted.Count % 2 == 1 ? sorted[sorted.Count / 2] : (sorted[(sorted.Count / 2) - 1] + sorted[sorted.Count / 2]) / 2;
+            double median = Median(list);
             Console.WriteLine(string.Create(c,
                 $"at {share,6:P1} of random's {options.RandomTrials}-trial compute: scheduled search ahead on {list.Count(g => g > 0)} of {list.Count} seeds, " +
                 $"median lead {median:+0.00000;-0.00000} (seeds: {string.Join(", ", list.Select(g => g.ToString("+0.0000;-0.0000", c)))})"));
         }
+    }
+
+    private static double Median(List<double> values)
+    {
+        var sorted = values.Order().ToList();
+        return sorted.Count % 2 == 1 ? sorted[sorted.Count / 2] : (sorted[(sorted.Count / 2) - 1] + sorted[sorted.Count / 2]) / 2;
     }
 
     /// <summary>

@@ -20,8 +20,7 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
         // With every bracket asked for (schedule.brackets = rungs): where each starts, what a candidate costs there on
         // average, and the share of new candidates that equal compute per bracket gives it.
         var hedge = AshaBrackets.For(rungs, settings.Eta, rungs.Length);
-        double inverse = Enumerable.Range(0, hedge.Count).Sum(b => 1 / hedge.CostOf(b));
-        var starts = Enumerable.Range(0, hedge.Count).Select(b => (Bracket: b + 1, Budget: rungs[b], Rounds: hedge.CostOf(b), Share: 1 / hedge.CostOf(b) / inverse)).ToArray();
+        var starts = Enumerable.Range(0, hedge.Count).Select(b => (Bracket: b + 1, Budget: rungs[b], Rounds: hedge.CostOf(b), Share: hedge.ShareOf(b))).ToArray();
         if (settings.Json)
         {
             var brackets = new JsonArray([.. plan.Brackets.Select(b => (JsonNode?)new JsonObject

@@ -26,12 +26,18 @@ internal static class ScheduleReader
             throw check.Fail(max ?? min!, problem);
         }
 
-        int rungs = options.MaxBudget >= options.MinBudget ? Schedules.RungBudgets.For(options.MinBudget, options.MaxBudget, options.Eta).Length : 1;
-        if (schedule.Get("brackets") is { } given && ((options.Kind != ScheduleKind.Asha && options.Brackets != 1) || options.Brackets > rungs))
+        if (schedule.Get("brackets") is { } given)
         {
-            throw check.Fail(given.Value, options.Kind != ScheduleKind.Asha
-                ? $"'schedule.brackets' applies to the asha schedule only, not '{DefinitionNames.Schedules.NameOf(options.Kind)}'"
-                : $"'schedule.brackets' ({options.Brackets}) is more than the schedule's {rungs} rungs ({string.Join(", ", Schedules.RungBudgets.For(options.MinBudget, options.MaxBudget, options.Eta))} rounds)");
+            var rungs = Schedules.RungBudgets.For(options.MinBudget, options.MaxBudget, options.Eta);
+            if (options.Kind != ScheduleKind.Asha && options.Brackets != 1)
+            {
+                throw check.Fail(given.Value, $"'schedule.brackets' applies to the asha schedule only, not '{DefinitionNames.Schedules.NameOf(options.Kind)}'");
+            }
+
+            if (options.Brackets > rungs.Length)
+            {
+                throw check.Fail(given.Value, $"'schedule.brackets' ({options.Brackets}) is more than the schedule's {rungs.Length} rungs ({string.Join(", ", rungs)} rounds)");
+            }
         }
 
         return options;

@@ -42,6 +42,9 @@ public sealed class AshaBrackets
     /// <summary>Average rounds a new candidate started in bracket <paramref name="bracket"/> costs.</summary>
     public double CostOf(int bracket) => _costs[bracket];
 
+    /// <summary>The long-run share of new candidates bracket <paramref name="bracket"/> starts: equal compute gives it 1/cost, normalised.</summary>
+    public double ShareOf(int bracket) => 1 / _costs[bracket] / _costs.Sum(c => 1 / c);
+
     /// <summary>
     /// The bracket the next new candidate starts in, given how many each bracket has started: the one whose
     /// started × cost is lowest (furthest behind an equal share of compute), ties to the more aggressive bracket.

@@ -33,25 +33,9 @@ public sealed class AshaSchedule : ISchedule
         _eta = options.Eta;
         _source = new CandidateSource(families, proposer, seed);
         _brackets = AshaBrackets.For(_budgets, _eta, options.Brackets);
-        _rungs = new AshaRung[_brackets.Count][][];
-        for (int b = 0; b < _rungs.Length; b++)
-        {
-            _rungs[b] = new AshaRung[_source.Count][];
-            for (int f = 0; f < _source.Count; f++)
-            {
-                _rungs[b][f] = new AshaRung[_budgets.Length];
-                for (int k = 0; k < _budgets.Length; k++)
-                {
-                    _rungs[b][f][k] = new AshaRung();
-                }
-            }
-        }
-
-        _started = new int[_source.Count][];
-        for (int f = 0; f < _started.Length; f++)
-        {
-            _started[f] = new int[_brackets.Count];
-        }
+        _rungs = [.. Enumerable.Range(0, _brackets.Count).Select(_ => Enumerable.Range(0, _source.Count)
+            .Select(_ => Enumerable.Range(0, _budgets.Length).Select(_ => new AshaRung()).ToArray()).ToArray())];
+        _started = [.. Enumerable.Range(0, _source.Count).Select(_ => new int[_brackets.Count])];
     }
 
     public ImmutableArray<int> Budgets => _budgets;

@@ -42,7 +42,7 @@ public sealed class AshaBracketsTests
         // (300,240,360)→1, (300,360,360)→0, (360,360,360)→0, (420,360,360)→1
         Assert.Equal([0, 0, 1, 0, 2, 0, 1, 0, 0, 1], order.Take(10));
 
-        // And over many candidates the counts approach 6 : 3 : 2, equal compute per bracket (Hyperband's principle)
+        // And over many candidates the counts approach 6 : 3 : 2, equal compute per bracket (each Hyperband bracket is given the same budget B: Li et al., JMLR 18(185), 2018, Algorithm 1)
         Assert.Equal([60, 30, 20], started);
     }
 
