@@ -19,10 +19,11 @@ public sealed class DistributedSearchTests(TwoSiloCluster fixture)
     [Fact]
     public async Task Runs_every_trial_exactly_once_across_both_silos_and_ships_the_tables_by_hash()
     {
-        // Given a search of 12 trials on a coordinator silo and a worker silo, each with one slot
-        var tables = SearchSessions.Tables();
+        // Given a search of 12 trials on a coordinator silo and a worker silo, each with one slot, on tables no other test uses
+        var tables = SearchSessions.Tables(trainRows: 36, testRows: 12);
         var train = tables.Train;
         var recorder = new MemoryRecorder();
+        int fetchedBefore = fixture.Worker.GetRequiredService<TableCache>().Fetches;
         var session = SearchSessions.Start(fixture, "ship", tables, trials: 12, recorder);
         fixture.Learner.Delay = TimeSpan.FromMilliseconds(40);
 
@@ -39,7 +40,7 @@ public sealed class DistributedSearchTests(TwoSiloCluster fixture)
         Assert.Contains(trials, t => t.Worker == "worker");
         Assert.Contains(trials, t => t.Worker == "coordinator");
         // The worker fetched the two tables over the grain path, verified by hash
-        Assert.True(fixture.Worker.GetRequiredService<TableCache>().Fetches >= 2);
+        Assert.Equal(fetchedBefore + 2, fixture.Worker.GetRequiredService<TableCache>().Fetches);
     }
 
     [Fact]

@@ -15,7 +15,7 @@ namespace Foldwise.Cluster.Tests;
 /// <summary>Starts a small counting search on a <see cref="TwoSiloCluster"/>'s coordinator, with chosen lease rules.</summary>
 internal static class SearchSessions
 {
-    public static (FeatureTable Train, FeatureTable Test) Tables() => (Table("train", 30, withTarget: true), Table("test", 10, withTarget: false));
+    public static (FeatureTable Train, FeatureTable Test) Tables(int trainRows = 30, int testRows = 10) => (Table("train", trainRows, withTarget: true), Table("test", testRows, withTarget: false));
 
     public static CoordinatorSession Start(
         TwoSiloCluster cluster, string name, (FeatureTable Train, FeatureTable Test) tables, int trials, MemoryRecorder recorder, CoordinatorOptions? leases = null)
@@ -40,6 +40,28 @@ internal static class SearchSessions
         var session = new CoordinatorSession(manifest, coordinator, recorder);
         cluster.Coordinator.GetRequiredService<SessionRegistry>().Add(session);
         return session;
+    }
+
+    /// <summary>
+    /// Runs small searches on the tables until the worker silo has run a trial of one: on a loaded machine the
+    /// coordinator's own slot can finish a whole search while the worker is still waiting out a start-up retry.
+    /// </summary>
+    public static async Task<CoordinatorSession> RunUntilTheWorkerTakesPartAsync(
+        TwoSiloCluster cluster, string name, (FeatureTable Train, FeatureTable Test) tables)
+    {
+        for (int attempt = 1; attempt <= 10; attempt++)
+        {
+            var recorder = new MemoryRecorder();
+            var session = SearchSessions.Start(cluster, $"{name}-{attempt}", tables, trials: 6, recorder);
+            await session.Finished.WaitAsync(TimeSpan.FromSeconds(60));
+            cluster.Coordinator.GetRequiredService<SessionRegistry>().Remove(session.SearchId);
+            if (recorder.Latest().Any(t => t.Worker == "worker"))
+            {
+                return session;
+            }
+        }
+
+        throw new Xunit.Sdk.XunitException($"the worker silo took no trial in 10 searches named '{name}'");
     }
 
     private static FeatureTable Table(string name, int rows, bool withTarget)

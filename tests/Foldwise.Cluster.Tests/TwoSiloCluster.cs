@@ -1,9 +1,11 @@
+using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Coordination;
 using Foldwise.Cluster.Hosting;
 using Foldwise.Cluster.Workers;
 using Foldwise.Core.Spaces;
 using Foldwise.Testing.Fakes;
 using Microsoft.Extensions.DependencyInjection;
+using Orleans.Configuration;
 using Orleans.TestingHost;
 
 namespace Foldwise.Cluster.Tests;
@@ -51,8 +53,38 @@ public sealed class TwoSiloCluster : IAsyncLifetime
                 host.Services.ExcludeCoordinatorGrains();
             }
         });
+        // The client's view of which silo hosts which grain refreshes once a minute by default; the wait below needs it sooner.
+        builder.ConfigureClient(client => client.Services.Configure<TypeManagementOptions>(o => o.TypeMapRefreshInterval = TimeSpan.FromSeconds(1)));
         Cluster = builder.Build();
         await Cluster.DeployAsync();
+        await WaitUntilClientResolvesCoordinatorGrainsAsync();
+
+        // Tests expect both silos to take trials; warm up on tables of their own so no test's fetch counts change.
+        Learner.Delay = TimeSpan.FromMilliseconds(50);
+        await SearchSessions.RunUntilTheWorkerTakesPartAsync(this, "warm-up", SearchSessions.Tables(trainRows: 24, testRows: 8));
+        Learner.Delay = TimeSpan.Zero;
+    }
+
+    /// <summary>
+    /// The client may be attached to the worker silo's gateway, whose cluster manifest learns the coordinator's
+    /// grain types a moment after start-up (the client then learns them at its next refresh); until then GetGrain throws "Could not find an implementation".
+    /// </summary>
+    private async Task WaitUntilClientResolvesCoordinatorGrainsAsync()
+    {
+        var deadline = DateTime.UtcNow + TimeSpan.FromSeconds(30);
+        while (true)
+        {
+            try
+            {
+                _ = Cluster.Client.GetGrain<ISearchGrain>("ready");
+                _ = Cluster.Client.GetGrain<ISearchBoardGrain>(0);
+                return;
+            }
+            catch (ArgumentException) when (DateTime.UtcNow < deadline)
+            {
+                await Task.Delay(100);
+            }
+        }
     }
 
     public async Task DisposeAsync()
