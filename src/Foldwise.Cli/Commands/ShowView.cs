@@ -18,7 +18,8 @@ public static class ShowView
         var facts = new Grid().AddColumn(new GridColumn().NoWrap()).AddColumn();
         void Fact(string name, string value) => facts.AddRow(name, Markup.Escape(value));
 
-        Fact("rung", $"{t.Rung} (bracket {t.Bracket}), {t.Budget} rounds");
+        // Bracket 0: a schedule without brackets (plain ASHA, full budget).
+        Fact("rung", $"{t.Rung}{(t.Bracket > 0 ? $" (bracket {t.Bracket})" : "")}, {t.Budget} rounds");
         Fact("proposed by", t.ParentId is { } p ? $"{t.Proposer} of trial {p}" : t.Proposer);
         var chain = ShowLineage.Chain(t, search.Trials);
         if (chain.Count > 1)
