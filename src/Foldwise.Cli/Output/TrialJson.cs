@@ -28,6 +28,7 @@ public static class TrialJson
                 ["score"] = t.Score,
                 ["fold_scores"] = new JsonArray([.. t.FoldScores.Select(s => (JsonNode?)s)]),
                 ["rung"] = t.Rung,
+                ["bracket"] = t.Bracket,
                 ["budget"] = t.Budget,
                 ["parent"] = t.ParentId,
                 ["proposer"] = t.Proposer,

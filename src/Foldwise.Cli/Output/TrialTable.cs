@@ -12,8 +12,10 @@ public static class TrialTable
     public static void Render(IAnsiConsole console, IReadOnlyList<TrialRecord> trials, SearchDefinition definition, Metric metric, bool wide = false)
     {
         var spaces = definition.Families.ToDictionary(f => f.Family, f => f.Space);
-        var table = new Table().Border(TableBorder.Simple)
-            .AddColumns("trial", "family", "state", "rung", "rounds", $"OOF {metric.Name}", "fold sd", "from", "machine/slot", "secs");
+        // Bracket 0 means the schedule has none (plain ASHA, full budget): the column would only say 0.
+        bool bracketed = trials.Any(t => t.Bracket > 0);
+        string[] columns = ["trial", "family", "state", "rung", .. bracketed ? ["bracket"] : Array.Empty<string>(), "rounds", $"OOF {metric.Name}", "fold sd", "from", "machine/slot", "secs"];
+        var table = new Table().Border(TableBorder.Simple).AddColumns(columns);
         if (wide)
         {
             table.AddColumn("parameters");
@@ -21,19 +23,20 @@ public static class TrialTable
 
         foreach (var t in trials)
         {
-            var cells = new List<string>
-            {
+            List<string> cells =
+            [
                 t.Id.ToString(),
                 t.Family,
                 t.State.ToString().ToLowerInvariant(),
                 t.Rung.ToString(),
+                .. bracketed ? [t.Bracket.ToString()] : Array.Empty<string>(),
                 t.Budget.ToString(),
                 t.Score?.ToString("F5") ?? "",
                 t.FoldScores.Length > 1 ? BlendView.Spread(t.FoldScores).ToString("F4") : "",
                 t.ParentId is { } parent ? $"{t.Proposer} of {parent}" : t.Proposer,
                 Markup.Escape(t.Worker is null ? "" : $"{t.Worker}/{t.Slot}"),
                 t.Duration?.TotalSeconds.ToString("F1") ?? "",
-            };
+            ];
             if (wide)
             {
                 cells.Add(Markup.Escape(t.Parameters.Describe(spaces.GetValueOrDefault(t.Family))));
