@@ -61,17 +61,19 @@ public sealed class LostSiloTests
             var tables = SearchSessions.Tables();
             var cache = cluster.Worker.GetRequiredService<TableCache>();
             int fetchedBefore = cache.Fetches;
-            await SearchSessions.RunUntilTheWorkerTakesPartAsync(cluster, "first", tables);
+            var first = await SearchSessions.RunUntilTheWorkerTakesPartAsync(cluster, "first", tables);
             int fetchedOnce = cache.Fetches;
 
             // When a second search on the same tables runs, and a fresh process's cache reads the same folder
-            var second = await SearchSessions.RunUntilTheWorkerTakesPartAsync(cluster, "second", tables);
+            var (second, recorder) = await SearchSessions.RunUntilTheWorkerTakesPartAsync(cluster, "second", tables);
             var options = cluster.Worker.GetRequiredService<WorkerOptions>();
             var fresh = new TableCache(cluster.Worker.GetRequiredService<IGrainFactory>(), options);
             var reread = await fresh.GetAsync(second.Manifest.TrainHash, CancellationToken.None);
 
-            // Then the worker fetched the tables once, and the disk copy serves a new process
+            // Then the worker took part in both, fetched the tables once, and the disk copy serves a new process
+            Assert.Contains(first.Recorder.Latest(), t => t.Worker == "worker");
             Assert.Equal(fetchedBefore + 2, fetchedOnce);
+            Assert.Contains(recorder.Latest(), t => t.Worker == "worker");
             Assert.Equal(fetchedOnce, cache.Fetches);
             Assert.Equal(0, fresh.Fetches);
             Assert.Equal(tables.Train.RowCount, reread.RowCount);

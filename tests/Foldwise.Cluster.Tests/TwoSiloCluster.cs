@@ -59,7 +59,7 @@ public sealed class TwoSiloCluster : IAsyncLifetime
         await Cluster.DeployAsync();
         await WaitUntilClientResolvesCoordinatorGrainsAsync();
 
-        // Tests expect both silos to take trials; warm up on tables of their own so no test's fetch counts change.
+        // Tests expect both silos to take trials (and assert it); warm up on tables of their own so no test's fetch counts change.
         Learner.Delay = TimeSpan.FromMilliseconds(50);
         await SearchSessions.RunUntilTheWorkerTakesPartAsync(this, "warm-up", SearchSessions.Tables(trainRows: 24, testRows: 8));
         Learner.Delay = TimeSpan.Zero;
