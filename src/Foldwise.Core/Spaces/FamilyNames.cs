@@ -5,6 +5,9 @@ public static class FamilyNames
 {
     public const string LightGbm = "lightgbm";
     public const string FastTree = "fasttree";
+    public const string Forest = "forest";
+    public const string Gam = "gam";
+    public const string Linear = "linear";
 
-    public static IReadOnlyList<string> All { get; } = [LightGbm, FastTree];
+    public static IReadOnlyList<string> All { get; } = [LightGbm, FastTree, Forest, Gam, Linear];
 }
