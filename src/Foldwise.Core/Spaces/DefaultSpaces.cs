@@ -35,7 +35,7 @@ public static class DefaultSpaces
     /// </summary>
     public static ParameterSpace Forest { get; } = new(
     [
-        ParameterRange.Integer("leaves", 16, 256),
+        ParameterRange.Integer("leaves", 16, 128),
         ParameterRange.Integer("min_leaf_rows", 2, 50),
         ParameterRange.Float("feature_fraction", 0.1, 1.0),
         ParameterRange.Float("row_fraction", 0.4, 0.9),
