@@ -52,4 +52,41 @@ public sealed class FormatOneFixtureTests : IDisposable
         Assert.Equal(1.0, blend.Members.Single(m => m.TrialId == 1).Weight, 1e-9);
         Assert.NotNull(store.LoadScreening());
     }
+
+    [Fact]
+    public void Opening_a_format_one_store_to_resume_raises_its_version_and_keeps_what_it_held()
+    {
+        // Given the format-1 fixture, opened to write as a resumed search does
+        using (var store = SearchStore.Open(_dir.StorePath))
+        {
+            // When a new trial's vectors are saved in the chunked layout beside the old inline ones
+            store.SaveVectors(3, SampleVector(300_000), [1.5]);
+        }
+
+        // Then the file says format 2, and old and new records both read
+        Assert.Equal(2, FormatVersion());
+        using var reader = SearchStore.OpenReadOnly(_dir.StorePath);
+        Assert.Equal(60, reader.LoadHeader()!.TrainIds.Length);
+        Assert.Equal(60, reader.LoadVectors(1)!.Value.OutOfFold.Length);
+        Assert.Equal(SampleVector(300_000), reader.LoadVectors(3)!.Value.OutOfFold);
+    }
+
+    [Fact]
+    public void Reading_a_format_one_store_leaves_its_version_alone()
+    {
+        using (var store = SearchStore.OpenReadOnly(_dir.StorePath))
+        {
+            Assert.Equal(2, store.LoadTrials().Count);
+        }
+
+        Assert.Equal(1, FormatVersion());
+    }
+
+    private static double[] SampleVector(int length) => [.. Enumerable.Range(0, length).Select(i => i * 0.25)];
+
+    private int FormatVersion()
+    {
+        using var db = new LiteDB.LiteDatabase(new LiteDB.ConnectionString { Filename = _dir.StorePath, Connection = LiteDB.ConnectionType.Shared, ReadOnly = true });
+        return db.GetCollection(StoreFormat.MetaCollection).FindById("format")["version"].AsInt32;
+    }
 }
