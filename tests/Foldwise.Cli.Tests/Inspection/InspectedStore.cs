@@ -77,7 +77,7 @@ public sealed class InspectedStore : IDisposable
           "data": { "train": "train.csv", "test": "test.csv", "id": "id", "target": "y" },
           "folds": 3,
           "families": { "lightgbm": {}, "fasttree": {} },
-          "schedule": { "kind": "asha", "proposer": "random", "min_rounds": 5, "max_rounds": 15, "eta": 3 },
+          "schedule": { "kind": "asha", "proposer": "random", "first_rung": 5, "full_budget": 15, "eta": 3 },
           "budget": { "trials": 10, "hours": 1 }
         }
         """;
