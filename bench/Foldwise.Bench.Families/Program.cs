@@ -71,7 +71,7 @@ foreach (var (family, list) in seconds)
 // The middle of each range: the mean for linear scales, the geometric mean for log scales.
 static ParameterSet Middle(ParameterSpace space) => ParameterSet.Of(space.Ranges.Select(r => KeyValuePair.Create(r.Name, r.Kind switch
 {
-    ParameterKind.LogFloat => Math.Sqrt(r.Low * r.High),
-    ParameterKind.Integer or ParameterKind.Choice => Math.Round((r.Low + r.High) / 2),
+    ParameterKind.Log => Math.Sqrt(r.Low * r.High),
+    ParameterKind.Whole or ParameterKind.OneOf => Math.Round((r.Low + r.High) / 2),
     _ => (r.Low + r.High) / 2,
 })));

@@ -35,10 +35,10 @@ public static class DefaultSpaces
     /// </summary>
     public static ParameterSpace Forest { get; } = new(
     [
-        ParameterRange.Integer("leaves", 16, 128),
-        ParameterRange.Integer("min_leaf_rows", 2, 50),
-        ParameterRange.Float("feature_fraction", 0.1, 1.0),
-        ParameterRange.Float("row_fraction", 0.4, 0.9),
+        ParameterRange.Whole("leaves", 16, 128),
+        ParameterRange.Whole("min_leaf_rows", 2, 50),
+        ParameterRange.Linear("feature_fraction", 0.1, 1.0),
+        ParameterRange.Linear("row_fraction", 0.4, 0.9),
     ]);
 
     /// <summary>
@@ -47,9 +47,9 @@ public static class DefaultSpaces
     /// </summary>
     public static ParameterSpace Gam { get; } = new(
     [
-        ParameterRange.LogFloat("learning_rate", 0.005, 0.2),
-        ParameterRange.Integer("min_leaf_rows", 5, 100),
-        ParameterRange.Integer("bins", 16, 255),
+        ParameterRange.Log("learning_rate", 0.005, 0.2),
+        ParameterRange.Whole("min_leaf_rows", 5, 100),
+        ParameterRange.Whole("bins", 16, 255),
     ]);
 
     /// <summary>
@@ -58,7 +58,7 @@ public static class DefaultSpaces
     /// </summary>
     public static ParameterSpace Linear { get; } = new(
     [
-        ParameterRange.LogFloat("l2", 1e-4, 10),
+        ParameterRange.Log("l2", 1e-4, 10),
     ]);
 
     public static ParameterSpace For(string family) => family switch
