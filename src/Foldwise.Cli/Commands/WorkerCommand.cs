@@ -1,6 +1,8 @@
 using System.Net;
 using System.Runtime.InteropServices;
+using Foldwise.Cli.Output;
 using Foldwise.Cli.Running;
+using Foldwise.Tuning;
 using Foldwise.Cluster.Hosting;
 using Foldwise.Cluster.Workers;
 using Foldwise.Core.Data;
@@ -43,7 +45,7 @@ public sealed class WorkerCommand(IAnsiConsole console) : AsyncCommand<WorkerSet
         console.MarkupLine($"Worker [bold]{Markup.Escape(options.Name)}[/] joining {Markup.Escape(join.ToString())} from {role.Advertise}" +
                            (role.Certificate is null ? " (no certificate)" : " (mutual TLS)") + "; Ctrl-C to leave");
         string[] commandLine = [.. context.Arguments];
-        await new WorkerHost(role, options, Console.Out)
+        await new WorkerHost(role, options, new WorkerLines(Console.Out))
         {
             StartOver = attempts => FreshProcess.Restart(commandLine, attempts),
             EarlierAttempts = int.TryParse(Environment.GetEnvironmentVariable(FreshProcess.AttemptVariable), out int earlier) ? earlier : 0,

@@ -1,5 +1,6 @@
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Telemetry;
+using Foldwise.Core.Events;
 using Foldwise.Core.Search;
 
 namespace Foldwise.Cluster.Coordination;
@@ -14,12 +15,15 @@ public sealed class CoordinatorSession
     private readonly TaskCompletionSource finished = new(TaskCreationOptions.RunContinuationsAsynchronously);
     private readonly object gate = new();
     private readonly SearchSpan span;
+    private readonly IProgress<SearchEvent> events;
 
-    public CoordinatorSession(SearchManifest manifest, SearchCoordinator coordinator, ISearchRecorder recorder)
+    /// <param name="events">Receives trials started, promoted, scored and failed, on the threads that decide them. Default: none.</param>
+    public CoordinatorSession(SearchManifest manifest, SearchCoordinator coordinator, ISearchRecorder recorder, IProgress<SearchEvent>? events = null)
     {
         Manifest = manifest;
         Coordinator = coordinator;
         this.recorder = recorder;
+        this.events = events ?? NoEvents.Instance;
         span = new SearchSpan(manifest.SearchId, coordinator.Definition.Name);
         FoldwiseMetrics.Track(this);
     }
@@ -33,12 +37,19 @@ public sealed class CoordinatorSession
     /// <summary>Completes once the search has stopped creating trials and none is running.</summary>
     public Task Finished => finished.Task;
 
-    /// <summary>Raised after a trial's result is committed (for progress lines).</summary>
-    public event Action<TrialRecord>? TrialFinished;
-
     public LeaseReply Lease(string worker, string slot)
     {
         var grant = Coordinator.Lease(worker, slot);
+        if (grant.Kind == LeaseKind.Granted)
+        {
+            if (grant.Trial!.ParentId is not null && grant.Trial.Attempt == 1)
+            {
+                events.Report(new CandidatePromoted(SearchId, grant.Trial));
+            }
+
+            events.Report(new TrialStarted(SearchId, grant.Trial));
+        }
+
         CheckFinished();
         return grant.Kind switch
         {
@@ -72,7 +83,7 @@ public sealed class CoordinatorSession
             bool accepted = Coordinator.Complete(report.TrialId, report.Attempt, report.Score, [.. report.FoldScores]);
             if (accepted)
             {
-                TrialFinished?.Invoke(Coordinator.Trial(report.TrialId)!);
+                events.Report(new TrialScored(SearchId, Coordinator.Trial(report.TrialId)!, Coordinator.Progress()));
             }
 
             CheckFinished();
@@ -83,6 +94,11 @@ public sealed class CoordinatorSession
     public bool Release(int trialId, int attempt, string reason, bool interrupted)
     {
         bool released = Coordinator.Release(trialId, attempt, reason, interrupted);
+        if (released && Coordinator.Trial(trialId) is { State: TrialState.Failed } failed)
+        {
+            events.Report(new TrialFailed(SearchId, failed, Coordinator.Progress()));
+        }
+
         CheckFinished();
         return released;
     }

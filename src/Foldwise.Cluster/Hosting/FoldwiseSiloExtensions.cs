@@ -3,6 +3,7 @@ using System.Security.Cryptography.X509Certificates;
 using Foldwise.Cluster.Coordination;
 using Foldwise.Cluster.Grains;
 using Foldwise.Cluster.Workers;
+using Foldwise.Core.Events;
 using Foldwise.Core.Learning;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.DependencyInjection.Extensions;
@@ -91,11 +92,15 @@ public static class FoldwiseSiloExtensions
         return services;
     }
 
-    /// <summary>The worker role: slots that pull leases, with a table cache and the built-in families.</summary>
-    public static IServiceCollection AddFoldwiseWorker(this IServiceCollection services, WorkerOptions options, ILearnerCatalog learners)
+    /// <summary>
+    /// The worker role: slots that pull leases, with a table cache and the built-in families. The slots report what
+    /// they do to <paramref name="events"/> (default: nobody).
+    /// </summary>
+    public static IServiceCollection AddFoldwiseWorker(this IServiceCollection services, WorkerOptions options, ILearnerCatalog learners, IProgress<SearchEvent>? events = null)
     {
         options.Validate();
         services.TryAddSingleton(TimeProvider.System);
+        services.AddSingleton(events ?? NoEvents.Instance);
         services.AddSingleton(options);
         services.AddSingleton(learners);
         services.AddSingleton<TableCache>();

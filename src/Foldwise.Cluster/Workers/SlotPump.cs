@@ -1,3 +1,4 @@
+using Foldwise.Core.Events;
 using Foldwise.Core.Learning;
 using Microsoft.Extensions.Hosting;
 using Microsoft.Extensions.Logging;
@@ -12,12 +13,13 @@ public sealed class SlotPump(
     WorkerOptions options,
     SlotStatistics statistics,
     TimeProvider time,
+    IProgress<SearchEvent> events,
     ILoggerFactory loggers) : BackgroundService
 {
     protected override Task ExecuteAsync(CancellationToken stoppingToken)
     {
         var logger = loggers.CreateLogger<SlotRunner>();
         return Task.WhenAll(Enumerable.Range(0, options.Slots).Select(i =>
-            new SlotRunner(i.ToString(), grains, data, learners, options, statistics, time, logger).RunAsync(stoppingToken)));
+            new SlotRunner(i.ToString(), grains, data, learners, options, statistics, time, events, logger).RunAsync(stoppingToken)));
     }
 }

@@ -1,6 +1,7 @@
 using System.Diagnostics;
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Telemetry;
+using Foldwise.Core.Events;
 using Foldwise.Core.Learning;
 using Foldwise.Core.Spaces;
 using Microsoft.Extensions.Logging;
@@ -19,6 +20,7 @@ public sealed partial class SlotRunner(
     WorkerOptions options,
     SlotStatistics statistics,
     TimeProvider time,
+    IProgress<SearchEvent> events,
     ILogger logger)
 {
     private static readonly TimeSpan MaxBackoff = TimeSpan.FromSeconds(5);
@@ -45,6 +47,7 @@ public sealed partial class SlotRunner(
             {
                 // The coordinator may be restarting or unreachable: wait and ask again.
                 LogCoordinatorUnreachable(slot, e.Message.Split('\n')[0].Trim());
+                events.Report(new SlotCoordinatorUnreachable(options.Name, slot, e.Message.Split('\n')[0].Trim()));
                 await DelayQuietly(backoff, stopping);
                 backoff = TimeSpan.FromTicks(Math.Min(MaxBackoff.Ticks, backoff.Ticks * 2));
             }
@@ -100,6 +103,7 @@ public sealed partial class SlotRunner(
             ending = "scored";
             span?.SetTag("foldwise.score", outcome.Score).SetTag("foldwise.accepted", accepted);
             LogTrialDone(slot, lease.TrialId, lease.Attempt, outcome.Score, clock.Elapsed.TotalSeconds, accepted);
+            events.Report(new SlotTrialScored(options.Name, slot, lease.TrialId, lease.Attempt, outcome.Score, clock.Elapsed, accepted));
         }
         catch (OperationCanceledException) when (stopping.IsCancellationRequested)
         {
@@ -111,10 +115,12 @@ public sealed partial class SlotRunner(
         {
             // The lease was lost (renewal refused): another attempt owns the trial now.
             LogLeaseLost(slot, lease.TrialId, lease.Attempt);
+            events.Report(new SlotLeaseLost(options.Name, slot, lease.TrialId, lease.Attempt));
         }
         catch (Exception e) when (e is ArgumentException or InvalidOperationException or IOException or OutOfMemoryException)
         {
             LogTrialFailed(slot, lease.TrialId, e.Message);
+            events.Report(new SlotTrialFailed(options.Name, slot, lease.TrialId, lease.Attempt, e.Message));
             ending = "failed";
             span?.SetStatus(ActivityStatusCode.Error, e.Message);
             await ReleaseQuietly(search, lease, $"{e.GetType().Name}: {e.Message}", interrupted: false);

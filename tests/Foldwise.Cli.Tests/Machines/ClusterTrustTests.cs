@@ -1,7 +1,8 @@
 using System.Diagnostics;
-using Foldwise.Cli.Running;
 using Foldwise.Cli.Tests.Processes;
 using Foldwise.Cluster.Hosting;
+using Foldwise.Core.Events;
+using Foldwise.Tuning;
 using Xunit.Abstractions;
 
 namespace Foldwise.Cli.Tests.Machines;
@@ -17,7 +18,7 @@ public sealed class ClusterTrustTests(ITestOutputHelper output)
         using var certificate = ClusterCertificate.Create("test");
         var (pfx, port) = ExportAndPickPorts(workspace, certificate);
         await using var coordinator = await EmbeddedCluster.StartAsync(
-            new ClusterRole { SiloPort = port, GatewayPort = port + 1, Certificate = certificate }, slots: 0, threads: null, CancellationToken.None);
+            new ClusterRole { SiloPort = port, GatewayPort = port + 1, Certificate = certificate }, slots: 0, threads: null, NoEvents.Instance, CancellationToken.None);
 
         // When a stranger without the certificate tries to join
         using var stranger = FoldwiseProcess.Start("worker", "--join", $"127.0.0.1:{port}", "--name", "stranger");
@@ -49,7 +50,7 @@ public sealed class ClusterTrustTests(ITestOutputHelper output)
         using var certificate = ClusterCertificate.Create("test");
         var (pfx, port) = ExportAndPickPorts(workspace, certificate);
         await using var coordinator = await EmbeddedCluster.StartAsync(
-            new ClusterRole { SiloPort = port, GatewayPort = port + 1, Certificate = certificate }, slots: 0, threads: null, CancellationToken.None);
+            new ClusterRole { SiloPort = port, GatewayPort = port + 1, Certificate = certificate }, slots: 0, threads: null, NoEvents.Instance, CancellationToken.None);
 
         // When status asks its gateway with the certificate, and without it
         var trusted = CliHarness.Run("status", $"127.0.0.1:{port + 1}", "--cert", pfx, "--passphrase", "test-passphrase");

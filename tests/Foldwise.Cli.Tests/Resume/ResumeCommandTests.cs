@@ -1,5 +1,5 @@
-using Foldwise.Cli.Running;
 using Foldwise.Storage;
+using Foldwise.Tuning;
 using LiteDB;
 
 namespace Foldwise.Cli.Tests.Resume;

@@ -6,6 +6,7 @@ using Foldwise.Cluster.Coordination;
 using Foldwise.Cluster.Telemetry;
 using Foldwise.Core.Data;
 using Foldwise.Core.Definition;
+using Foldwise.Core.Events;
 using Foldwise.Core.Folds;
 using Foldwise.Core.Search;
 using Foldwise.Core.Spaces;
@@ -37,9 +38,9 @@ public sealed class TelemetryTests(TwoSiloCluster fixture)
 
         // When a search of 4 trials of 3 folds runs on both silos, and metrics are collected once mid-search and once after
         fixture.Learner.Delay = TimeSpan.FromMilliseconds(150);
-        var session = SearchSessions.Start(fixture, "telemetry", SearchSessions.Tables(), trials: 4, new MemoryRecorder());
         var firstDone = new TaskCompletionSource(TaskCreationOptions.RunContinuationsAsynchronously);
-        session.TrialFinished += _ => firstDone.TrySetResult();
+        var events = new SyncEvents(e => _ = e is TrialScored && firstDone.TrySetResult());
+        var session = SearchSessions.Start(fixture, "telemetry", SearchSessions.Tables(), trials: 4, new MemoryRecorder(), events: events);
         await firstDone.Task.WaitAsync(TimeSpan.FromSeconds(60));
         Assert.True(meter.ForceFlush(10_000));
         var midSearch = metrics.Select(m => m.Name).ToHashSet();

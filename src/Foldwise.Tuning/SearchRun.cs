@@ -1,21 +1,27 @@
-using Foldwise.Cli.Output;
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Coordination;
 using Foldwise.Cluster.Hosting;
+using Foldwise.Core.Blending;
 using Foldwise.Core.Data;
 using Foldwise.Core.Definition;
+using Foldwise.Core.Events;
 using Foldwise.Core.Schedules;
 using Foldwise.Core.Search;
 using Foldwise.Storage;
-using Spectre.Console;
 
-namespace Foldwise.Cli.Running;
+namespace Foldwise.Tuning;
 
 /// <summary>
-/// Runs a search from start (or from its store) to the prediction file: store, embedded cluster, progress,
-/// then the blend. A first Ctrl-C stops new trials and lets running ones finish; a second abandons them.
+/// The search use case from start (or from its store) to the prediction file: prepare the tables, store the search,
+/// host the embedded cluster, run the trials, blend. It returns a <see cref="SearchResult"/> and reports what happens
+/// on the way as <see cref="SearchEvent"/>s; it writes to no console.
 /// </summary>
-public sealed class SearchRun(IAnsiConsole console)
+/// <param name="events">
+/// Receives every event, synchronously, on the thread where it happens (Orleans' threads for trials). A push sink
+/// rather than an <c>IAsyncEnumerable</c>: trial events are raised inside the coordinator's lock by grains, so they
+/// must neither wait for a reader nor be buffered without bound, and the run's result stays a plain return value.
+/// </param>
+public sealed class SearchRun(IProgress<SearchEvent> events)
 {
     /// <summary>How the coordinator's silo is reached (ports, advertised address, certificate). Default: a cluster of one.</summary>
     public ClusterRole Role { get; init; } = new();
@@ -23,15 +29,16 @@ public sealed class SearchRun(IAnsiConsole console)
     /// <summary>Lease rules for this run's coordinator. Default: <see cref="CoordinatorOptions"/>' defaults.</summary>
     public CoordinatorOptions? Leases { get; init; }
 
-    public async Task<int> RunNewAsync(SearchDefinition definition, string outDir, int slots, int? threads, CancellationToken cancellation)
+    public async Task<SearchResult> RunNewAsync(SearchDefinition definition, string outDir, int slots, int? threads, SearchStopping stopping, CancellationToken cancellation = default)
     {
+        ArgumentNullException.ThrowIfNull(definition);
         string storePath = StoreFile.PathIn(outDir);
-        if (File.Exists(storePath) && !DiscardUnstarted(storePath))
+        if (File.Exists(storePath) && !UnstartedStore.Discard(storePath))
         {
             throw new InputException(storePath, "a search is already stored here; continue it with 'foldwise resume' or choose another --out");
         }
 
-        var prepared = SearchPreparation.Prepare(definition, console);
+        var prepared = SearchPreparation.Prepare(definition, events);
         Directory.CreateDirectory(outDir);
         TableFiles.Write(outDir, prepared.TrainHash, prepared.TrainBytes);
         TableFiles.Write(outDir, prepared.TestHash, prepared.TestBytes);
@@ -50,15 +57,16 @@ public sealed class SearchRun(IAnsiConsole console)
         };
         store.SaveHeader(header);
         store.SaveScreening(prepared.Screening);
-        return await RunAsync(store, header, definition, prepared.Train, prepared.Test, prepared.TrainBytes, prepared.TestBytes, outDir, slots, threads, cancellation);
+        return await RunAsync(store, header, definition, prepared.Train, prepared.Test, prepared.TrainBytes, prepared.TestBytes, outDir, slots, threads, stopping, cancellation);
     }
 
     /// <summary>
     /// Continues a stored search: done trials stay as they are, running ones are queued again, and the trial and
     /// hour budgets go on from what was spent. A finished search is left alone unless <paramref name="reblend"/>.
     /// </summary>
-    public async Task<int> ResumeAsync(string storeOrFolder, int slots, int? threads, bool reblend, CancellationToken cancellation)
+    public async Task<SearchResult> ResumeAsync(string storeOrFolder, int slots, int? threads, bool reblend, SearchStopping stopping, CancellationToken cancellation = default)
     {
+        ArgumentNullException.ThrowIfNull(stopping);
         string storePath = Path.GetFullPath(StoreFile.Resolve(storeOrFolder));
         string outDir = Path.GetDirectoryName(storePath)!;
         using var store = SearchStore.Open(storePath);
@@ -66,54 +74,27 @@ public sealed class SearchRun(IAnsiConsole console)
         var definition = DefinitionReader.Parse(header.DefinitionJson, storePath, outDir);
         if (header.Finished)
         {
-            string predictions = Path.Combine(outDir, BlendStep.PredictionFileName);
             if (!reblend)
             {
-                console.MarkupLine($"Search [bold]{Markup.Escape(header.SearchId)}[/] finished already; its predictions are in [bold]{Markup.Escape(predictions)}[/]. " +
-                                   "Nothing to resume ('--blend' blends its trials again).");
-                return ExitCodes.Ok;
+                return new SearchResult(SearchEnding.AlreadyFinished, header.SearchId, outDir, null);
             }
 
-            BlendStep.Run(store, header, definition, outDir, console, abandon: cancellation);
-            return ExitCodes.Ok;
+            var blend = BlendStep.Run(store, header, definition, outDir, events, abandon: cancellation);
+            return new SearchResult(SearchEnding.Blended, header.SearchId, outDir, blend);
         }
 
         var (train, trainBytes) = TableFiles.Read(outDir, header.TrainHash, "training");
         var (test, testBytes) = TableFiles.Read(outDir, header.TestHash, "test");
         var before = store.LoadTrials();
-        console.MarkupLine($"Resuming [bold]{Markup.Escape(header.SearchId)}[/]: {before.Count(t => t.State == TrialState.Done)} trial(s) done, " +
-                           $"{before.Count(t => t.State is TrialState.Running or TrialState.Queued)} to run again, " +
-                           $"{TimeSpan.FromSeconds(header.SpentSeconds):hh\\:mm\\:ss} spent before.");
-        return await RunAsync(store, header, definition, train, test, trainBytes, testBytes, outDir, slots, threads, cancellation);
+        events.Report(new SearchResumed(
+            header.SearchId,
+            before.Count(t => t.State == TrialState.Done),
+            before.Count(t => t.State is TrialState.Running or TrialState.Queued),
+            TimeSpan.FromSeconds(header.SpentSeconds)));
+        return await RunAsync(store, header, definition, train, test, trainBytes, testBytes, outDir, slots, threads, stopping, cancellation);
     }
 
-    /// <summary>
-    /// A store without a header was killed between its creation and its first record: no trial ever ran, so
-    /// <c>run</c> may start over it. Returns false (keep it) for anything else, including a file that is no store.
-    /// </summary>
-    private static bool DiscardUnstarted(string storePath)
-    {
-        try
-        {
-            using (var store = SearchStore.Open(storePath))
-            {
-                if (store.LoadHeader() is not null)
-                {
-                    return false;
-                }
-            }
-        }
-        catch (StoreException)
-        {
-            return false;
-        }
-
-        File.Delete(storePath);
-        File.Delete(Path.Combine(Path.GetDirectoryName(storePath)!, Path.GetFileNameWithoutExtension(storePath) + "-log" + Path.GetExtension(storePath)));
-        return true;
-    }
-
-    internal async Task<int> RunAsync(
+    internal async Task<SearchResult> RunAsync(
         SearchStore store,
         SearchHeader header,
         SearchDefinition definition,
@@ -124,58 +105,56 @@ public sealed class SearchRun(IAnsiConsole console)
         string outDir,
         int slots,
         int? threads,
+        SearchStopping stopping,
         CancellationToken cancellation)
     {
         var history = store.LoadTrials();
         var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition), store, TimeProvider.System, Leases, history, header.SpentSeconds);
         var manifest = new SearchManifest(
             header.SearchId, header.TrainHash, header.TestHash, header.Folds.FoldCount, header.Folds.Seed, [.. header.Folds.FoldOfRow], definition.Metric.ToString());
-        var session = new CoordinatorSession(manifest, coordinator, store);
+        var session = new CoordinatorSession(manifest, coordinator, store, events);
 
-        using var stopping = new StopSignal(console);
         using var linked = CancellationTokenSource.CreateLinkedTokenSource(cancellation, stopping.Abandon);
-        stopping.StopRequested += coordinator.RequestStop;
+        using var stopRegistration = stopping.Stop.Register(coordinator.RequestStop);
 
-        console.MarkupLine($"Search [bold]{Markup.Escape(header.SearchId)}[/]: {definition.Schedule.Kind} with {definition.Schedule.Proposer}, " +
-                           $"{string.Join(" + ", definition.Families.Select(f => f.Family))}, {definition.Folds}-fold, {slots} local slot(s)");
+        events.Report(new SearchStarted(header.SearchId, definition, slots));
         try
         {
-            await using var cluster = await EmbeddedCluster.StartAsync(Role, slots, threads, linked.Token);
+            await using var cluster = await EmbeddedCluster.StartAsync(Role, slots, threads, events, linked.Token);
             cluster.Shelf.Put(header.TrainHash, trainBytes);
             cluster.Shelf.Put(header.TestHash, testBytes);
             cluster.LocalTables?.Seed(header.TrainHash, train);
             cluster.LocalTables?.Seed(header.TestHash, test);
             cluster.Sessions.Add(session);
-            await new ProgressView(console).FollowAsync(session, definition, linked.Token);
+            await session.Finished.WaitAsync(linked.Token);
+            events.Report(new SearchStopped(header.SearchId, coordinator.Progress()));
         }
         catch (OperationCanceledException) when (stopping.Abandon.IsCancellationRequested)
         {
             // Also while the cluster is still starting: a second Ctrl-C then abandons before any trial ran.
             store.UpdateSpent(coordinator.Progress().SpentSeconds, finished: false);
-            console.MarkupLine("[yellow]Abandoned: running trials go back to the queue; 'foldwise resume' continues the search.[/]");
-            return ExitCodes.Interrupted;
+            return new SearchResult(SearchEnding.Abandoned, header.SearchId, outDir, null);
         }
 
         var progress = coordinator.Progress();
         store.UpdateSpent(progress.SpentSeconds, finished: false);
         if (progress.Done == 0)
         {
-            console.MarkupLine("[red]No trial finished, so there is nothing to blend.[/]");
-            return ExitCodes.Failed;
+            return new SearchResult(SearchEnding.NothingDone, header.SearchId, outDir, null);
         }
 
+        BlendSummary blend;
         try
         {
-            BlendStep.Run(store, header, definition, outDir, console, abandon: stopping.Abandon);
+            blend = BlendStep.Run(store, header, definition, outDir, events, abandon: stopping.Abandon);
         }
         catch (OperationCanceledException) when (stopping.Abandon.IsCancellationRequested)
         {
             // The search stays unfinished: 'resume' blends it (after any trials its budget still allows).
-            console.MarkupLine($"[yellow]Abandoned the blend: every trial is stored, the prediction file was not written. 'foldwise blend {Markup.Escape(outDir)}' blends them.[/]");
-            return ExitCodes.Interrupted;
+            return new SearchResult(SearchEnding.BlendAbandoned, header.SearchId, outDir, null);
         }
 
         store.UpdateSpent(progress.SpentSeconds, finished: progress.Stopping != StopReason.Requested);
-        return ExitCodes.Ok;
+        return new SearchResult(SearchEnding.Blended, header.SearchId, outDir, blend);
     }
 }

@@ -1,7 +1,7 @@
 using System.Collections.Immutable;
 using System.Globalization;
 
-namespace Foldwise.Cli.Running;
+namespace Foldwise.Tuning;
 
 /// <summary>Writes <c>id,target</c> rows in test order, to a temporary file first so no half-written file is ever left.</summary>
 public static class PredictionFile
