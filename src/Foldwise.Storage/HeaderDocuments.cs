@@ -21,7 +21,7 @@ internal static class HeaderDocuments
     {
         ["_id"] = HeaderId,
         ["searchId"] = h.SearchId,
-        ["definitionJson"] = h.DefinitionJson,
+        ["definition"] = DefinitionDocuments.ToDocument(h.Definition),
         ["folds"] = new BsonDocument
         {
             ["foldCount"] = h.Folds.FoldCount,
@@ -43,13 +43,19 @@ internal static class HeaderDocuments
         ["finished"] = finished,
     };
 
+    /// <summary>Format 2 keeps the definition as a document of its own; format 1 kept the definition file's text.</summary>
+    private static Core.Definition.SearchDefinition DefinitionOf(BsonDocument header) =>
+        header["definition"].IsDocument
+            ? DefinitionDocuments.FromDocument(header["definition"].AsDocument)
+            : FormatOneDefinition.Read(String(header, "definitionJson", Owner));
+
     public static SearchHeader FromDocuments(BsonDocument header, BsonDocument? progress)
     {
         var folds = Required(header, "folds", Owner, BsonType.Document).AsDocument;
         return new SearchHeader
         {
             SearchId = String(header, "searchId", Owner),
-            DefinitionJson = String(header, "definitionJson", Owner),
+            Definition = DefinitionOf(header),
             Folds = new FoldPlan(
                 Int(folds, "foldCount", Owner),
                 Int(folds, "seed", Owner),

@@ -12,8 +12,11 @@ internal static class StoreFormat
 {
     public const string Name = "foldwise-search";
 
-    /// <summary>The layout this build writes and the newest it reads.</summary>
-    public const int Version = 1;
+    /// <summary>
+    /// The layout this build writes and the newest it reads. 1: the definition kept as the definition file's JSON text;
+    /// 2: kept as a document in the store's own form (<see cref="DefinitionDocuments"/>). Older versions are read as they were written.
+    /// </summary>
+    public const int Version = 2;
 
     public const string MetaCollection = "meta";
 

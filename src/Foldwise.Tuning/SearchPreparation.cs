@@ -6,6 +6,7 @@ using Foldwise.Core.Events;
 using Foldwise.Core.Folds;
 using Foldwise.Core.Metrics;
 using Foldwise.Core.Screening;
+using Foldwise.Core.Search;
 using Foldwise.Csv;
 
 namespace Foldwise.Tuning;
@@ -39,7 +40,7 @@ public static class SearchPreparation
             throw new InputException(definition.Data.Train, "screening dropped every feature column; nothing is left to learn from");
         }
 
-        var folds = StratifiedFoldPlanner.Create([.. screenedTrain.Target.Select(metric.Forward)], definition.Folds, definition.Seed);
+        var folds = StratifiedFoldPlanner.Create([.. screenedTrain.Target.Select(metric.Forward)], definition.Folds, new SearchSeeds(definition.Seed).FoldPlan);
         byte[] trainBytes = TableCodec.Encode(screenedTrain);
         byte[] testBytes = TableCodec.Encode(screenedTest);
         return new PreparedSearch(

@@ -46,7 +46,7 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
         var header = new SearchHeader
         {
             SearchId = $"{definition.Name}-{DateTimeOffset.UtcNow:yyyyMMddHHmmss}",
-            DefinitionJson = DefinitionWriter.Write(definition),
+            Definition = definition,
             Folds = prepared.Folds,
             TrainHash = prepared.TrainHash,
             TestHash = prepared.TestHash,
@@ -71,7 +71,7 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
         string outDir = Path.GetDirectoryName(storePath)!;
         using var store = SearchStore.Open(storePath);
         var header = store.LoadHeader() ?? throw new StoreException($"{storePath} holds no search header: it was stopped before its first record, so no trial ran. Start it again with 'foldwise run' (the same --out works).");
-        var definition = DefinitionReader.Parse(header.DefinitionJson, storePath, outDir);
+        var definition = header.Definition;
         if (header.Finished)
         {
             if (!reblend)

@@ -26,7 +26,7 @@ public sealed class InspectedStore : IDisposable
         store.SaveHeader(new SearchHeader
         {
             SearchId = "inspect-1",
-            DefinitionJson = Definition,
+            Definition = DefinitionIn(Folder),
             Folds = new FoldPlan(3, 1, [.. Enumerable.Range(0, 12).Select(i => i % 3)]),
             TrainHash = "aa",
             TestHash = "bb",
@@ -71,16 +71,15 @@ public sealed class InspectedStore : IDisposable
     ];
 
     // The definition as the store keeps it; data paths need not exist to read it back.
-    private static string Definition => """
-        {
-          "name": "inspect-test",
-          "data": { "train": "train.csv", "test": "test.csv", "id": "id", "target": "y" },
-          "folds": 3,
-          "families": { "lightgbm": {}, "fasttree": {} },
-          "schedule": { "kind": "asha", "proposer": "random", "min_rounds": 5, "max_rounds": 15, "eta": 3 },
-          "budget": { "trials": 10, "hours": 1 }
-        }
-        """;
+    private static SearchDefinition DefinitionIn(string folder) => new()
+    {
+        Name = "inspect-test",
+        Data = new DataSource(System.IO.Path.Combine(folder, "train.csv"), System.IO.Path.Combine(folder, "test.csv"), "id", "y"),
+        Folds = 3,
+        Families = [.. FamilyNames.All.Select(f => new FamilySearch(f, DefaultSpaces.For(f)))],
+        Schedule = new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Random, MinBudget: 5, MaxBudget: 15, Eta: 3),
+        Budget = new SearchBudget(Trials: 10, Hours: 1),
+    };
 
     public void Dispose()
     {
