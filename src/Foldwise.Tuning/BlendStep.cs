@@ -1,3 +1,4 @@
+using System.Diagnostics;
 using Foldwise.Cluster.Telemetry;
 using Foldwise.Core.Blending;
 using Foldwise.Core.Definition;
@@ -18,12 +19,13 @@ public static class BlendStep
 
     /// <summary>
     /// <paramref name="abandon"/> is checked before the solve and again before anything is written, so an abandoned
-    /// blend leaves the previous prediction file and blend record as they were.
+    /// blend leaves the previous prediction file and blend record as they were. Its span is a child of
+    /// <paramref name="search"/> (the search's span) when given.
     /// </summary>
-    public static BlendSummary Run(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, IProgress<SearchEvent> events, BlendOptions? options = null, CancellationToken abandon = default)
+    public static BlendSummary Run(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, IProgress<SearchEvent> events, BlendOptions? options = null, CancellationToken abandon = default, ActivityContext search = default)
     {
         options ??= definition.Blend;
-        using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.BlendSpan);
+        using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.BlendSpan, ActivityKind.Internal, search);
         var metric = Metric.For(definition.Metric);
         var trials = store.LoadTrials();
         var pool = BlendPool.Select(trials, options.Pool, definition.Schedule.MaxBudget);

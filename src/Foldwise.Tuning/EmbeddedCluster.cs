@@ -30,7 +30,7 @@ public sealed class EmbeddedCluster : IAsyncDisposable
     public TableCache? LocalTables => host.Services.GetService<TableCache>();
 
     /// <summary>Starts the silo; a networked one reports where it listens and, as they happen, silos joining and leaving.</summary>
-    public static async Task<EmbeddedCluster> StartAsync(ClusterRole role, int slots, int? threads, IProgress<SearchEvent> events, CancellationToken cancellation)
+    public static async Task<EmbeddedCluster> StartAsync(ClusterRole role, int slots, int? threads, FoldwiseTelemetryOptions telemetry, IProgress<SearchEvent> events, CancellationToken cancellation)
     {
         var builder = Host.CreateApplicationBuilder([]);
         builder.Logging.ClearProviders();
@@ -42,7 +42,7 @@ public sealed class EmbeddedCluster : IAsyncDisposable
         builder.Services.Configure<HostOptions>(o => o.ShutdownTimeout = TimeSpan.FromSeconds(15));
         builder.UseOrleans(silo => silo.UseFoldwiseClustering(role));
         builder.Services.AddFoldwiseCoordinator();
-        builder.Services.AddFoldwiseTelemetry(FoldwiseTelemetryOptions.FromEnvironment());
+        builder.Services.AddFoldwiseTelemetry(telemetry);
         if (slots > 0)
         {
             builder.Services.AddFoldwiseWorker(

@@ -1,6 +1,7 @@
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Coordination;
 using Foldwise.Cluster.Hosting;
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Core.Blending;
 using Foldwise.Core.Data;
 using Foldwise.Core.Definition;
@@ -28,6 +29,9 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
 
     /// <summary>Lease rules for this run's coordinator. Default: <see cref="CoordinatorOptions"/>' defaults.</summary>
     public CoordinatorOptions? Leases { get; init; }
+
+    /// <summary>Where the search's traces and metrics go. Default: nowhere.</summary>
+    public FoldwiseTelemetryOptions Telemetry { get; init; } = new();
 
     public async Task<SearchResult> RunNewAsync(SearchDefinition definition, string outDir, int slots, int? threads, SearchStopping stopping, CancellationToken cancellation = default)
     {
@@ -112,26 +116,68 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
         var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition), store, TimeProvider.System, Leases, history, header.SpentSeconds);
         var manifest = new SearchManifest(
             header.SearchId, header.TrainHash, header.TestHash, header.Folds.FoldCount, header.Folds.Seed, [.. header.Folds.FoldOfRow], definition.Metric.ToString());
-        var session = new CoordinatorSession(manifest, coordinator, store, events);
 
         using var linked = CancellationTokenSource.CreateLinkedTokenSource(cancellation, stopping.Abandon);
         using var stopRegistration = stopping.Stop.Register(coordinator.RequestStop);
 
         events.Report(new SearchStarted(header.SearchId, definition, slots));
+        EmbeddedCluster cluster;
         try
         {
-            await using var cluster = await EmbeddedCluster.StartAsync(Role, slots, threads, events, linked.Token);
+            cluster = await EmbeddedCluster.StartAsync(Role, slots, threads, Telemetry, events, linked.Token);
+        }
+        catch (OperationCanceledException) when (stopping.Abandon.IsCancellationRequested)
+        {
+            // A second Ctrl-C while the cluster is still starting abandons before any trial ran.
+            store.UpdateSpent(coordinator.Progress().SpentSeconds, finished: false);
+            return new SearchResult(SearchEnding.Abandoned, header.SearchId, outDir, null);
+        }
+
+        // The cluster (and with it the telemetry's exporters) lives until the blend is done: the search's span
+        // opens once they listen and parents every trial, on whichever machine, and the blend.
+        await using (cluster)
+        {
+            var span = new SearchSpan(header.SearchId, definition.Name);
+            try
+            {
+                return await RunTrialsAndBlendAsync(store, header, definition, coordinator, manifest, cluster, span, train, test, trainBytes, testBytes, outDir, stopping, linked.Token);
+            }
+            finally
+            {
+                span.End(coordinator.Progress());
+            }
+        }
+    }
+
+    private async Task<SearchResult> RunTrialsAndBlendAsync(
+        SearchStore store,
+        SearchHeader header,
+        SearchDefinition definition,
+        SearchCoordinator coordinator,
+        SearchManifest manifest,
+        EmbeddedCluster cluster,
+        SearchSpan span,
+        FeatureTable train,
+        FeatureTable test,
+        byte[] trainBytes,
+        byte[] testBytes,
+        string outDir,
+        SearchStopping stopping,
+        CancellationToken abandon)
+    {
+        try
+        {
             cluster.Shelf.Put(header.TrainHash, trainBytes);
             cluster.Shelf.Put(header.TestHash, testBytes);
             cluster.LocalTables?.Seed(header.TrainHash, train);
             cluster.LocalTables?.Seed(header.TestHash, test);
+            var session = new CoordinatorSession(manifest, coordinator, store, events, span.Context);
             cluster.Sessions.Add(session);
-            await session.Finished.WaitAsync(linked.Token);
+            await session.Finished.WaitAsync(abandon);
             events.Report(new SearchStopped(header.SearchId, coordinator.Progress()));
         }
         catch (OperationCanceledException) when (stopping.Abandon.IsCancellationRequested)
         {
-            // Also while the cluster is still starting: a second Ctrl-C then abandons before any trial ran.
             store.UpdateSpent(coordinator.Progress().SpentSeconds, finished: false);
             return new SearchResult(SearchEnding.Abandoned, header.SearchId, outDir, null);
         }
@@ -146,7 +192,7 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
         BlendSummary blend;
         try
         {
-            blend = BlendStep.Run(store, header, definition, outDir, events, abandon: stopping.Abandon);
+            blend = BlendStep.Run(store, header, definition, outDir, events, abandon: stopping.Abandon, search: span.Context);
         }
         catch (OperationCanceledException) when (stopping.Abandon.IsCancellationRequested)
         {

@@ -1,5 +1,6 @@
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Hosting;
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Cluster.Workers;
 using Foldwise.Core.Events;
 using Foldwise.Learners;
@@ -28,11 +29,15 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
     /// </summary>
     public Action<int>? StartOver { get; init; }
 
+    /// <summary>Where this worker's traces and metrics go. Default: nowhere.</summary>
+    public FoldwiseTelemetryOptions Telemetry { get; init; } = new();
+
     /// <summary>Attempts made before this process started (a fresh process continues the count).</summary>
     public int EarlierAttempts { get; init; }
 
     public async Task RunAsync(CancellationToken stopping)
     {
+        events.Report(new WorkerStarting(options.Name, role.Join?.ToString() ?? "", role.Advertise.ToString(), role.Certificate is not null));
         int attempt = EarlierAttempts;
         while (!stopping.IsCancellationRequested)
         {
@@ -84,6 +89,7 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
         builder.Services.Configure<HostOptions>(o => o.ShutdownTimeout = TimeSpan.FromSeconds(10));
         builder.UseOrleans(silo => silo.UseFoldwiseClustering(role));
         builder.Services.AddFoldwiseWorker(options, LearnerCatalog.BuiltIn, events);
+        builder.Services.AddFoldwiseTelemetry(Telemetry);
         builder.Services.ExcludeCoordinatorGrains();
         // Registered after UseOrleans so it replaces Orleans' handler, which would end the whole process.
         builder.Services.AddSingleton<IFatalErrorHandler, StopSiloOnFatalError>();

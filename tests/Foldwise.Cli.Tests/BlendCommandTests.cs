@@ -4,11 +4,13 @@ using Foldwise.Cli.Report;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Events;
 using Foldwise.Storage;
+using Foldwise.Testing;
 using Foldwise.Tuning;
 using Spectre.Console.Testing;
 
 namespace Foldwise.Cli.Tests;
 
+[Trait(Lane.Key, Lane.Slow)]
 public sealed class BlendCommandTests(FinishedSearch search) : IClassFixture<FinishedSearch>
 {
     [Theory]

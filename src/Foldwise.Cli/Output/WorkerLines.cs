@@ -9,6 +9,7 @@ public sealed class WorkerLines(TextWriter output) : IProgress<SearchEvent>
     {
         string? line = value switch
         {
+            WorkerStarting s => $"Worker {s.Name} joining {s.Join} from {s.Advertise}" + (s.MutualTls ? " (mutual TLS)" : " (no certificate)") + "; Ctrl-C to leave",
             WorkerJoined j => $"Joined the cluster at {j.Join} as {j.Name} with {j.Slots} slot(s), {j.Threads} thread(s) each",
             WorkerJoinFailed f => $"Cannot join {f.Join} (attempt {f.Attempt}): {f.Reason}; retrying in {f.RetryIn.TotalSeconds:F0} s",
             WorkerLostCluster l => $"Lost the cluster ({l.Reason}); joining again",

@@ -1,5 +1,6 @@
 using Foldwise.Cli.Commands;
 using Foldwise.Cli.Output;
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Tuning;
 using Spectre.Console;
 
@@ -16,7 +17,7 @@ public static class SearchCommand
         ArgumentNullException.ThrowIfNull(settings);
         ArgumentNullException.ThrowIfNull(run);
         using var signal = new StopSignal(console);
-        var search = new SearchRun(new ProgressView(console)) { Role = settings.ToRole(), Leases = settings.ToCoordinatorOptions() };
+        var search = new SearchRun(new ProgressView(console)) { Role = settings.ToRole(), Leases = settings.ToCoordinatorOptions(), Telemetry = FoldwiseTelemetryOptions.FromEnvironment() };
         var result = await run(search, new SearchStopping(signal.Stop, signal.Abandon));
         return Ending(console, result);
     }

@@ -1,5 +1,5 @@
+using System.Diagnostics;
 using Foldwise.Cluster.Contracts;
-using Foldwise.Cluster.Telemetry;
 using Foldwise.Core.Events;
 using Foldwise.Core.Search;
 
@@ -14,18 +14,18 @@ public sealed class CoordinatorSession
     private readonly ISearchRecorder recorder;
     private readonly TaskCompletionSource finished = new(TaskCreationOptions.RunContinuationsAsynchronously);
     private readonly object gate = new();
-    private readonly SearchSpan span;
     private readonly IProgress<SearchEvent> events;
+    private readonly string? traceParent;
 
     /// <param name="events">Receives trials started, promoted, scored and failed, on the threads that decide them. Default: none.</param>
-    public CoordinatorSession(SearchManifest manifest, SearchCoordinator coordinator, ISearchRecorder recorder, IProgress<SearchEvent>? events = null)
+    /// <param name="search">The search's span: every lease carries it, so each trial's span, on whichever machine, is its child. Default: none.</param>
+    public CoordinatorSession(SearchManifest manifest, SearchCoordinator coordinator, ISearchRecorder recorder, IProgress<SearchEvent>? events = null, ActivityContext search = default)
     {
         Manifest = manifest;
         Coordinator = coordinator;
         this.recorder = recorder;
         this.events = events ?? NoEvents.Instance;
-        span = new SearchSpan(manifest.SearchId, coordinator.Definition.Name);
-        FoldwiseMetrics.Track(this);
+        traceParent = search == default ? null : TraceParent.Of(search);
     }
 
     public string SearchId => Manifest.SearchId;
@@ -61,7 +61,8 @@ public sealed class CoordinatorSession
                 grant.Run!.Values.ToDictionary(),
                 grant.Trial.Budget,
                 grant.Seed,
-                grant.Trial.LeaseExpires!.Value - grant.Trial.Started!.Value),
+                grant.Trial.LeaseExpires!.Value - grant.Trial.Started!.Value,
+                traceParent),
             LeaseKind.Wait => LeaseReply.Waiting,
             _ => LeaseReply.Done,
         };
@@ -129,7 +130,6 @@ public sealed class CoordinatorSession
         var progress = Coordinator.Progress();
         if (progress.Finished)
         {
-            span.End(progress);
             finished.TrySetResult();
         }
     }

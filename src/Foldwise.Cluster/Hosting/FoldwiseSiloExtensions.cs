@@ -2,6 +2,7 @@ using System.Net;
 using System.Security.Cryptography.X509Certificates;
 using Foldwise.Cluster.Coordination;
 using Foldwise.Cluster.Grains;
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Cluster.Workers;
 using Foldwise.Core.Events;
 using Foldwise.Core.Learning;
@@ -88,6 +89,8 @@ public static class FoldwiseSiloExtensions
         services.TryAddSingleton(TimeProvider.System);
         services.AddSingleton<SessionRegistry>();
         services.AddSingleton<DatasetShelf>();
+        services.AddMetrics();
+        services.TryAddSingleton<FoldwiseMetrics>();
         services.AddHostedService<SessionTicker>();
         return services;
     }
@@ -106,6 +109,8 @@ public static class FoldwiseSiloExtensions
         services.AddSingleton<TableCache>();
         services.AddSingleton<TrialDataCache>();
         services.AddSingleton<SlotStatistics>();
+        services.AddMetrics();
+        services.TryAddSingleton<FoldwiseMetrics>();
         services.AddHostedService<SlotPump>();
         return services;
     }

@@ -1,3 +1,4 @@
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Core.Events;
 using Foldwise.Core.Learning;
 using Microsoft.Extensions.Hosting;
@@ -13,6 +14,7 @@ public sealed class SlotPump(
     WorkerOptions options,
     SlotStatistics statistics,
     TimeProvider time,
+    FoldwiseMetrics metrics,
     IProgress<SearchEvent> events,
     ILoggerFactory loggers) : BackgroundService
 {
@@ -20,6 +22,6 @@ public sealed class SlotPump(
     {
         var logger = loggers.CreateLogger<SlotRunner>();
         return Task.WhenAll(Enumerable.Range(0, options.Slots).Select(i =>
-            new SlotRunner(i.ToString(), grains, data, learners, options, statistics, time, events, logger).RunAsync(stoppingToken)));
+            new SlotRunner(i.ToString(), grains, data, learners, options, statistics, time, metrics, events, logger).RunAsync(stoppingToken)));
     }
 }

@@ -20,6 +20,7 @@ public sealed partial class SlotRunner(
     WorkerOptions options,
     SlotStatistics statistics,
     TimeProvider time,
+    FoldwiseMetrics metrics,
     IProgress<SearchEvent> events,
     ILogger logger)
 {
@@ -79,10 +80,10 @@ public sealed partial class SlotRunner(
         using var abandon = CancellationTokenSource.CreateLinkedTokenSource(stopping);
         var renewing = RenewAsync(search, lease, abandon);
         var clock = Stopwatch.StartNew();
-        using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.TrialSpan, ActivityKind.Consumer);
-        span?.SetTag("foldwise.search", searchId).SetTag("foldwise.trial", lease.TrialId).SetTag("foldwise.attempt", lease.Attempt)
-            .SetTag("foldwise.family", lease.Family).SetTag("foldwise.budget", lease.Budget).SetTag("foldwise.worker", options.Name).SetTag("foldwise.slot", slot);
-        FoldwiseMetrics.SlotBusy();
+        using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.TrialSpan, ActivityKind.Consumer, TraceParent.Parse(lease.TraceParent));
+        span?.SetTag(FoldwiseTelemetry.SearchTag, searchId).SetTag("foldwise.trial", lease.TrialId).SetTag("foldwise.attempt", lease.Attempt)
+            .SetTag(FoldwiseTelemetry.FamilyTag, lease.Family).SetTag("foldwise.budget", lease.Budget).SetTag("foldwise.worker", options.Name).SetTag("foldwise.slot", slot);
+        metrics.SlotBusy();
         string ending = "lost";
         try
         {
@@ -127,9 +128,9 @@ public sealed partial class SlotRunner(
         }
         finally
         {
-            FoldwiseMetrics.SlotIdle();
-            FoldwiseMetrics.TrialEnded(lease.Family, ending, clock.Elapsed.TotalSeconds);
-            span?.SetTag("foldwise.outcome", ending);
+            metrics.SlotIdle();
+            metrics.TrialEnded(lease.Family, ending, clock.Elapsed.TotalSeconds);
+            span?.SetTag(FoldwiseTelemetry.OutcomeTag, ending);
             await abandon.CancelAsync();
             await renewing;
         }
