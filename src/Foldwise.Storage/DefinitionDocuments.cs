@@ -1,5 +1,4 @@
 using Foldwise.Core.Definition;
-using Foldwise.Core.Metrics;
 using Foldwise.Core.Screening;
 using Foldwise.Core.Spaces;
 using LiteDB;
@@ -8,9 +7,10 @@ using static Foldwise.Storage.BsonFields;
 namespace Foldwise.Storage;
 
 /// <summary>
-/// The store's own form of a <see cref="SearchDefinition"/> (store format 2 on): field names and enum names of the
-/// code, none of the definition file's words, so a change of the user-facing syntax never touches a stored search.
-/// Every value is written, defaults included, and reads back to an equal definition.
+/// The store's own form of a <see cref="SearchDefinition"/> (store format 2 on): field names and value words of its
+/// own, fixed here (<see cref="StoreWords"/>), neither the definition file's words nor the code's enum names, so
+/// renaming either never touches a stored search. Every value is written, defaults included, and reads back to an
+/// equal definition.
 /// </summary>
 internal static class DefinitionDocuments
 {
@@ -26,7 +26,7 @@ internal static class DefinitionDocuments
             ["idColumn"] = d.Data.IdColumn,
             ["targetColumn"] = d.Data.TargetColumn,
         },
-        ["metric"] = d.Metric.ToString(),
+        ["metric"] = StoreWords.Metrics.Word(d.Metric),
         ["folds"] = d.Folds,
         ["seed"] = d.Seed,
         ["minNonZero"] = d.Screening.MinNonZero,
@@ -36,7 +36,7 @@ internal static class DefinitionDocuments
             ["ranges"] = new BsonArray(f.Space.Ranges.Select(r => (BsonValue)new BsonDocument
             {
                 ["name"] = r.Name,
-                ["kind"] = r.Kind.ToString(),
+                ["kind"] = StoreWords.Ranges.Word(r.Kind),
                 ["low"] = r.Low,
                 ["high"] = r.High,
                 ["choices"] = Array(r.Choices.IsDefault ? [] : r.Choices),
@@ -44,17 +44,17 @@ internal static class DefinitionDocuments
         })),
         ["schedule"] = new BsonDocument
         {
-            ["kind"] = d.Schedule.Kind.ToString(),
-            ["proposer"] = d.Schedule.Proposer.ToString(),
-            ["minBudget"] = d.Schedule.MinBudget,
-            ["maxBudget"] = d.Schedule.MaxBudget,
+            ["kind"] = StoreWords.Schedules.Word(d.Schedule.Kind),
+            ["proposer"] = StoreWords.Proposers.Word(d.Schedule.Proposer),
+            ["firstRung"] = d.Schedule.FirstRung,
+            ["fullBudget"] = d.Schedule.FullBudget,
             ["eta"] = d.Schedule.Eta,
             ["rateScaling"] = d.Schedule.RateScaling,
             ["brackets"] = d.Schedule.Brackets,
         },
         ["trials"] = Nullable(d.Budget.Trials),
         ["hours"] = Nullable(d.Budget.Hours),
-        ["blendMode"] = d.Blend.Mode.ToString(),
+        ["blendMode"] = StoreWords.BlendModes.Word(d.Blend.Mode),
         ["blendPool"] = d.Blend.Pool,
     };
 
@@ -66,21 +66,21 @@ internal static class DefinitionDocuments
         {
             Name = String(doc, "name", Owner),
             Data = new DataSource(String(data, "train", Owner), String(data, "test", Owner), String(data, "idColumn", Owner), String(data, "targetColumn", Owner)),
-            Metric = Enum<MetricKind>(doc, "metric", Owner),
+            Metric = StoreWords.Metrics.Value(String(doc, "metric", Owner)),
             Folds = Int(doc, "folds", Owner),
             Seed = Int(doc, "seed", Owner),
             Screening = new ScreeningOptions(Int(doc, "minNonZero", Owner)),
             Families = [.. Required(doc, "families", Owner, BsonType.Array).AsArray.Select(Family)],
             Schedule = new ScheduleOptions(
-                Enum<ScheduleKind>(schedule, "kind", Owner),
-                Enum<ProposerKind>(schedule, "proposer", Owner),
-                Int(schedule, "minBudget", Owner),
-                Int(schedule, "maxBudget", Owner),
+                StoreWords.Schedules.Value(String(schedule, "kind", Owner)),
+                StoreWords.Proposers.Value(String(schedule, "proposer", Owner)),
+                Int(schedule, "firstRung", Owner),
+                Int(schedule, "fullBudget", Owner),
                 Int(schedule, "eta", Owner),
                 Double(schedule, "rateScaling", Owner),
                 Int(schedule, "brackets", Owner)),
             Budget = new SearchBudget(OptionalInt(doc, "trials"), OptionalDouble(doc, "hours")),
-            Blend = new BlendOptions(Enum<BlendMode>(doc, "blendMode", Owner), Int(doc, "blendPool", Owner)),
+            Blend = new BlendOptions(StoreWords.BlendModes.Value(String(doc, "blendMode", Owner)), Int(doc, "blendPool", Owner)),
         };
     }
 
@@ -90,7 +90,7 @@ internal static class DefinitionDocuments
         var ranges = Required(f, "ranges", Owner, BsonType.Array).AsArray.Select(v =>
         {
             var r = v.IsDocument ? v.AsDocument : throw Damaged(Owner, "a parameter range is not a document");
-            return new ParameterRange(String(r, "name", Owner), Enum<ParameterKind>(r, "kind", Owner), Double(r, "low", Owner), Double(r, "high", Owner), Strings(r, "choices", Owner));
+            return new ParameterRange(String(r, "name", Owner), StoreWords.Ranges.Value(String(r, "kind", Owner)), Double(r, "low", Owner), Double(r, "high", Owner), Strings(r, "choices", Owner));
         });
         return new FamilySearch(String(f, "family", Owner), new ParameterSpace([.. ranges]));
     }

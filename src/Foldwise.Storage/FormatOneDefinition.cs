@@ -9,9 +9,11 @@ namespace Foldwise.Storage;
 
 /// <summary>
 /// Reads the definition a store of format 1 kept: the definition file's JSON as the writer of that version wrote it
-/// (every key spelled out, ranges as <c>{"int": [lo, hi]}</c>, <c>{"float": …}</c>, <c>{"log": …}</c>,
-/// <c>{"choice": […]}</c> or a bare number). Its words are frozen here, so later changes of the definition syntax
-/// leave old stores readable. <c>StoreFormatTests</c> opens a store of format 1 kept as a fixture.
+/// (every key spelled out, a range as one word and its bounds, or a bare number). Format 1 was written in two spellings,
+/// before and after the definition's words were renamed: <c>min_rounds</c> / <c>max_rounds</c> and ranges
+/// <c>int</c>, <c>float</c>, <c>log</c>, <c>choice</c>, then <c>first_rung</c> / <c>full_budget</c> and <c>whole</c>,
+/// <c>linear</c>, <c>log</c>, <c>one_of</c>. Both are frozen here, so later changes of the definition syntax leave
+/// old stores readable. <c>StoreFormatTests</c> opens a store of format 1 kept as a fixture.
 /// </summary>
 internal static class FormatOneDefinition
 {
@@ -49,8 +51,8 @@ internal static class FormatOneDefinition
             Schedule = new ScheduleOptions(
                 Word(schedule, "kind", ("full", ScheduleKind.Full), ("asha", ScheduleKind.Asha), ("hyperband", ScheduleKind.Hyperband)),
                 Word(schedule, "proposer", ("random", ProposerKind.Random), ("tpe", ProposerKind.Tpe)),
-                schedule.GetProperty("min_rounds").GetInt32(),
-                schedule.GetProperty("max_rounds").GetInt32(),
+                Either(schedule, "min_rounds", "first_rung").GetInt32(),
+                Either(schedule, "max_rounds", "full_budget").GetInt32(),
                 schedule.GetProperty("eta").GetInt32(),
 
                 // Written by later format-1 builds only; an earlier store reads as the definition reader of format 1 read it: the defaults.
@@ -75,17 +77,17 @@ internal static class FormatOneDefinition
             // A bare number was a fixed value; a whole-number parameter stayed whole.
             double v = value.GetDouble();
             return IsWhole(family, name)
-                ? ParameterRange.Integer(name, (int)v, (int)v)
+                ? ParameterRange.Whole(name, (int)v, (int)v)
                 : ParameterRange.Fixed(name, v);
         }
 
         var member = value.EnumerateObject().Single();
         return member.Name switch
         {
-            "int" => ParameterRange.Integer(name, member.Value[0].GetInt32(), member.Value[1].GetInt32()),
-            "float" => ParameterRange.Float(name, member.Value[0].GetDouble(), member.Value[1].GetDouble()),
-            "log" => ParameterRange.LogFloat(name, member.Value[0].GetDouble(), member.Value[1].GetDouble()),
-            "choice" => ParameterRange.Choice(name, [.. member.Value.EnumerateArray().Select(c => c.GetString()!)]),
+            "int" or "whole" => ParameterRange.Whole(name, member.Value[0].GetInt32(), member.Value[1].GetInt32()),
+            "float" or "linear" => ParameterRange.Linear(name, member.Value[0].GetDouble(), member.Value[1].GetDouble()),
+            "log" => ParameterRange.Log(name, member.Value[0].GetDouble(), member.Value[1].GetDouble()),
+            "choice" or "one_of" => ParameterRange.OneOf(name, [.. member.Value.EnumerateArray().Select(c => c.GetString()!)]),
             _ => throw new FormatException($"'{family}.{name}' holds an unknown range '{member.Name}'"),
         };
     }
@@ -94,13 +96,16 @@ internal static class FormatOneDefinition
     {
         try
         {
-            return DefaultSpaces.For(family).Find(name)?.Kind == ParameterKind.Integer;
+            return DefaultSpaces.For(family).Find(name)?.Kind == ParameterKind.Whole;
         }
         catch (ArgumentException)
         {
             return false; // a family this build does not know: its fixed values stay as written
         }
     }
+
+    private static JsonElement Either(JsonElement section, string before, string after) =>
+        section.TryGetProperty(before, out var value) ? value : section.GetProperty(after);
 
     private static string Text(JsonElement section, string key) => section.GetProperty(key).GetString()!;
 

@@ -22,19 +22,19 @@ public static class BlendStep
     /// blend leaves the previous prediction file and blend record as they were. Its span is a child of
     /// <paramref name="search"/> (the search's span) when given.
     /// </summary>
-    public static BlendSummary Run(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, IProgress<SearchEvent> events, BlendOptions? options = null, CancellationToken abandon = default, ActivityContext search = default)
+    public static BlendSummary Run(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, IProgress<SearchEvent> events, BlendOptions? options = null, ActivityContext search = default, CancellationToken abandon = default)
     {
         options ??= definition.Blend;
         using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.BlendSpan, ActivityKind.Internal, search);
         var metric = Metric.For(definition.Metric);
         var trials = store.LoadTrials();
-        var pool = BlendPool.Select(trials, options.Pool, definition.Schedule.MaxBudget);
+        var pool = BlendPool.Select(trials, options.Pool, definition.Schedule.FullBudget);
         if (pool.Count == 0)
         {
             // No candidate reached the full budget (a very small trial budget): blend what went furthest.
             int furthest = trials.Where(t => t.State == TrialState.Done).Max(t => t.Budget);
             pool = BlendPool.Select(trials, options.Pool, furthest);
-            events.Report(new BlendFellBack(definition.Schedule.MaxBudget, furthest));
+            events.Report(new BlendFellBack(definition.Schedule.FullBudget, furthest));
         }
 
         var vectors = pool.Select(t => store.LoadVectors(t.Id) ?? throw new InvalidOperationException($"trial {t.Id} is done but its predictions are missing from the store")).ToList();
@@ -52,7 +52,7 @@ public static class BlendStep
         string path = Path.Combine(outDir, PredictionFileName);
         PredictionFile.Write(path, definition.Data.IdColumn, definition.Data.TargetColumn, header.TestIds, [.. blended.Select(metric.Inverse)]);
         store.SaveBlend(result.Summary);
-        span?.SetTag("foldwise.blend.mode", result.Summary.Mode.ToString()).SetTag("foldwise.blend.pool", pool.Count)
+        span?.SetTag("foldwise.blend.mode", DefinitionWords.Of(result.Summary.Mode)).SetTag("foldwise.blend.pool", pool.Count)
             .SetTag("foldwise.blend.nested", result.Summary.NestedScore).SetTag("foldwise.blend.in_sample", result.Summary.InSampleScore);
         events.Report(new BlendSolved(result.Summary, definition.Metric, [.. trials], path, header.TestIds.Length));
         return result.Summary;

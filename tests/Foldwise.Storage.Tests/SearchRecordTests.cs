@@ -26,10 +26,10 @@ public sealed class SearchRecordTests : IDisposable
         Screening = new ScreeningOptions(MinNonZero: 9),
         Families =
         [
-            new FamilySearch("fasttree", new ParameterSpace([ParameterRange.Integer("leaves", 31, 31), ParameterRange.LogFloat("learning_rate", 1e-05, 0.3)])),
-            new FamilySearch("lightgbm", new ParameterSpace([ParameterRange.Fixed("l2", 0.1), ParameterRange.Float("row_fraction", 0.5, 1), ParameterRange.Choice("style", "a", "b \"c\"")])),
+            new FamilySearch("fasttree", new ParameterSpace([ParameterRange.Whole("leaves", 31, 31), ParameterRange.Log("learning_rate", 1e-05, 0.3)])),
+            new FamilySearch("lightgbm", new ParameterSpace([ParameterRange.Fixed("l2", 0.1), ParameterRange.Linear("row_fraction", 0.5, 1), ParameterRange.OneOf("style", "a", "b \"c\"")])),
         ],
-        Schedule = new ScheduleOptions(ScheduleKind.Hyperband, ProposerKind.Random, MinBudget: 7, MaxBudget: 300, Eta: 4, RateScaling: 0.25, Brackets: 2),
+        Schedule = new ScheduleOptions(ScheduleKind.Hyperband, ProposerKind.Random, FirstRung: 7, FullBudget: 300, Eta: 4, RateScaling: 0.25, Brackets: 2),
         Budget = new SearchBudget(Trials: null, Hours: 2.5),
         Blend = new BlendOptions(BlendMode.NonNegative, Pool: 5),
     };

@@ -24,7 +24,7 @@ public static class QuickDemo
             Folds = 3,
             Seed = 7,
             Families = [.. FamilyNames.All.Select(f => new FamilySearch(f, DefaultSpaces.For(f)))],
-            Schedule = new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, MinBudget: 10, MaxBudget: 30, Eta: 3),
+            Schedule = new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, FirstRung: 10, FullBudget: 30, Eta: 3),
             Budget = new SearchBudget(Trials: 10, Hours: null),
         };
     }

@@ -25,7 +25,7 @@ public sealed class StoreFormatTests
         var definition = header.Definition;
         Assert.Equal("tiny", definition.Name);
         Assert.Equal((3, 7, 3), (definition.Folds, definition.Seed, definition.Screening.MinNonZero));
-        Assert.Equal(new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, MinBudget: 10, MaxBudget: 30, Eta: 3, RateScaling: 0.5, Brackets: 1), definition.Schedule);
+        Assert.Equal(new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, FirstRung: 10, FullBudget: 30, Eta: 3, RateScaling: 0.5, Brackets: 1), definition.Schedule);
         Assert.Equal(new SearchBudget(Trials: 10, Hours: null), definition.Budget);
         Assert.Equal(new BlendOptions(BlendMode.Simplex, Pool: 3), definition.Blend);
         Assert.Equal(["lightgbm", "fasttree"], definition.Families.Select(f => f.Family));

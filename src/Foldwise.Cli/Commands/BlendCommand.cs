@@ -24,12 +24,12 @@ public sealed class BlendCommand(IAnsiConsole console) : Command<BlendSettings>
         var (header, definition) = StoredSearch.HeaderOf(store);
         var options = new BlendOptions(settings.ParsedMode ?? definition.Blend.Mode, settings.Pool ?? definition.Blend.Pool);
         IProgress<Core.Events.SearchEvent> events = settings.Json ? Core.Events.NoEvents.Instance : new ProgressView(console);
-        var blend = BlendStep.Run(store, header, definition, Path.GetDirectoryName(Path.GetFullPath(path))!, events, options, cancellationToken);
+        var blend = BlendStep.Run(store, header, definition, Path.GetDirectoryName(Path.GetFullPath(path))!, events, options, abandon: cancellationToken);
         if (settings.Json)
         {
             var root = new JsonObject
             {
-                ["mode"] = blend.Mode.ToString().ToLowerInvariant(),
+                ["mode"] = DefinitionWords.Of(blend.Mode),
                 ["in_sample_score"] = blend.InSampleScore,
                 ["nested_score"] = blend.NestedScore,
                 ["nested_fold_scores"] = new JsonArray([.. blend.NestedFoldScores.Select(s => (JsonNode?)s)]),

@@ -87,7 +87,7 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
     {
         var definition = s.Definition;
         spaces = definition.Families.ToDictionary(f => f.Family, f => f.Space);
-        console.MarkupLine($"Search [bold]{Markup.Escape(s.SearchId)}[/]: {definition.Schedule.Kind} with {definition.Schedule.Proposer}, " +
+        console.MarkupLine($"Search [bold]{Markup.Escape(s.SearchId)}[/]: {DefinitionWords.Of(definition.Schedule.Kind)} with {DefinitionWords.Of(definition.Schedule.Proposer)}, " +
                            $"{string.Join(" + ", definition.Families.Select(f => f.Family))}, {definition.Folds}-fold, {s.LocalSlots} local slot(s)");
         if (console.Profile.Capabilities.Interactive && console.Profile.Capabilities.Ansi)
         {

@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using Foldwise.Cluster.Contracts;
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Core.Events;
 using Foldwise.Core.Search;
 
