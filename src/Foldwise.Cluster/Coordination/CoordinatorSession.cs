@@ -120,8 +120,18 @@ public sealed class CoordinatorSession
     /// <summary>Called about once a second: expires lost leases and records the time spent.</summary>
     public void Tick()
     {
+        int failedBefore = Coordinator.Progress().Failed;
         Coordinator.ExpireLeases();
         var progress = Coordinator.Progress();
+        if (progress.Failed > failedBefore)
+        {
+            // A trial whose last allowed attempt expired: the newest failures are the ones this tick caused.
+            foreach (var failed in Coordinator.Trials().Where(t => t.State == TrialState.Failed).OrderByDescending(t => t.Finished ?? t.Created).Take(progress.Failed - failedBefore))
+            {
+                events.Report(new TrialFailed(SearchId, failed, progress));
+            }
+        }
+
         recorder.UpdateSpent(progress.SpentSeconds, finished: false);
         CheckFinished();
     }
