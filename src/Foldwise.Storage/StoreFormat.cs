@@ -13,10 +13,13 @@ internal static class StoreFormat
     public const string Name = "foldwise-search";
 
     /// <summary>
-    /// The layout this build writes and the newest it reads. 1: the definition kept as the definition file's JSON text;
-    /// 2: kept as a document in the store's own form (<see cref="DefinitionDocuments"/>). Older versions are read as they were written.
+    /// The layout this build writes and the newest it reads. 1: each per-row vector inline in one document
+    /// (a million row ids passed LiteDB's 16 MB document cap). 2: per-row vectors in chunks of collection
+    /// <c>chunks</c>; format 1's inline vectors still read. 3: the definition kept as a document in the store's
+    /// own form (<see cref="DefinitionDocuments"/>), no longer the definition file's text. Every earlier layout still
+    /// reads, so opening an earlier store to write only raises its version.
     /// </summary>
-    public const int Version = 2;
+    public const int Version = 3;
 
     public const string MetaCollection = "meta";
 
@@ -83,6 +86,17 @@ internal static class StoreFormat
         }
 
         return doc["writer"].AsString ?? "unknown";
+    }
+
+    /// <summary>Raises an older store's version to <see cref="Version"/> before this build writes its layout into it.</summary>
+    public static void Upgrade(LiteDatabase db)
+    {
+        var doc = db.GetCollection(MetaCollection).FindById(DocumentId);
+        if (doc["version"].AsInt32 < Version)
+        {
+            doc["version"] = Version;
+            db.GetCollection(MetaCollection).Update(doc);
+        }
     }
 
     private static StoreException NotAStore(string path, string why) =>

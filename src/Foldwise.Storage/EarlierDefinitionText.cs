@@ -15,7 +15,7 @@ namespace Foldwise.Storage;
 /// <c>linear</c>, <c>log</c>, <c>one_of</c>. Both are frozen here, so later changes of the definition syntax leave
 /// old stores readable. <c>StoreFormatTests</c> opens a store of format 1 kept as a fixture.
 /// </summary>
-internal static class FormatOneDefinition
+internal static class EarlierDefinitionText
 {
     private const string Owner = "the search definition (store format 1)";
     private static readonly ScheduleOptions Defaults = new();
