@@ -23,7 +23,7 @@ public static class QuickDemo
             Data = new DataSource(trainPath, testPath, "shipper_id", "q1_spend"),
             Folds = 3,
             Seed = 7,
-            Families = [.. FamilyNames.All.Select(f => new FamilySearch(f, DefaultSpaces.For(f)))],
+            Families = [.. new[] { FamilyNames.LightGbm, FamilyNames.FastTree }.Select(f => new FamilySearch(f, DefaultSpaces.For(f)))],
             Schedule = new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, FirstRung: 10, FullBudget: 30, Eta: 3),
             Budget = new SearchBudget(Trials: 10, Hours: null),
         };

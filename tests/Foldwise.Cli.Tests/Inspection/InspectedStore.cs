@@ -76,7 +76,7 @@ public sealed class InspectedStore : IDisposable
         Name = "inspect-test",
         Data = new DataSource(System.IO.Path.Combine(folder, "train.csv"), System.IO.Path.Combine(folder, "test.csv"), "id", "y"),
         Folds = 3,
-        Families = [.. FamilyNames.All.Select(f => new FamilySearch(f, DefaultSpaces.For(f)))],
+        Families = [.. FamilyNames.Default.Select(f => new FamilySearch(f, DefaultSpaces.For(f)))],
         Schedule = new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Random, FirstRung: 5, FullBudget: 15, Eta: 3),
         Budget = new SearchBudget(Trials: 10, Hours: 1),
     };
