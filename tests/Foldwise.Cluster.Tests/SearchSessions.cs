@@ -1,5 +1,4 @@
 using System.Collections.Immutable;
-using System.Security.Cryptography;
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Coordination;
 using Foldwise.Core.Data;
@@ -20,13 +19,9 @@ internal static class SearchSessions
     public static CoordinatorSession Start(
         TwoSiloCluster cluster, string name, (FeatureTable Train, FeatureTable Test) tables, int trials, MemoryRecorder recorder, CoordinatorOptions? leases = null)
     {
-        var trainBytes = TableCodec.Encode(tables.Train);
-        var testBytes = TableCodec.Encode(tables.Test);
-        string trainHash = Convert.ToHexStringLower(SHA256.HashData(trainBytes));
-        string testHash = Convert.ToHexStringLower(SHA256.HashData(testBytes));
         var shelf = cluster.Coordinator.GetRequiredService<DatasetShelf>();
-        shelf.Put(trainHash, trainBytes);
-        shelf.Put(testHash, testBytes);
+        string trainHash = Shelve(shelf, tables.Train);
+        string testHash = Shelve(shelf, tables.Test);
         var folds = new FoldPlan(3, 1, [.. Enumerable.Range(0, tables.Train.RowCount).Select(r => r % 3)]);
         var definition = new SearchDefinition
         {
@@ -40,6 +35,20 @@ internal static class SearchSessions
         var session = new CoordinatorSession(manifest, coordinator, recorder);
         cluster.Coordinator.GetRequiredService<SessionRegistry>().Add(session);
         return session;
+    }
+
+    /// <summary>Encodes a table into a file of the temp folder (named by its hash) and serves it from the shelf.</summary>
+    private static string Shelve(DatasetShelf shelf, FeatureTable table)
+    {
+        string hash = TableHash.Of(table);
+        string path = Path.Combine(Path.GetTempPath(), "foldwise-cluster-tests-" + hash + ".fwt");
+        using (var file = File.Create(path))
+        {
+            TableCodec.Encode(table, file);
+        }
+
+        shelf.Put(hash, path);
+        return hash;
     }
 
     /// <summary>

@@ -33,16 +33,16 @@ public sealed class SearchRun(IAnsiConsole console)
 
         var prepared = SearchPreparation.Prepare(definition, console);
         Directory.CreateDirectory(outDir);
-        TableFiles.Write(outDir, prepared.TrainHash, prepared.TrainBytes);
-        TableFiles.Write(outDir, prepared.TestHash, prepared.TestBytes);
+        string trainHash = TableFiles.Write(outDir, prepared.Train);
+        string testHash = TableFiles.Write(outDir, prepared.Test);
         using var store = SearchStore.Create(storePath);
         var header = new SearchHeader
         {
             SearchId = $"{definition.Name}-{DateTimeOffset.UtcNow:yyyyMMddHHmmss}",
             DefinitionJson = DefinitionWriter.Write(definition),
             Folds = prepared.Folds,
-            TrainHash = prepared.TrainHash,
-            TestHash = prepared.TestHash,
+            TrainHash = trainHash,
+            TestHash = testHash,
             TrainIds = prepared.Train.Ids,
             TestIds = prepared.Test.Ids,
             TrainTarget = prepared.Train.Target,
@@ -50,7 +50,7 @@ public sealed class SearchRun(IAnsiConsole console)
         };
         store.SaveHeader(header);
         store.SaveScreening(prepared.Screening);
-        return await RunAsync(store, header, definition, prepared.Train, prepared.Test, prepared.TrainBytes, prepared.TestBytes, outDir, slots, threads, cancellation);
+        return await RunAsync(store, header, definition, prepared.Train, prepared.Test, outDir, slots, threads, cancellation);
     }
 
     /// <summary>
@@ -78,13 +78,13 @@ public sealed class SearchRun(IAnsiConsole console)
             return ExitCodes.Ok;
         }
 
-        var (train, trainBytes) = TableFiles.Read(outDir, header.TrainHash, "training");
-        var (test, testBytes) = TableFiles.Read(outDir, header.TestHash, "test");
+        var train = TableFiles.Read(outDir, header.TrainHash, "training");
+        var test = TableFiles.Read(outDir, header.TestHash, "test");
         var before = store.LoadTrials();
         console.MarkupLine($"Resuming [bold]{Markup.Escape(header.SearchId)}[/]: {before.Count(t => t.State == TrialState.Done)} trial(s) done, " +
                            $"{before.Count(t => t.State is TrialState.Running or TrialState.Queued)} to run again, " +
                            $"{TimeSpan.FromSeconds(header.SpentSeconds):hh\\:mm\\:ss} spent before.");
-        return await RunAsync(store, header, definition, train, test, trainBytes, testBytes, outDir, slots, threads, cancellation);
+        return await RunAsync(store, header, definition, train, test, outDir, slots, threads, cancellation);
     }
 
     /// <summary>
@@ -119,8 +119,6 @@ public sealed class SearchRun(IAnsiConsole console)
         SearchDefinition definition,
         FeatureTable train,
         FeatureTable test,
-        byte[] trainBytes,
-        byte[] testBytes,
         string outDir,
         int slots,
         int? threads,
@@ -141,8 +139,8 @@ public sealed class SearchRun(IAnsiConsole console)
         try
         {
             await using var cluster = await EmbeddedCluster.StartAsync(Role, slots, threads, linked.Token);
-            cluster.Shelf.Put(header.TrainHash, trainBytes);
-            cluster.Shelf.Put(header.TestHash, testBytes);
+            cluster.Shelf.Put(header.TrainHash, TableFiles.PathOf(outDir, header.TrainHash));
+            cluster.Shelf.Put(header.TestHash, TableFiles.PathOf(outDir, header.TestHash));
             cluster.LocalTables?.Seed(header.TrainHash, train);
             cluster.LocalTables?.Seed(header.TestHash, test);
             cluster.Sessions.Add(session);
