@@ -37,11 +37,14 @@ internal static class SearchSessions
         return session;
     }
 
-    /// <summary>Encodes a table into a file of the temp folder (named by its hash) and serves it from the shelf.</summary>
+    /// <summary>
+    /// Encodes a table into a file of its own in the temp folder and serves it from the shelf; a file per call, so
+    /// a search starting on the same tables never rewrites a file the shelf is serving.
+    /// </summary>
     private static string Shelve(DatasetShelf shelf, FeatureTable table)
     {
         string hash = TableHash.Of(table);
-        string path = Path.Combine(Path.GetTempPath(), "foldwise-cluster-tests-" + hash + ".fwt");
+        string path = Path.Combine(Path.GetTempPath(), "foldwise-cluster-tests-" + Guid.NewGuid().ToString("N") + ".fwt");
         using (var file = File.Create(path))
         {
             TableCodec.Encode(table, file);
