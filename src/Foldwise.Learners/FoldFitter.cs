@@ -19,26 +19,28 @@ internal static class FoldFitter
     /// </summary>
     private static readonly Lock OneFitAtATime = new();
 
-    public static FoldPrediction Fit(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation)
+    /// <param name="imputes">True for a family that cannot take NaN: it reads the fold's median-imputed inputs.</param>
+    public static FoldPrediction Fit(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation, bool imputes = false)
     {
         Check(family, job);
         cancellation.ThrowIfCancellationRequested();
         var ml = new MLContext(job.Seed);
         var data = job.Data;
+        var inputs = imputes ? job.Features.Imputed(job.TrainRows) : job.Features;
 
         // Trees fit the target less its training mean: FastTree boosts from zero, so on a log1p target (mean ~8)
         // a low-budget rung would otherwise be scored on how far it got from zero, not on what it learned.
         double offset = job.TrainRows.Average(r => data.Target[r]);
         var centred = Array.ConvertAll(data.Target, y => y - offset);
-        var trainView = SparseViews.Rows(ml, data.Train, job.TrainRows, centred);
+        var trainView = SparseViews.Rows(ml, inputs.Train, job.TrainRows, centred);
 
         // ML.NET 5's public API offers no way to interrupt a fit, so cancellation is honoured around it.
         lock (OneFitAtATime)
         {
             var model = train(ml, trainView);
             cancellation.ThrowIfCancellationRequested();
-            var validation = Score(model, SparseViews.Rows(ml, data.Train, job.ValidationRows, labels: null), job.ValidationRows.Length, offset);
-            var test = Score(model, SparseViews.Test(data), data.Test.RowCount, offset);
+            var validation = Score(model, SparseViews.Rows(ml, inputs.Train, job.ValidationRows, labels: null), job.ValidationRows.Length, offset);
+            var test = Score(model, SparseViews.Test(inputs.Test), inputs.Test.RowCount, offset);
             return new FoldPrediction(validation, test);
         }
     }
@@ -65,6 +67,11 @@ internal static class FoldFitter
         if (job.Data.Test.ColumnCount != job.Data.Train.ColumnCount)
         {
             problems.Add($"the test table has {job.Data.Test.ColumnCount} features but the training table {job.Data.Train.ColumnCount}");
+        }
+
+        if (job.Inputs is { } inputs && inputs.Train.RowCount != job.Data.Train.RowCount)
+        {
+            problems.Add($"the fold's inputs have {inputs.Train.RowCount} training rows but the table {job.Data.Train.RowCount}");
         }
 
         if (problems.Count > 0)

@@ -66,11 +66,11 @@ public sealed class CatalogAndOptionTests
     }
 
     [Fact]
-    public void Builds_the_test_view_once_per_trial_data()
+    public void Builds_the_test_view_once_per_test_matrix()
     {
         var data = TinyTables.Data();
 
-        Assert.Same(SparseViews.Test(data), SparseViews.Test(data));
-        Assert.NotSame(SparseViews.Test(data), SparseViews.Test(TinyTables.Data()));
+        Assert.Same(SparseViews.Test(data.Test), SparseViews.Test(data.Test));
+        Assert.NotSame(SparseViews.Test(data.Test), SparseViews.Test(TinyTables.Data().Test));
     }
 }
