@@ -90,6 +90,14 @@ internal sealed class LevelColumnBuilder
         }
     }
 
+    /// <summary>Carries over where the numbers read before this column turned to text had empty cells and missing words.</summary>
+    public void NoteEarlierGaps(long emptyLine, long wordLine, string word)
+    {
+        FirstEmptyLine = emptyLine;
+        FirstWordLine = wordLine;
+        FirstWord = word;
+    }
+
     public CategoryColumn Build() => new(
         [.. levels],
         ImmutableCollectionsMarshal.AsImmutableArray(codes.AsSpan(0, Count).ToArray()));

@@ -61,6 +61,7 @@ internal static class TableLoader
         var ordinals = layout.FeatureOrdinals;
         var names = layout.FeatureNames;
         var levels = new LevelColumnBuilder?[ordinals.Length];
+        var gaps = new GapLines(ordinals.Length);
         var declared = training?.Categories ?? rules.Categories.ToHashSet(StringComparer.Ordinal);
         for (int f = 0; f < ordinals.Length; f++)
         {
@@ -102,6 +103,10 @@ internal static class TableLoader
                     if (value != 0f)
                     {
                         columns.Add(f, row, value);
+                        if (float.IsNaN(value))
+                        {
+                            gaps.Note(f, cell, line);
+                        }
                     }
 
                     continue;
@@ -116,6 +121,7 @@ internal static class TableLoader
                 // The first text cell: the column is a category column, its earlier numbers become levels.
                 text = new LevelColumnBuilder();
                 text.AddNumbers(row, columns.Rows(f), columns.Values(f));
+                text.NoteEarlierGaps(gaps.FirstEmptyLine[f], gaps.FirstWordLine[f], gaps.FirstWord[f]);
                 columns.Clear(f);
                 text.Add(cell, rules, line);
                 levels[f] = text;

@@ -19,8 +19,9 @@ public static class SearchPreparation
     {
         var metric = Metric.For(definition.Metric);
         var clock = Stopwatch.StartNew();
-        var train = CsvTableReader.ReadTraining(definition.Data.Train, definition.Data.IdColumn, definition.Data.TargetColumn, metric);
-        var rawTest = CsvTableReader.ReadTest(definition.Data.Test, definition.Data.IdColumn, definition.Data.TargetColumn);
+        var rules = definition.Data.Rules;
+        var train = CsvTableReader.ReadTraining(definition.Data.Train, definition.Data.IdColumn, definition.Data.TargetColumn, metric, rules);
+        var rawTest = CsvTableReader.ReadTest(definition.Data.Test, definition.Data.IdColumn, definition.Data.TargetColumn, rules, train);
         var (test, extra) = TableAlignment.AlignTest(train, rawTest);
         if (train.RowCount < 2 * definition.Folds)
         {
@@ -28,23 +29,33 @@ public static class SearchPreparation
         }
 
         console.MarkupLine(
-            $"Read [bold]{Markup.Escape(Path.GetFileName(definition.Data.Train))}[/] {train.RowCount:N0} rows × {train.FeatureCount:N0} features " +
+            $"Read [bold]{Markup.Escape(Path.GetFileName(definition.Data.Train))}[/] {train.RowCount:N0} rows × {train.FeatureCount:N0} numeric features" +
+            (train.CategoryNames.Length > 0 ? $" and {train.CategoryNames.Length:N0} category columns " : " ") +
             $"({train.Density:P1} non-zero) and [bold]{Markup.Escape(Path.GetFileName(definition.Data.Test))}[/] {test.RowCount:N0} rows in {clock.Elapsed.TotalSeconds:F1} s");
         if (extra.Length > 0)
         {
             console.MarkupLine($"  The test table's {extra.Length} column(s) missing from training are ignored: {Markup.Escape(string.Join(", ", extra.Take(5)))}{(extra.Length > 5 ? ", …" : "")}");
         }
 
-        var report = ColumnScreen.Screen(train, definition.Screening);
+        var report = TestLevelCount.Add(ColumnScreen.Screen(train, definition.Screening), train, test);
         var screenedTrain = ColumnScreen.Apply(report, train);
         var screenedTest = ColumnScreen.Apply(report, test);
         console.MarkupLine(
             $"Screening kept {report.Kept.Length:N0} of {report.ColumnsRead:N0} columns: dropped {report.Count(DropReason.Constant):N0} constant, " +
-            $"{report.Count(DropReason.Duplicate):N0} duplicate, {report.Count(DropReason.TooFewNonZero):N0} with fewer than {definition.Screening.MinNonZero} non-zero cells");
-        if (report.Kept.Length == 0)
+            $"{report.Count(DropReason.Duplicate):N0} duplicate, {report.Count(DropReason.TooFewNonZero):N0} with fewer than {definition.Screening.MinNonZero} non-zero cells" +
+            $"{DropCount(report, DropReason.AllMissing, "all missing")}{DropCount(report, DropReason.NearlyUnique, "nearly unique text")}");
+        foreach (string line in ColumnNotes.Lines(report))
+        {
+            console.MarkupLine("  " + Markup.Escape(line));
+        }
+
+        if (report.Kept.Length == 0 && report.Categories.Length == 0)
         {
             throw new InputException(definition.Data.Train, "screening dropped every feature column; nothing is left to learn from");
         }
+
+        static string DropCount(ScreeningReport report, DropReason reason, string what) =>
+            report.Count(reason) > 0 ? $", {report.Count(reason):N0} {what}" : "";
 
         var folds = StratifiedFoldPlanner.Create([.. screenedTrain.Target.Select(metric.Forward)], definition.Folds, definition.Seed);
         byte[] trainBytes = TableCodec.Encode(screenedTrain);
