@@ -10,6 +10,38 @@ public sealed class RunCommandTests : IDisposable
     public void Dispose() => workspace.Dispose();
 
     [Fact]
+    public void Runs_a_table_with_a_text_column_and_gaps_and_says_what_it_did_with_each()
+    {
+        // Given a training table with a text column (some cells blank) and a numeric column with NA cells,
+        // and a test table with a level training never saw
+        var random = new Random(3);
+        var train = new System.Text.StringBuilder("id,region,f1,y\n");
+        string[] regions = ["north", "south", "east", "west"];
+        for (int r = 0; r < 80; r++)
+        {
+            int level = random.Next(4);
+            string region = r % 10 == 0 ? "" : regions[level];
+            string f1 = r % 8 == 0 ? "NA" : random.Next(0, 5).ToString(CultureInfo.InvariantCulture);
+            train.Append(CultureInfo.InvariantCulture, $"t{r},{region},{f1},{Math.Exp(1 + level):F3}\n");
+        }
+
+        workspace.Write("train.csv", train.ToString());
+        workspace.Write("test.csv", "id,f1,region\nb0,1,north\nb1,NA,islands\nb2,2,\n");
+        string definition = workspace.WriteDefinition(trials: 4);
+
+        // When the search runs
+        var run = CliHarness.Run("run", definition, "--out", workspace.Out);
+
+        // Then the summary names the category column's levels and encoding, the test table's new level, and the gaps
+        Assert.True(run.ExitCode == 0, run.Output);
+        Assert.Contains("category region: 4 levels, 4 seen often enough to keep", run.Output, StringComparison.Ordinal);
+        Assert.Contains("one indicator column per kept level, 10.0% missing (a level of its own)", run.Output, StringComparison.Ordinal);
+        Assert.Contains("the test table has 1 new levels in 1 rows", run.Output, StringComparison.Ordinal);
+        Assert.Contains("f1: 12.5% missing", run.Output, StringComparison.Ordinal);
+        Assert.Equal(4, File.ReadAllLines(Path.Combine(workspace.Out, "predictions.csv")).Length);
+    }
+
+    [Fact]
     public void Runs_a_search_to_a_prediction_file_and_history_shows_both_families()
     {
         // Given small tables and a definition with both families

@@ -22,7 +22,7 @@ public static class ColumnNotes
 
         foreach (var gap in report.Gaps.Take(GapsNamed))
         {
-            yield return string.Create(CultureInfo.InvariantCulture, $"{gap.Name}: {gap.MissingShare:P1} missing, kept as missing (imputed inside each fold for families that cannot take it)");
+            yield return string.Create(CultureInfo.InvariantCulture, $"{gap.Name}: {gap.MissingShare * 100:F1}% missing, kept as missing (imputed inside each fold for families that cannot take it)");
         }
 
         if (report.Gaps.Length > GapsNamed)
@@ -37,7 +37,7 @@ public static class ColumnNotes
         string encoding = note.Encoding == CategoryEncodingKind.Indicators
             ? "one indicator column per kept level"
             : "smoothed target mean, out-of-fold within each fold's training rows";
-        string missing = note.MissingShare > 0 ? string.Create(CultureInfo.InvariantCulture, $", {note.MissingShare:P1} missing (a level of its own)") : "";
+        string missing = note.MissingShare > 0 ? string.Create(CultureInfo.InvariantCulture, $", {note.MissingShare * 100:F1}% missing (a level of its own)") : "";
         string fresh = note.NewTestLevels > 0 ? $"; the test table has {note.NewTestLevels:N0} new levels in {note.NewTestRows:N0} rows (encoded as \"other\")" : "";
         return $"category {note.Name}: {note.Levels:N0} levels, {note.LevelsKept:N0} seen often enough to keep, the rest \"other\"; {encoding}{missing}{fresh}";
     }
