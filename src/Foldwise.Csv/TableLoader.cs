@@ -160,8 +160,7 @@ internal static class TableLoader
             {
                 throw new InputException(
                     path,
-                    $"category column '{name}' holds both empty cells (line {text.FirstEmptyLine}) and {CellParser.Quote(text.FirstWord)}, a default missing-value word that may be a real level here; " +
-                    "list the words that mean missing in 'data.missing'",
+                    $"category column '{name}' has blank cells (line {text.FirstEmptyLine}) and {CellParser.Quote(text.FirstWord)}, a default missing word that may be a level here; set 'data.missing'",
                     Math.Max(text.FirstEmptyLine, text.FirstWordLine),
                     column);
             }

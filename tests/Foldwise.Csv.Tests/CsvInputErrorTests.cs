@@ -117,7 +117,7 @@ public sealed class CsvInputErrorTests
 
         var e = Assert.Throws<InputException>(() => Train(csv));
 
-        AssertAt(e, csv.Path, 4, 3, "category column 'region' holds both empty cells (line 4) and \"NA\", a default missing-value word that may be a real level here");
+        AssertAt(e, csv.Path, 4, 3, "category column 'region' has blank cells (line 4) and \"NA\", a default missing word that may be a level here; set 'data.missing'");
     }
 
     [Fact]
