@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using Foldwise.Core.Search;
 using Foldwise.Core.Spaces;
 
 namespace Foldwise.Core.Learning;
@@ -25,7 +26,7 @@ public sealed class TrialExecutor(IFoldLearner learner)
             cancellation.ThrowIfCancellationRequested();
             var validation = folds.ValidationRows(f);
             var trainRows = folds.TrainRows(f);
-            int foldSeed = seed + (1000 * f);
+            int foldSeed = SearchSeeds.Fold(seed, f);
             var job = new FoldJob(data, f, trainRows, validation, parameters, budget, foldSeed, threads, data.InputsFor(trainRows, foldSeed));
             var prediction = learner.Fit(job, cancellation);
             if (prediction.Validation.Length != validation.Length || prediction.Test.Length != test.Length)
