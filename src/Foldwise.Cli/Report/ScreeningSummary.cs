@@ -55,7 +55,7 @@ public static class ScreeningSummary
         table += Inputs(report);
         return new ChartSection(
             Id,
-            "Screening: columns kept and dropped",
+            "Columns kept and dropped before any learner saw them",
             "Columns dropped here never reached a learner: constant and duplicate columns carry nothing new, nearly-empty ones too little to split on; a large drop count is expected on wide sparse tables, a surprising name in the list is worth a question to whoever built the table.",
             ChartSvg.Render(plot, Id, ChartSvg.Width, 240) + table,
             series.ToImmutable());
