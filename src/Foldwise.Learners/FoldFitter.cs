@@ -28,7 +28,7 @@ internal static class FoldFitter
 
         // Trees fit the target less its training mean: FastTree boosts from zero, so on a log1p target (mean ~8)
         // a low-budget rung would otherwise be scored on how far it got from zero, not on what it learned.
-        double offset = job.TrainRows.Average(r => data.Target[r]);
+        double offset = TrainingMean(job);
         var centred = Array.ConvertAll(data.Target, y => y - offset);
         var trainView = SparseViews.Rows(ml, data.Train, job.TrainRows, centred);
 
@@ -42,6 +42,9 @@ internal static class FoldFitter
             return new FoldPrediction(validation, test);
         }
     }
+
+    /// <summary>The training rows' mean target: every tree learner here fits the target less it.</summary>
+    internal static double TrainingMean(FoldJob job) => job.TrainRows.Average(r => job.Data.Target[r]);
 
     /// <summary>Refuses a job before any training: the coordinator's values are checked, never trusted.</summary>
     internal static void Check(string family, FoldJob job)
