@@ -6,16 +6,16 @@ using Microsoft.ML.Data;
 namespace Foldwise.Learners;
 
 /// <summary>
-/// The fit path both families share: check the job, train in a context seeded from it, then score the
+/// The fit path of the ML.NET families (FastTree, and ML.NET's LightGBM trainer kept as a reference): check the job, train in a context seeded from it, then score the
 /// held-out rows and the whole test table in batch (one cursor each, no per-row engine).
 /// Cancellation is checked before and after training; a fit itself runs to its end.
 /// </summary>
 internal static class FoldFitter
 {
     /// <summary>
-    /// One fit at a time per process. ML.NET already serialises LightGBM training (STACK-NOTES), and concurrent fits
-    /// of the two families in one test process crashed the process natively (seen 2026-12-02); a slot that wants its
-    /// own cores in parallel runs in a process of its own (<c>foldwise worker</c>).
+    /// One ML.NET fit at a time per process: ML.NET serialises its own LightGBM training, and concurrent fits of its
+    /// LightGBM and FastTree trainers in one test process crashed the process natively (seen 2026-12-02). The native
+    /// LightGBM learner takes no part in this lock, so its fits run beside these.
     /// </summary>
     private static readonly Lock OneFitAtATime = new();
 
