@@ -17,7 +17,8 @@ namespace Foldwise.Bench.FoldFit;
 /// <item><c>old</c>: the former default, ML.NET's trainer in one slot with 2 threads, OMP_WAIT_POLICY=passive;</item>
 /// <item><c>new</c>: the default, the native learner through <see cref="TrialExecutor"/> in 2 slots of 1 thread in one process;</item>
 /// <item><c>bare</c>: two single-threaded fold loops straight on LightGBM's C API, side by side in one process;</item>
-/// <item><c>wide</c>: the native learner in one slot with 2 threads (what <c>--threads 2 --slots 1</c> gives).</item>
+/// <item><c>wide</c>: the native learner in one slot with 2 threads (what <c>--threads 2 --slots 1</c> gives);</item>
+/// <item><c>fixed</c>: <c>bare</c> with no rounds: Datasets, boosters and predictions only, the most a cache of fold Datasets could save.</item>
 /// </list>
 /// Command line: <c>--pair [--table small|demo|rowsN] [--rounds R] [--reps 3] [--trials 4] [--modes old,new,bare]</c>.
 /// </summary>
@@ -83,16 +84,16 @@ internal static class PairBench
             "old" => seed => new TrialExecutor(new MlNetLightGbmLearner()).Run(data, set, rounds, seed, 2, CancellationToken.None),
             "new" => seed => new TrialExecutor(new LightGbmLearner()).Run(data, set, rounds, seed, 1, CancellationToken.None),
             "wide" => seed => new TrialExecutor(new LightGbmLearner()).Run(data, set, rounds, seed, 2, CancellationToken.None),
-            "bare" => seed =>
+            "bare" or "fixed" => seed =>
             {
                 for (int f = 0; f < 5; f++)
                 {
-                    BareLightGbm.Fold(data, f, BareLightGbm.Parameters(parameters, seed + (1000 * f), 1), rounds);
+                    BareLightGbm.Fold(data, f, BareLightGbm.Parameters(parameters, seed + (1000 * f), 1), mode == "bare" ? rounds : 0);
                 }
             },
             _ => throw new ArgumentException($"unknown mode {mode}"),
         };
-        int loops = mode is "new" or "bare" ? 2 : 1;
+        int loops = mode is "new" or "bare" or "fixed" ? 2 : 1;
         var clock = Stopwatch.StartNew();
         Parallel.For(0, loops, new ParallelOptions { MaxDegreeOfParallelism = loops }, loop =>
         {

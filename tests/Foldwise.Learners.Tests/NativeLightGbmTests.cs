@@ -47,6 +47,24 @@ public sealed class NativeLightGbmTests
     }
 
     [Fact]
+    public void Continues_at_a_changed_learning_rate()
+    {
+        // Given two 20-round models of the same job
+        var job = TinyTables.Job(Data, FamilyNames.LightGbm, budget: 20);
+        using var same = LightGbmFoldModel.Train(job, scoreEachRound: false, CancellationToken.None);
+        using var slower = LightGbmFoldModel.Train(job, scoreEachRound: false, CancellationToken.None);
+
+        // When one continues at the job's rate and the other at a tenth of it
+        same.Continue(20, CancellationToken.None);
+        slower.ChangeLearningRate(0.01);
+        slower.Continue(20, CancellationToken.None);
+
+        // Then their first 20 rounds agree and the later rounds differ
+        Assert.Equal(same.Predict(rounds: 20).Test, slower.Predict(rounds: 20).Test);
+        Assert.NotEqual(same.Predict().Test, slower.Predict().Test);
+    }
+
+    [Fact]
     public void Scores_the_held_out_rows_after_every_round()
     {
         // Given a job of 50 rounds, fitted with a score per round

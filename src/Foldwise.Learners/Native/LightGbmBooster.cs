@@ -34,11 +34,14 @@ internal sealed class LightGbmBooster : IDisposable
         }
     }
 
-    /// <summary>Adds held-out rows whose scores the booster keeps up to date round by round (<see cref="ValidationScores"/>).</summary>
+    /// <summary>
+    /// Adds held-out rows whose scores the booster keeps up to date round by round (<see cref="ValidationScores"/>).
+    /// The booster owns them from here on, refused or not.
+    /// </summary>
     public void AddValidation(LightGbmDataset validation)
     {
-        NativeCall.Check(LightGbmNative.BoosterAddValidData(handle, validation.Handle), $"validation rows ({validation.RowCount})");
         validations.Add(validation);
+        NativeCall.Check(LightGbmNative.BoosterAddValidData(handle, validation.Handle), $"validation rows ({validation.RowCount})");
     }
 
     /// <summary>Trains one more round; false when no leaf can be split any more (the model then stays as it was).</summary>

@@ -104,6 +104,17 @@ public sealed class LightGbmFoldModel : IDisposable
         }
     }
 
+    /// <summary>Sets the learning rate of the rounds still to come (a promoted trial may run at another rate than its short rung).</summary>
+    public void ChangeLearningRate(double rate)
+    {
+        if (!(rate is > 0 and <= 1))
+        {
+            throw new ArgumentOutOfRangeException(nameof(rate), rate, "a learning rate lies in (0, 1]");
+        }
+
+        booster.Change($"learning_rate={rate.ToString("R", System.Globalization.CultureInfo.InvariantCulture)}");
+    }
+
     /// <summary>Predictions of the held-out rows and the test table, on the fitting scale, from the first <paramref name="rounds"/> rounds (all by default).</summary>
     public FoldPrediction Predict(int? rounds = null)
     {
