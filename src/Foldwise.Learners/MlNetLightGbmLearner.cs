@@ -29,8 +29,12 @@ public sealed class MlNetLightGbmLearner : IFoldLearner
 
     public string Family => FamilyNames.LightGbm;
 
-    public FoldPrediction Fit(FoldJob job, CancellationToken cancellation) =>
-        FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.LightGbm(Options(job)).Fit(train), cancellation);
+    public FoldPrediction Fit(FoldJob job, CancellationToken cancellation)
+    {
+        // The same native library as the native learner: its process-wide thread count must not change under those fits.
+        using var gate = Native.ThreadCountGate.Enter(job.Threads);
+        return FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.LightGbm(Options(job)).Fit(train), cancellation);
+    }
 
     internal static LightGbmRegressionTrainer.Options Options(FoldJob job)
     {

@@ -118,7 +118,7 @@ public sealed class NativeLightGbmTests
         using var train = LightGbmDataset.FromRows(inputs.Train, inputs.Labels, LightGbmParameters.For(job), reference: null, "the training rows");
 
         // When a booster is asked for with a leaf count LightGBM cannot use
-        var error = Assert.Throws<LightGbmException>(() => LightGbmBooster.Create(train, "objective=regression num_leaves=1 verbosity=-1"));
+        var error = Assert.Throws<LightGbmException>(() => LightGbmBooster.Create(train, "objective=regression num_leaves=1 num_threads=1 verbosity=-1"));
 
         // Then the error names the parameters and LightGBM's reason, which names the parameter
         Assert.Contains("num_leaves=1", error.Message);

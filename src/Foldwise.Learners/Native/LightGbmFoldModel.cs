@@ -35,6 +35,7 @@ public sealed class LightGbmFoldModel : IDisposable
     {
         FoldFitter.Check(FamilyNames.LightGbm, job);
         cancellation.ThrowIfCancellationRequested();
+        using var gate = ThreadCountGate.Enter(job.Threads);
         var inputs = FoldInputs.From(job);
         string parameters = LightGbmParameters.For(job);
         var train = LightGbmDataset.FromRows(inputs.Train, inputs.Labels, parameters, reference: null, $"the training rows of fold {job.Fold}");
@@ -82,6 +83,7 @@ public sealed class LightGbmFoldModel : IDisposable
     public void Continue(int rounds, CancellationToken cancellation)
     {
         ArgumentOutOfRangeException.ThrowIfNegative(rounds);
+        using var gate = ThreadCountGate.Enter(job.Threads);
         for (int i = 0; i < rounds; i++)
         {
             cancellation.ThrowIfCancellationRequested();
@@ -124,6 +126,7 @@ public sealed class LightGbmFoldModel : IDisposable
         }
 
         int use = rounds ?? 0;
+        using var gate = ThreadCountGate.Enter(job.Threads);
         return new FoldPrediction(
             Shift(booster.Predict(inputs.Validation, use, job.Threads, $"the held-out rows of fold {job.Fold}")),
             Shift(booster.Predict(inputs.Test, use, job.Threads, "the test table")));
