@@ -1,8 +1,10 @@
 using System.Globalization;
 using System.Text.Json;
+using Foldwise.Testing;
 
 namespace Foldwise.Cli.Tests;
 
+[Trait(Lane.Key, Lane.Slow)]
 public sealed class RunCommandTests : IDisposable
 {
     private readonly Workspace workspace = new();

@@ -1,9 +1,11 @@
 using System.Collections.Immutable;
+using System.Diagnostics;
 using System.Security.Cryptography;
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Coordination;
 using Foldwise.Core.Data;
 using Foldwise.Core.Definition;
+using Foldwise.Core.Events;
 using Foldwise.Core.Folds;
 using Foldwise.Core.Search;
 using Foldwise.Core.Spaces;
@@ -18,7 +20,7 @@ internal static class SearchSessions
     public static (FeatureTable Train, FeatureTable Test) Tables(int trainRows = 30, int testRows = 10) => (Table("train", trainRows, withTarget: true), Table("test", testRows, withTarget: false));
 
     public static CoordinatorSession Start(
-        TwoSiloCluster cluster, string name, (FeatureTable Train, FeatureTable Test) tables, int trials, MemoryRecorder recorder, CoordinatorOptions? leases = null)
+        TwoSiloCluster cluster, string name, (FeatureTable Train, FeatureTable Test) tables, int trials, MemoryRecorder recorder, CoordinatorOptions? leases = null, IProgress<SearchEvent>? events = null, ActivityContext search = default)
     {
         var trainBytes = TableCodec.Encode(tables.Train);
         var testBytes = TableCodec.Encode(tables.Test);
@@ -37,7 +39,7 @@ internal static class SearchSessions
         };
         var coordinator = new SearchCoordinator(definition, new CountingSchedule(), recorder, TimeProvider.System, leases);
         var manifest = new SearchManifest($"{name}-{Guid.NewGuid():N}", trainHash, testHash, 3, 1, [.. folds.FoldOfRow], "Rmsle");
-        var session = new CoordinatorSession(manifest, coordinator, recorder);
+        var session = new CoordinatorSession(manifest, coordinator, recorder, events, search);
         cluster.Coordinator.GetRequiredService<SessionRegistry>().Add(session);
         return session;
     }

@@ -48,6 +48,10 @@ public sealed class WorkerSettings : CommandSettings
     [Description("Passphrase of --cert. Default: the FOLDWISE_CERT_PASSPHRASE environment variable.")]
     public string? Passphrase { get; init; }
 
+    [CommandOption("--json")]
+    [Description("Print each event (joined, trial scored, lease lost, …) as one JSON object per line instead of sentences.")]
+    public bool Json { get; init; }
+
     public override ValidationResult Validate()
     {
         if (string.IsNullOrWhiteSpace(Join))

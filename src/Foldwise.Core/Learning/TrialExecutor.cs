@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using Foldwise.Core.Search;
 using Foldwise.Core.Spaces;
 
 namespace Foldwise.Core.Learning;
@@ -24,7 +25,7 @@ public sealed class TrialExecutor(IFoldLearner learner)
         {
             cancellation.ThrowIfCancellationRequested();
             var validation = folds.ValidationRows(f);
-            var job = new FoldJob(data, f, folds.TrainRows(f), validation, parameters, budget, seed + (1000 * f), threads);
+            var job = new FoldJob(data, f, folds.TrainRows(f), validation, parameters, budget, SearchSeeds.Fold(seed, f), threads);
             var prediction = learner.Fit(job, cancellation);
             if (prediction.Validation.Length != validation.Length || prediction.Test.Length != test.Length)
             {

@@ -1,10 +1,12 @@
 using System.Net;
 using System.Text.Json;
 using System.Text.RegularExpressions;
+using Foldwise.Testing;
 using Xunit.Abstractions;
 
 namespace Foldwise.Cli.Tests.Inspection;
 
+[Trait(Lane.Key, Lane.Slow)]
 public sealed partial class ReportPageTests(ITestOutputHelper output) : IDisposable
 {
     private readonly InspectedStore store = new(finished: true);

@@ -1,8 +1,10 @@
 using Foldwise.Cli.Tests.Processes;
+using Foldwise.Testing;
 
 namespace Foldwise.Cli.Tests.Machines;
 
 /// <summary><c>status HOST:PORT</c> asks a running coordinator process through its gateway, on loopback.</summary>
+[Trait(Lane.Key, Lane.Slow)]
 public sealed class LiveStatusTests
 {
     [Fact]

@@ -1,5 +1,7 @@
+using Foldwise.Testing;
 namespace Foldwise.Cli.Tests.Resume;
 
+[Trait(Lane.Key, Lane.Slow)]
 [Collection(ResumeProcesses.Name)]
 public sealed class ReproducibilityTests : IDisposable
 {

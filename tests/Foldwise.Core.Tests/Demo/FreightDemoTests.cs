@@ -1,5 +1,6 @@
 using Foldwise.Core.Data;
 using Foldwise.Core.Demo;
+using Foldwise.Testing;
 
 namespace Foldwise.Core.Tests.Demo;
 
@@ -21,6 +22,7 @@ public sealed class FreightDemoTests
     }
 
     [Fact]
+    [Trait(Lane.Key, Lane.Slow)]
     public void Makes_a_full_table_with_the_fields_character()
     {
         // Given the full demo

@@ -2,12 +2,13 @@ using Foldwise.Cluster.Coordination;
 using Foldwise.Cluster.Hosting;
 using Foldwise.Cluster.Telemetry;
 using Foldwise.Cluster.Workers;
+using Foldwise.Core.Events;
 using Foldwise.Learners;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.Hosting;
 using Microsoft.Extensions.Logging;
 
-namespace Foldwise.Cli.Running;
+namespace Foldwise.Tuning;
 
 /// <summary>
 /// The coordinator's silo with its local slots: a cluster of one unless workers join. Trials run through the
@@ -28,7 +29,8 @@ public sealed class EmbeddedCluster : IAsyncDisposable
 
     public TableCache? LocalTables => host.Services.GetService<TableCache>();
 
-    public static async Task<EmbeddedCluster> StartAsync(ClusterRole role, int slots, int? threads, CancellationToken cancellation)
+    /// <summary>Starts the silo; a networked one reports where it listens and, as they happen, silos joining and leaving.</summary>
+    public static async Task<EmbeddedCluster> StartAsync(ClusterRole role, int slots, int? threads, FoldwiseTelemetryOptions telemetry, IProgress<SearchEvent> events, CancellationToken cancellation)
     {
         var builder = Host.CreateApplicationBuilder([]);
         builder.Logging.ClearProviders();
@@ -40,23 +42,21 @@ public sealed class EmbeddedCluster : IAsyncDisposable
         builder.Services.Configure<HostOptions>(o => o.ShutdownTimeout = TimeSpan.FromSeconds(15));
         builder.UseOrleans(silo => silo.UseFoldwiseClustering(role));
         builder.Services.AddFoldwiseCoordinator();
-        builder.Services.AddFoldwiseTelemetry(FoldwiseTelemetryOptions.FromEnvironment());
+        builder.Services.AddFoldwiseTelemetry(telemetry);
         if (slots > 0)
         {
             builder.Services.AddFoldwiseWorker(
                 new WorkerOptions { Name = Environment.MachineName + "-coordinator", Slots = slots, ThreadsPerSlot = threads },
-                LearnerCatalog.BuiltIn);
+                LearnerCatalog.BuiltIn,
+                events);
         }
 
         var host = builder.Build();
         await host.StartAsync(cancellation);
         if (role.SiloPort != 0)
         {
-            // Networked: say how to join, and who comes and goes (one plain line each).
-            Console.Out.WriteLine($"Coordinator listening on {role.Advertise}:{role.SiloPort}" +
-                                  (role.Certificate is null ? " (no certificate: any machine that reaches the port can join)" : " (mutual TLS)") +
-                                  $"; workers join with: foldwise worker --join {role.Advertise}:{role.SiloPort}" + (role.Certificate is null ? "" : " --cert FILE"));
-            host.Services.GetRequiredService<ClusterMembers>().Changed += line => Console.Out.WriteLine($"cluster {line}");
+            events.Report(new CoordinatorListening(role.Advertise.ToString(), role.SiloPort, role.Certificate is not null));
+            host.Services.GetRequiredService<ClusterMembers>().Changed += change => events.Report(new ClusterChanged(change));
         }
 
         return new EmbeddedCluster(host);

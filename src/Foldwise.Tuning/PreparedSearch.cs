@@ -3,7 +3,7 @@ using Foldwise.Core.Definition;
 using Foldwise.Core.Folds;
 using Foldwise.Core.Screening;
 
-namespace Foldwise.Cli.Running;
+namespace Foldwise.Tuning;
 
 /// <summary>A search ready to run: screened, aligned tables with their hashes and encodings, the report and the fold plan.</summary>
 public sealed record PreparedSearch(

@@ -1,7 +1,7 @@
 using System.Collections.Immutable;
 using System.Globalization;
 
-namespace Foldwise.Cli.Running;
+namespace Foldwise.Tuning;
 
 /// <summary>
 /// Writes the test predictions under the header <c>&lt;id&gt;,predicted_&lt;target&gt;</c>, one row per test row in test

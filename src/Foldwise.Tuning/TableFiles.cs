@@ -1,7 +1,7 @@
 using System.Security.Cryptography;
 using Foldwise.Core.Data;
 
-namespace Foldwise.Cli.Running;
+namespace Foldwise.Tuning;
 
 /// <summary>The screened tables' encodings kept beside the store (OUT/tables/HASH.fwt), so resume needs no CSV.</summary>
 public static class TableFiles

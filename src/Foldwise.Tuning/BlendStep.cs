@@ -1,12 +1,13 @@
+using System.Diagnostics;
 using Foldwise.Cluster.Telemetry;
 using Foldwise.Core.Blending;
 using Foldwise.Core.Definition;
+using Foldwise.Core.Events;
 using Foldwise.Core.Metrics;
 using Foldwise.Core.Search;
 using Foldwise.Storage;
-using Spectre.Console;
 
-namespace Foldwise.Cli.Running;
+namespace Foldwise.Tuning;
 
 /// <summary>
 /// The final stage: pools the best full-budget trials of each family, solves the weights on their out-of-fold
@@ -18,12 +19,13 @@ public static class BlendStep
 
     /// <summary>
     /// <paramref name="abandon"/> is checked before the solve and again before anything is written, so an abandoned
-    /// blend leaves the previous prediction file and blend record as they were.
+    /// blend leaves the previous prediction file and blend record as they were. Its span is a child of
+    /// <paramref name="search"/> (the search's span) when given.
     /// </summary>
-    public static BlendSummary Run(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, IAnsiConsole console, BlendOptions? options = null, CancellationToken abandon = default)
+    public static BlendSummary Run(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, IProgress<SearchEvent> events, BlendOptions? options = null, ActivityContext search = default, CancellationToken abandon = default)
     {
         options ??= definition.Blend;
-        using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.BlendSpan);
+        using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.BlendSpan, ActivityKind.Internal, search);
         var metric = Metric.For(definition.Metric);
         var trials = store.LoadTrials();
         var pool = BlendPool.Select(trials, options.Pool, definition.Schedule.FullBudget);
@@ -32,7 +34,7 @@ public static class BlendStep
             // No candidate reached the full budget (a very small trial budget): blend what went furthest.
             int furthest = trials.Where(t => t.State == TrialState.Done).Max(t => t.Budget);
             pool = BlendPool.Select(trials, options.Pool, furthest);
-            console.MarkupLine($"[yellow]No trial reached the full {definition.Schedule.FullBudget} rounds; blending trials at {furthest} rounds.[/]");
+            events.Report(new BlendFellBack(definition.Schedule.FullBudget, furthest));
         }
 
         var vectors = pool.Select(t => store.LoadVectors(t.Id) ?? throw new InvalidOperationException($"trial {t.Id} is done but its predictions are missing from the store")).ToList();
@@ -52,8 +54,7 @@ public static class BlendStep
         store.SaveBlend(result.Summary);
         span?.SetTag("foldwise.blend.mode", DefinitionWords.Of(result.Summary.Mode)).SetTag("foldwise.blend.pool", pool.Count)
             .SetTag("foldwise.blend.nested", result.Summary.NestedScore).SetTag("foldwise.blend.in_sample", result.Summary.InSampleScore);
-        Output.BlendView.Render(console, result.Summary, metric, trials);
-        console.MarkupLine($"Wrote [bold]{Markup.Escape(path)}[/]: {header.TestIds.Length:N0} predictions.");
+        events.Report(new BlendSolved(result.Summary, definition.Metric, [.. trials], path, header.TestIds.Length));
         return result.Summary;
     }
 }

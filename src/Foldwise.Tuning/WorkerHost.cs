@@ -1,19 +1,21 @@
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Hosting;
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Cluster.Workers;
+using Foldwise.Core.Events;
 using Foldwise.Learners;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.Hosting;
 using Microsoft.Extensions.Logging;
 
-namespace Foldwise.Cli.Running;
+namespace Foldwise.Tuning;
 
 /// <summary>
 /// A worker process: a silo with the worker role (no coordinator grains) that joins the coordinator and runs
 /// slots until stopped. When the coordinator goes away (restart, sleep, network) the silo is torn down and a
 /// fresh one joins again: a development-clustering cluster dies with its primary, so rejoining is the only way back.
 /// </summary>
-public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWriter output)
+public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgress<SearchEvent> events)
 {
     /// <summary>How long the coordinator may stay unreachable before this worker starts over. Default 20 s.</summary>
     public TimeSpan LostAfter { get; init; } = TimeSpan.FromSeconds(20);
@@ -22,16 +24,20 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
     public TimeSpan RetryPause { get; init; } = TimeSpan.FromSeconds(3);
 
     /// <summary>
-    /// Called before a new attempt to join; <see cref="FreshProcess.Restart"/> in the real command, so each attempt
+    /// Called before a new attempt to join; the command line's fresh start (an exec of itself), so each attempt
     /// starts in a clean process. If it returns, the next attempt is made in this process.
     /// </summary>
     public Action<int>? StartOver { get; init; }
+
+    /// <summary>Where this worker's traces and metrics go. Default: nowhere.</summary>
+    public FoldwiseTelemetryOptions Telemetry { get; init; } = new();
 
     /// <summary>Attempts made before this process started (a fresh process continues the count).</summary>
     public int EarlierAttempts { get; init; }
 
     public async Task RunAsync(CancellationToken stopping)
     {
+        events.Report(new WorkerStarting(options.Name, role.Join?.ToString() ?? "", role.Advertise.ToString(), role.Certificate is not null));
         int attempt = EarlierAttempts;
         while (!stopping.IsCancellationRequested)
         {
@@ -40,11 +46,11 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
             try
             {
                 await host.StartAsync(stopping);
-                output.WriteLine($"Joined the cluster at {role.Join} as {options.Name} with {options.Slots} slot(s), {options.Threads} thread(s) each");
+                events.Report(new WorkerJoined(role.Join?.ToString() ?? "", options.Name, options.Slots, options.Threads));
                 string why = await WatchAsync(host, stopping);
                 if (!stopping.IsCancellationRequested)
                 {
-                    output.WriteLine($"Lost the cluster ({why}); joining again");
+                    events.Report(new WorkerLostCluster(why));
                 }
             }
             catch (OperationCanceledException) when (stopping.IsCancellationRequested)
@@ -53,7 +59,7 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
             }
             catch (Exception e) when (e is not OperationCanceledException)
             {
-                output.WriteLine($"Cannot join {role.Join} (attempt {attempt}): {FirstLine(e)}; retrying in {RetryPause.TotalSeconds:F0} s");
+                events.Report(new WorkerJoinFailed(role.Join?.ToString() ?? "", attempt, FirstLine(e), RetryPause));
             }
 
             await StopQuietly(host);
@@ -65,7 +71,7 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
             }
         }
 
-        output.WriteLine("Worker stopped");
+        events.Report(new WorkerStopped());
     }
 
     private IHost Build()
@@ -80,11 +86,10 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
             builder.Logging.AddSimpleConsole(o => o.SingleLine = true).SetMinimumLevel(level);
         }
 
-        // One line per trial this worker runs, whatever the log level.
-        builder.Logging.AddProvider(new TrialLines(output));
         builder.Services.Configure<HostOptions>(o => o.ShutdownTimeout = TimeSpan.FromSeconds(10));
         builder.UseOrleans(silo => silo.UseFoldwiseClustering(role));
-        builder.Services.AddFoldwiseWorker(options, LearnerCatalog.BuiltIn);
+        builder.Services.AddFoldwiseWorker(options, LearnerCatalog.BuiltIn, events);
+        builder.Services.AddFoldwiseTelemetry(Telemetry);
         builder.Services.ExcludeCoordinatorGrains();
         // Registered after UseOrleans so it replaces Orleans' handler, which would end the whole process.
         builder.Services.AddSingleton<IFatalErrorHandler, StopSiloOnFatalError>();
