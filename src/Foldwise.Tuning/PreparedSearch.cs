@@ -5,14 +5,10 @@ using Foldwise.Core.Screening;
 
 namespace Foldwise.Tuning;
 
-/// <summary>A search ready to run: screened, aligned tables with their hashes and encodings, the report and the fold plan.</summary>
+/// <summary>A search ready to run: screened, aligned tables, the report and the fold plan (<see cref="TableFiles"/> encodes the tables).</summary>
 public sealed record PreparedSearch(
     SearchDefinition Definition,
     FeatureTable Train,
     FeatureTable Test,
-    byte[] TrainBytes,
-    byte[] TestBytes,
-    string TrainHash,
-    string TestHash,
     ScreeningReport Screening,
     FoldPlan Folds);

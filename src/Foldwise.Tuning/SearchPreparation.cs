@@ -1,5 +1,4 @@
 using System.Diagnostics;
-using System.Security.Cryptography;
 using Foldwise.Core.Data;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Events;
@@ -41,10 +40,6 @@ public static class SearchPreparation
         }
 
         var folds = StratifiedFoldPlanner.Create([.. screenedTrain.Target.Select(metric.Forward)], definition.Folds, new SearchSeeds(definition.Seed).FoldPlan);
-        byte[] trainBytes = TableCodec.Encode(screenedTrain);
-        byte[] testBytes = TableCodec.Encode(screenedTest);
-        return new PreparedSearch(
-            definition, screenedTrain, screenedTest, trainBytes, testBytes,
-            Convert.ToHexStringLower(SHA256.HashData(trainBytes)), Convert.ToHexStringLower(SHA256.HashData(testBytes)), report, folds);
+        return new PreparedSearch(definition, screenedTrain, screenedTest, report, folds);
     }
 }

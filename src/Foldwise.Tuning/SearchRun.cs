@@ -44,16 +44,16 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
 
         var prepared = SearchPreparation.Prepare(definition, events);
         Directory.CreateDirectory(outDir);
-        TableFiles.Write(outDir, prepared.TrainHash, prepared.TrainBytes);
-        TableFiles.Write(outDir, prepared.TestHash, prepared.TestBytes);
+        string trainHash = TableFiles.Write(outDir, prepared.Train);
+        string testHash = TableFiles.Write(outDir, prepared.Test);
         using var store = SearchStore.Create(storePath);
         var header = new SearchHeader
         {
             SearchId = $"{definition.Name}-{DateTimeOffset.UtcNow:yyyyMMddHHmmss}",
             Definition = definition,
             Folds = prepared.Folds,
-            TrainHash = prepared.TrainHash,
-            TestHash = prepared.TestHash,
+            TrainHash = trainHash,
+            TestHash = testHash,
             TrainIds = prepared.Train.Ids,
             TestIds = prepared.Test.Ids,
             TrainTarget = prepared.Train.Target,
@@ -61,7 +61,7 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
         };
         store.SaveHeader(header);
         store.SaveScreening(prepared.Screening);
-        return await RunAsync(store, header, definition, prepared.Train, prepared.Test, prepared.TrainBytes, prepared.TestBytes, outDir, slots, threads, stopping, cancellation);
+        return await RunAsync(store, header, definition, prepared.Train, prepared.Test, outDir, slots, threads, stopping, cancellation);
     }
 
     /// <summary>
@@ -87,15 +87,15 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
             return new SearchResult(SearchEnding.Blended, header.SearchId, outDir, blend);
         }
 
-        var (train, trainBytes) = TableFiles.Read(outDir, header.TrainHash, "training");
-        var (test, testBytes) = TableFiles.Read(outDir, header.TestHash, "test");
+        var train = TableFiles.Read(outDir, header.TrainHash, "training");
+        var test = TableFiles.Read(outDir, header.TestHash, "test");
         var before = store.LoadTrials();
         events.Report(new SearchResumed(
             header.SearchId,
             before.Count(t => t.State == TrialState.Done),
             before.Count(t => t.State is TrialState.Running or TrialState.Queued),
             TimeSpan.FromSeconds(header.SpentSeconds)));
-        return await RunAsync(store, header, definition, train, test, trainBytes, testBytes, outDir, slots, threads, stopping, cancellation);
+        return await RunAsync(store, header, definition, train, test, outDir, slots, threads, stopping, cancellation);
     }
 
     internal async Task<SearchResult> RunAsync(
@@ -104,8 +104,6 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
         SearchDefinition definition,
         FeatureTable train,
         FeatureTable test,
-        byte[] trainBytes,
-        byte[] testBytes,
         string outDir,
         int slots,
         int? threads,
@@ -140,7 +138,7 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
             var span = new SearchSpan(header.SearchId, definition.Name);
             try
             {
-                return await RunTrialsAndBlendAsync(store, header, definition, coordinator, manifest, cluster, span, train, test, trainBytes, testBytes, outDir, stopping, linked.Token);
+                return await RunTrialsAndBlendAsync(store, header, definition, coordinator, manifest, cluster, span, train, test, outDir, stopping, linked.Token);
             }
             finally
             {
@@ -159,16 +157,14 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
         SearchSpan span,
         FeatureTable train,
         FeatureTable test,
-        byte[] trainBytes,
-        byte[] testBytes,
         string outDir,
         SearchStopping stopping,
         CancellationToken abandon)
     {
         try
         {
-            cluster.Shelf.Put(header.TrainHash, trainBytes);
-            cluster.Shelf.Put(header.TestHash, testBytes);
+            cluster.Shelf.Put(header.TrainHash, TableFiles.PathOf(outDir, header.TrainHash));
+            cluster.Shelf.Put(header.TestHash, TableFiles.PathOf(outDir, header.TestHash));
             cluster.LocalTables?.Seed(header.TrainHash, train);
             cluster.LocalTables?.Seed(header.TestHash, test);
             var session = new CoordinatorSession(manifest, coordinator, store, events, span.Context);

@@ -8,26 +8,31 @@ public static class TableFiles
 {
     public static string PathOf(string outDir, string hash) => Path.Combine(outDir, "tables", hash + ".fwt");
 
-    /// <summary>Writes through a partial file and a rename, so a kill mid-write never leaves a truncated table under its hash.</summary>
-    public static void Write(string outDir, string hash, byte[] bytes)
+    /// <summary>
+    /// Encodes the table straight into a partial file, hashing as it writes, and renames it to its hash, so a kill
+    /// mid-write never leaves a truncated table under its hash and the encoding is never one array. Returns the hash.
+    /// </summary>
+    public static string Write(string outDir, FeatureTable table)
     {
-        string path = PathOf(outDir, hash);
-        Directory.CreateDirectory(Path.GetDirectoryName(path)!);
-        string partial = path + ".part";
-        using (var stream = new FileStream(partial, FileMode.Create, FileAccess.Write, FileShare.None))
+        string folder = Path.Combine(outDir, "tables");
+        Directory.CreateDirectory(folder);
+        string partial = Path.Combine(folder, "encoding." + Environment.ProcessId + ".part");
+        string hash;
+        using (var stream = new FileStream(partial, FileMode.Create, FileAccess.Write, FileShare.None, bufferSize: 1))
         {
-            stream.Write(bytes);
+            hash = TableCodec.Encode(table, stream);
             stream.Flush(flushToDisk: true);
         }
 
-        File.Move(partial, path, overwrite: true);
+        File.Move(partial, PathOf(outDir, hash), overwrite: true);
+        return hash;
     }
 
     /// <summary>
     /// Reads a stored table back and checks it is the one the search was screened into (same SHA-256);
     /// a missing or altered file fails with its path and how to recover.
     /// </summary>
-    public static (FeatureTable Table, byte[] Bytes) Read(string outDir, string hash, string role)
+    public static FeatureTable Read(string outDir, string hash, string role)
     {
         string path = PathOf(outDir, hash);
         if (!File.Exists(path))
@@ -38,8 +43,8 @@ public static class TableFiles
                 "or start the search again from its CSV files with 'foldwise run' into a new --out folder");
         }
 
-        byte[] bytes = File.ReadAllBytes(path);
-        string actual = Convert.ToHexStringLower(SHA256.HashData(bytes));
+        using var file = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, bufferSize: 1 << 16);
+        string actual = Convert.ToHexStringLower(SHA256.HashData(file));
         if (!string.Equals(actual, hash, StringComparison.Ordinal))
         {
             throw new InputException(
@@ -48,6 +53,7 @@ public static class TableFiles
                 "Restore the original file, or start the search again with 'foldwise run' into a new --out folder");
         }
 
-        return (TableCodec.Decode(bytes, path), bytes);
+        file.Position = 0;
+        return TableCodec.Decode(file, path);
     }
 }
