@@ -114,7 +114,7 @@ public sealed class NativeLightGbmTests
     {
         // Given a Dataset of a fold's rows
         var job = TinyTables.Job(Data, FamilyNames.LightGbm);
-        var inputs = FoldInputs.From(job);
+        var inputs = NativeFoldRows.From(job);
         using var train = LightGbmDataset.FromRows(inputs.Train, inputs.Labels, LightGbmParameters.For(job), reference: null, "the training rows");
 
         // When a booster is asked for with a leaf count LightGBM cannot use

@@ -11,12 +11,12 @@ namespace Foldwise.Learners.Native;
 public sealed class LightGbmFoldModel : IDisposable
 {
     private readonly FoldJob job;
-    private readonly FoldInputs inputs;
+    private readonly NativeFoldRows inputs;
     private readonly LightGbmBooster booster;
     private readonly double[]? actual;
     private readonly List<double> roundScores = [];
 
-    private LightGbmFoldModel(FoldJob job, FoldInputs inputs, LightGbmBooster booster, double[]? actual)
+    private LightGbmFoldModel(FoldJob job, NativeFoldRows inputs, LightGbmBooster booster, double[]? actual)
     {
         this.job = job;
         this.inputs = inputs;
@@ -36,7 +36,7 @@ public sealed class LightGbmFoldModel : IDisposable
         FoldFitter.Check(FamilyNames.LightGbm, job);
         cancellation.ThrowIfCancellationRequested();
         using var gate = ThreadCountGate.Enter(job.Threads);
-        var inputs = FoldInputs.From(job);
+        var inputs = NativeFoldRows.From(job);
         string parameters = LightGbmParameters.For(job);
         var train = LightGbmDataset.FromRows(inputs.Train, inputs.Labels, parameters, reference: null, $"the training rows of fold {job.Fold}");
         LightGbmBooster booster;
