@@ -52,6 +52,10 @@ public sealed class WorkerSettings : CommandSettings
     [Description("Print each event (joined, trial scored, lease lost, …) as one JSON object per line instead of sentences.")]
     public bool Json { get; init; }
 
+    [CommandOption("--verbose")]
+    [Description("Log information messages of the cluster to stderr too, not only warnings and errors.")]
+    public bool Verbose { get; init; }
+
     public override ValidationResult Validate()
     {
         if (string.IsNullOrWhiteSpace(Join))
