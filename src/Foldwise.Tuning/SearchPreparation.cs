@@ -41,6 +41,13 @@ public static class SearchPreparation
         }
 
         var folds = StratifiedFoldPlanner.Create([.. screenedTrain.Target.Select(metric.Forward)], definition.Folds, new SearchSeeds(definition.Seed).FoldPlan);
-        return new PreparedSearch(definition, screenedTrain, screenedTest, report, folds);
+        int smallestFold = Enumerable.Range(0, folds.FoldCount).Min(f => folds.TrainRows(f).Length);
+        var (fitted, narrowed) = LeafSizeFit.ToFolds(definition, smallestFold);
+        if (!narrowed.IsEmpty)
+        {
+            events.Report(new LeafSizesNarrowed(narrowed));
+        }
+
+        return new PreparedSearch(fitted, screenedTrain, screenedTest, report, folds);
     }
 }

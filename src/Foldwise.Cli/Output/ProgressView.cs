@@ -40,6 +40,13 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
                 }
 
                 break;
+            case LeafSizesNarrowed l:
+                foreach (string change in l.Changes)
+                {
+                    console.MarkupLine($"  {Markup.Escape(change)}");
+                }
+
+                break;
             case ColumnsScreened s:
                 console.MarkupLine(
                     $"Screening kept {s.Report.Kept.Length:N0} of {s.Report.ColumnsRead:N0} columns: dropped {s.Report.Count(Core.Screening.DropReason.Constant):N0} constant, " +
