@@ -31,9 +31,10 @@ public sealed class LinearLearner : IFoldLearner
     public FoldPrediction Fit(FoldJob job, CancellationToken cancellation)
     {
         FoldFitter.Check(Family, job);
-        MissingCells.Refuse(Family, job);
-        var scaling = ColumnScaling.Learn(job.Data.Train, job.TrainRows);
-        var prepared = job with { Data = job.Data with { Train = scaling.Apply(job.Data.Train), Test = scaling.Apply(job.Data.Test) } };
+        // SDCA trains a NaN cell as 0 and predicts NaN for it (MissingCellTests): it scales the fold's imputed inputs.
+        var inputs = job.Features.Imputed(job.TrainRows);
+        var scaling = ColumnScaling.Learn(inputs.Train, job.TrainRows);
+        var prepared = job with { Inputs = new FoldInputs(scaling.Apply(inputs.Train), scaling.Apply(inputs.Test)) };
         return FoldFitter.Fit(Family, prepared, (ml, train) => ml.Regression.Trainers.Sdca(Options(job)).Fit(train), cancellation);
     }
 

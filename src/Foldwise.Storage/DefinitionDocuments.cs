@@ -1,3 +1,4 @@
+using Foldwise.Core.Data;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Screening;
 using Foldwise.Core.Spaces;
@@ -25,6 +26,10 @@ internal static class DefinitionDocuments
             ["test"] = d.Data.Test,
             ["idColumn"] = d.Data.IdColumn,
             ["targetColumn"] = d.Data.TargetColumn,
+            ["missingWords"] = Array(d.Data.Rules.MissingWords),
+            ["missingWordsStated"] = d.Data.Rules.MissingWordsStated,
+            ["categories"] = Array(d.Data.Rules.Categories),
+            ["ignore"] = Array(d.Data.Rules.Ignored),
         },
         ["metric"] = StoreWords.Metrics.Word(d.Metric),
         ["folds"] = d.Folds,
@@ -65,7 +70,10 @@ internal static class DefinitionDocuments
         return new SearchDefinition
         {
             Name = String(doc, "name", Owner),
-            Data = new DataSource(String(data, "train", Owner), String(data, "test", Owner), String(data, "idColumn", Owner), String(data, "targetColumn", Owner)),
+            Data = new DataSource(String(data, "train", Owner), String(data, "test", Owner), String(data, "idColumn", Owner), String(data, "targetColumn", Owner))
+            {
+                Rules = Rules(data),
+            },
             Metric = StoreWords.Metrics.Value(String(doc, "metric", Owner)),
             Folds = Int(doc, "folds", Owner),
             Seed = Int(doc, "seed", Owner),
@@ -94,4 +102,10 @@ internal static class DefinitionDocuments
         });
         return new FamilySearch(String(f, "family", Owner), new ParameterSpace([.. ranges]));
     }
+
+    // Stores written before tables could hold gaps and text have none of these fields: they read as the defaults.
+    private static TableRules Rules(BsonDocument data) => data.ContainsKey("missingWords")
+        ? new TableRules(
+            Strings(data, "missingWords", Owner), Bool(data, "missingWordsStated", Owner), Strings(data, "categories", Owner), Strings(data, "ignore", Owner))
+        : TableRules.Default;
 }

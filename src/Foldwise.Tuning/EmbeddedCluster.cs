@@ -6,7 +6,6 @@ using Foldwise.Core.Events;
 using Foldwise.Learners;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.Hosting;
-using Microsoft.Extensions.Logging;
 
 namespace Foldwise.Tuning;
 
@@ -33,11 +32,7 @@ public sealed class EmbeddedCluster : IAsyncDisposable
     public static async Task<EmbeddedCluster> StartAsync(ClusterRole role, int slots, int? threads, FoldwiseTelemetryOptions telemetry, IProgress<SearchEvent> events, CancellationToken cancellation)
     {
         var builder = Host.CreateApplicationBuilder([]);
-        builder.Logging.ClearProviders();
-        if (Environment.GetEnvironmentVariable("FOLDWISE_LOG") is { Length: > 0 } level && Enum.TryParse<LogLevel>(level, true, out var min))
-        {
-            builder.Logging.AddSimpleConsole(o => o.SingleLine = true).SetMinimumLevel(min);
-        }
+        ConsoleLogging.Configure(builder.Logging, role.Verbose);
 
         builder.Services.Configure<HostOptions>(o => o.ShutdownTimeout = TimeSpan.FromSeconds(15));
         builder.UseOrleans(silo => silo.UseFoldwiseClustering(role));

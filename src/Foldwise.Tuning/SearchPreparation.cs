@@ -19,8 +19,9 @@ public static class SearchPreparation
     {
         var metric = Metric.For(definition.Metric);
         var clock = Stopwatch.StartNew();
-        var train = CsvTableReader.ReadTraining(definition.Data.Train, definition.Data.IdColumn, definition.Data.TargetColumn, metric);
-        var rawTest = CsvTableReader.ReadTest(definition.Data.Test, definition.Data.IdColumn, definition.Data.TargetColumn);
+        var rules = definition.Data.Rules;
+        var train = CsvTableReader.ReadTraining(definition.Data.Train, definition.Data.IdColumn, definition.Data.TargetColumn, metric, rules);
+        var rawTest = CsvTableReader.ReadTest(definition.Data.Test, definition.Data.IdColumn, definition.Data.TargetColumn, rules, train);
         var (test, extra) = TableAlignment.AlignTest(train, rawTest);
         if (train.RowCount < 2 * definition.Folds)
         {
@@ -30,16 +31,23 @@ public static class SearchPreparation
         events.Report(new TablesRead(
             definition.Data.Train, train.RowCount, train.FeatureCount, train.Density, definition.Data.Test, test.RowCount, clock.Elapsed, [.. extra]));
 
-        var report = ColumnScreen.Screen(train, definition.Screening);
+        var report = TestLevelCount.Add(ColumnScreen.Screen(train, definition.Screening), train, test);
         var screenedTrain = ColumnScreen.Apply(report, train);
         var screenedTest = ColumnScreen.Apply(report, test);
         events.Report(new ColumnsScreened(report, definition.Screening.MinNonZero));
-        if (report.Kept.Length == 0)
+        if (report.Kept.Length == 0 && report.Categories.Length == 0)
         {
             throw new InputException(definition.Data.Train, "screening dropped every feature column; nothing is left to learn from");
         }
 
         var folds = StratifiedFoldPlanner.Create([.. screenedTrain.Target.Select(metric.Forward)], definition.Folds, new SearchSeeds(definition.Seed).FoldPlan);
-        return new PreparedSearch(definition, screenedTrain, screenedTest, report, folds);
+        int smallestFold = Enumerable.Range(0, folds.FoldCount).Min(f => folds.TrainRows(f).Length);
+        var (fitted, narrowed) = LeafSizeFit.ToFolds(definition, smallestFold);
+        if (!narrowed.IsEmpty)
+        {
+            events.Report(new LeafSizesNarrowed(narrowed));
+        }
+
+        return new PreparedSearch(fitted, screenedTrain, screenedTest, report, folds);
     }
 }

@@ -43,6 +43,7 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
         }
 
         var prepared = SearchPreparation.Prepare(definition, events);
+        definition = prepared.Definition;
         Directory.CreateDirectory(outDir);
         string trainHash = TableFiles.Write(outDir, prepared.Train);
         string testHash = TableFiles.Write(outDir, prepared.Test);

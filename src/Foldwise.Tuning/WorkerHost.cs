@@ -77,14 +77,7 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
     private IHost Build()
     {
         var builder = Host.CreateApplicationBuilder([]);
-        builder.Logging.ClearProviders();
-        var level = Environment.GetEnvironmentVariable("FOLDWISE_LOG") is { Length: > 0 } text && Enum.TryParse<LogLevel>(text, true, out var parsed)
-            ? parsed
-            : LogLevel.None;
-        if (level != LogLevel.None)
-        {
-            builder.Logging.AddSimpleConsole(o => o.SingleLine = true).SetMinimumLevel(level);
-        }
+        ConsoleLogging.Configure(builder.Logging, role.Verbose);
 
         builder.Services.Configure<HostOptions>(o => o.ShutdownTimeout = TimeSpan.FromSeconds(10));
         builder.UseOrleans(silo => silo.UseFoldwiseClustering(role));

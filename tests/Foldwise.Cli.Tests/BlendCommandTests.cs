@@ -45,7 +45,7 @@ public sealed class BlendCommandTests(FinishedSearch search) : IClassFixture<Fin
     {
         var blend = CliHarness.Run("blend", search.Store, "--mode", "nonneg");
 
-        Assert.Equal(1, blend.ExitCode);
+        Assert.Equal(ExitCodes.Usage, blend.ExitCode);
         Assert.Contains("--mode 'nonneg' is not one of simplex, non_negative, greedy ('nonneg' is a retired name; did you mean non_negative?)", blend.Output);
     }
 

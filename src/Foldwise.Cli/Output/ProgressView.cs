@@ -40,10 +40,23 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
                 }
 
                 break;
+            case LeafSizesNarrowed l:
+                foreach (string change in l.Changes)
+                {
+                    console.MarkupLine($"  {Markup.Escape(change)}");
+                }
+
+                break;
             case ColumnsScreened s:
                 console.MarkupLine(
                     $"Screening kept {s.Report.Kept.Length:N0} of {s.Report.ColumnsRead:N0} columns: dropped {s.Report.Count(Core.Screening.DropReason.Constant):N0} constant, " +
-                    $"{s.Report.Count(Core.Screening.DropReason.Duplicate):N0} duplicate, {s.Report.Count(Core.Screening.DropReason.TooFewNonZero):N0} with fewer than {s.MinNonZero} non-zero cells");
+                    $"{s.Report.Count(Core.Screening.DropReason.Duplicate):N0} duplicate, {s.Report.Count(Core.Screening.DropReason.TooFewNonZero):N0} with fewer than {s.MinNonZero} non-zero cells" +
+                    $"{DropCount(s.Report, Core.Screening.DropReason.AllMissing, "all missing")}{DropCount(s.Report, Core.Screening.DropReason.NearlyUnique, "nearly unique text")}");
+                foreach (string line in Core.Screening.ColumnNotes.Lines(s.Report))
+                {
+                    console.MarkupLine("  " + Markup.Escape(line));
+                }
+
                 break;
             case SearchResumed r:
                 console.MarkupLine($"Resuming [bold]{Markup.Escape(r.SearchId)}[/]: {r.Done} trial(s) done, {r.ToRunAgain} to run again, " +
@@ -133,4 +146,7 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
         StopReason.Requested => "stopped by request",
         _ => "running",
     };
+
+    private static string DropCount(Core.Screening.ScreeningReport report, Core.Screening.DropReason reason, string what) =>
+        report.Count(reason) > 0 ? $", {report.Count(reason):N0} {what}" : "";
 }

@@ -49,7 +49,7 @@ public sealed class TableCodecTests
         var bytes = TableCodec.Encode(Sample());
 
         Assert.Equal("FWTB"u8.ToArray(), bytes[..4]);
-        Assert.Equal(1, BitConverter.ToInt32(bytes, 4));
+        Assert.Equal(2, BitConverter.ToInt32(bytes, 4));
     }
 
     [Fact]
