@@ -8,7 +8,7 @@ namespace Foldwise.Learners;
 /// <summary>
 /// ML.NET's FastForest regression (a random forest), budget = trees. Every tree fits its own seeded sample of
 /// <c>row_fraction</c> of the rows; the prediction is the trees' mean.
-/// Refuses missing cells: ML.NET trains them as 0 but scores them otherwise (MissingCellTests).
+/// Reads the fold's median-imputed inputs: ML.NET trains a NaN cell as 0 but scores it otherwise (MissingCellTests).
 /// </summary>
 public sealed class ForestLearner : IFoldLearner
 {

@@ -8,7 +8,7 @@ namespace Foldwise.Learners;
 /// <summary>
 /// ML.NET's generalized additive model regression, budget = boosting iterations: the prediction is a sum of one
 /// step function per feature, each boosted from single-feature trees.
-/// Refuses missing cells: ML.NET trains them as 0 but scores them otherwise (MissingCellTests).
+/// Reads the fold's median-imputed inputs: ML.NET trains a NaN cell as 0 but scores it otherwise (MissingCellTests).
 /// </summary>
 public sealed class GamLearner : IFoldLearner
 {

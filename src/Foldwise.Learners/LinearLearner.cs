@@ -8,7 +8,7 @@ namespace Foldwise.Learners;
 
 /// <summary>
 /// ML.NET's SDCA regression with squared loss and an L2 penalty (ridge), budget = passes over the fold's training
-/// rows, on inputs prepared from those rows only (<see cref="ColumnScaling"/>). Refuses missing cells. SDCA's L1
+/// rows, on inputs prepared from those rows only (<see cref="ColumnScaling"/>), after median imputation (SDCA predicts NaN for a NaN cell). SDCA's L1
 /// option is left at 0: its fits matched no mapping onto scikit-learn's ElasticNet penalties (seen 2026-12-05).
 /// </summary>
 public sealed class LinearLearner : IFoldLearner
