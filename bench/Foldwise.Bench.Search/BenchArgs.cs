@@ -1,18 +1,25 @@
 using System.Globalization;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Demo;
+using Foldwise.Core.Learning;
 using Foldwise.Core.Spaces;
 
 internal sealed record BenchArgs(
     string Part, DemoSize Size, int[] SeedList, int RandomTrials, int AshaTrials, ScheduleKind Schedule,
-    int FirstRung, int FullBudget, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe, ProposerKind Proposer, bool Ladder, int DrawOffset, int Brackets)
+    int FirstRung, int FullBudget, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe, ProposerKind Proposer, bool Ladder, int DrawOffset, int Brackets, RoundStopping? Stopping, CsvPair? Csv)
 {
-    public string RandomFile(int seed) => $"random-{Size}-{Family}-r{FullBudget}-seed{seed}.tsv".ToLowerInvariant();
+    /// <summary>The table's name in traces and headings: the demo's size, or the CSV training file's name.</summary>
+    public string TableLabel => Csv is { } csv ? Path.GetFileNameWithoutExtension(csv.Train) : Size.ToString();
+
+    public string RandomFile(int seed) => $"random-{TableLabel}-{Family}-r{FullBudget}{StopLabel}-seed{seed}.tsv".ToLowerInvariant();
+
+    /// <summary>Part of a trace's name: empty without stopping (the older traces' names), else the stopping rule.</summary>
+    public string StopLabel => Stopping is { } s ? string.Create(CultureInfo.InvariantCulture, $"-stop{s.MinimumPatience}p{s.PatienceShare}") : "";
 
     /// <summary>What proposes the scheduled search's new candidates: TPE, independent or joint, or random draws (a control).</summary>
     public string ProposerLabel => Proposer == ProposerKind.Random ? "random" : $"TPE {(JointTpe ? "joint" : "independent")}, {(Ladder ? "ladder" : "top budget")}";
 
-    public string AshaFile(int seed) => $"{Schedule}-{(Proposer == ProposerKind.Random ? "random" : (JointTpe ? "tpejoint" : "tpe1d") + (Ladder ? "ladder" : ""))}-{Size}-{Family}-r{FirstRung}-{FullBudget}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}{(DrawOffset != 0 ? $"-d{DrawOffset}" : "")}{(Brackets > 1 ? $"-b{Brackets}" : "")}-seed{seed}.tsv".ToLowerInvariant();
+    public string AshaFile(int seed) => $"{Schedule}-{(Proposer == ProposerKind.Random ? "random" : (JointTpe ? "tpejoint" : "tpe1d") + (Ladder ? "ladder" : ""))}-{TableLabel}-{Family}-r{FirstRung}-{FullBudget}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}{(DrawOffset != 0 ? $"-d{DrawOffset}" : "")}{(Brackets > 1 ? $"-b{Brackets}" : "")}{StopLabel}-seed{seed}.tsv".ToLowerInvariant();
 
     public static BenchArgs Parse(string[] args)
     {
@@ -65,6 +72,13 @@ internal sealed record BenchArgs(
                 var other => throw new ArgumentException($"--fit must be ladder or top, not '{other}'"),
             },
             Int("--draw-offset", "1000"),
-            Int("--brackets", "1"));
+            Int("--brackets", "1"),
+            Get("--stopping", "on") switch
+            {
+                "on" => RoundStopping.Default,
+                "off" => null,
+                var other => throw new ArgumentException($"--stopping must be on or off, not '{other}'"),
+            },
+            Get("--train", "") is { Length: > 0 } train ? new CsvPair(train, Get("--test", ""), Get("--id", "id"), Get("--target", "")) : null);
     }
 }

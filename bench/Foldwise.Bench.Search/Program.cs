@@ -19,21 +19,23 @@ using Foldwise.Core.Folds;
 using Foldwise.Core.Learning;
 using Foldwise.Core.Metrics;
 using Foldwise.Core.Screening;
+using Foldwise.Csv;
 
 var options = BenchArgs.Parse(args);
 Directory.CreateDirectory(options.Out);
 if (options.Part != "report")
 {
-    var (rawTrain, rawTest) = FreightDemo.Generate(options.Size, seed: 7);
+    var (rawTrain, rawTest) = options.Csv is { } csv ? ReadCsv(csv) : FreightDemo.Generate(options.Size, seed: 7);
     var report = ColumnScreen.Screen(rawTrain, new ScreeningOptions());
     var train = ColumnScreen.Apply(report, rawTrain);
     var test = ColumnScreen.Apply(report, rawTest);
-    Console.WriteLine($"table {options.Size}: {train.RowCount} × {train.FeatureCount} after screening; family {options.Family}; " +
+    Console.WriteLine($"table {options.TableLabel}: {train.RowCount} × {train.FeatureCount} after screening; family {options.Family}; " +
                       $"{DefinitionWords.Of(options.Schedule)} rounds {options.FirstRung}..{options.FullBudget}, eta {options.Eta}, rate exponent {options.RateExponent}, proposer {options.ProposerLabel}, brackets {options.Brackets}; random {options.RandomTrials} trials at {options.FullBudget}; {options.Threads} threads");
 
-    // Test predictions are part of every trial but not of the comparison: a 50-row test slice keeps them cheap.
+    // Test predictions are part of every trial but not of the comparison: a 50-row test slice keeps them cheap
+    // (a CSV table's test file is given small instead: its category columns are aligned with the whole test table).
     var testRows = test.ToRows();
-    var testSlice = new Foldwise.Core.Data.SparseRowMatrix(50, testRows.ColumnCount, testRows.RowStarts[..51],
+    var testSlice = options.Csv is not null || testRows.RowCount <= 50 ? testRows : new Foldwise.Core.Data.SparseRowMatrix(50, testRows.ColumnCount, testRows.RowStarts[..51],
         testRows.ColumnIndices[..testRows.RowStarts[50]], testRows.Values[..testRows.RowStarts[50]]);
     double randomCompute = (double)options.RandomTrials * options.FullBudget * train.RowCount;
     foreach (int seed in options.SeedList)
@@ -60,7 +62,8 @@ if (options.Part != "report")
         {
             // Without random's result at hand (the searches running side by side) ASHA+TPE runs to the compute cap.
             double stopBelow = random is null ? double.NegativeInfinity : random[^1].Best;
-            var asha = SearchRun.Run(data, options, options.Schedule, options.Proposer, options.AshaTrials, seed + options.DrawOffset, stopBelow, computeCap: randomCompute);
+            // Capped at random search's own compute: rounds actually trained when its trials stop early.
+            var asha = SearchRun.Run(data, options, options.Schedule, options.Proposer, options.AshaTrials, seed + options.DrawOffset, stopBelow, computeCap: random?[^1].Compute ?? randomCompute);
             string ashaPath = Path.Combine(options.Out, options.AshaFile(seed));
             Trace.Write(ashaPath, asha);
             Console.WriteLine($"seed {seed}: {DefinitionWords.Of(options.Schedule)} ({options.ProposerLabel}) best {asha.Min(r => r.Score):F5} after {asha.Count} trials ({asha.Count(r => r.Budget == options.FullBudget)} at {options.FullBudget} rounds), {asha.Sum(r => r.Seconds):F0} s → {ashaPath}");
@@ -71,4 +74,10 @@ if (options.Part != "report")
 if (options.Part != "probe")
 {
     Comparison.Print(options);
+}
+
+static (Foldwise.Core.Data.FeatureTable Train, Foldwise.Core.Data.FeatureTable Test) ReadCsv(CsvPair csv)
+{
+    var train = CsvTableReader.ReadTraining(csv.Train, csv.Id, csv.Target, Metric.Rmsle);
+    return (train, CsvTableReader.ReadTest(csv.Test, csv.Id, csv.Target, Foldwise.Core.Data.TableRules.Default, train));
 }

@@ -22,7 +22,7 @@ internal static class SearchRun
             Budget = new SearchBudget(trials, null),
         };
         var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition, new TpeOptions(Joint: options.JointTpe, Ladder: options.Ladder)), new NoJournal(), TimeProvider.System);
-        var executor = new TrialExecutor(LearnerCatalog.BuiltIn.Get(options.Family));
+        var executor = new TrialExecutor(LearnerCatalog.BuiltIn.Get(options.Family), options.Stopping);
         var rows = new List<TraceRow>();
         double compute = 0, best = double.PositiveInfinity;
         while (true)
@@ -35,11 +35,14 @@ internal static class SearchRun
 
             var trial = grant.Trial!;
             var clock = Stopwatch.StartNew();
-            var outcome = executor.Run(data, grant.Run!, trial.Budget, grant.Seed, options.Threads, CancellationToken.None);
-            coordinator.Complete(trial.Id, trial.Attempt, outcome.Score, outcome.FoldScores);
-            compute += (double)trial.Budget * data.Train.RowCount;
+            var outcome = executor.Run(data, grant.Run!, trial.Budget, grant.Seed, options.Threads, CancellationToken.None, predictsTest: grant.PredictsTest);
+            coordinator.Complete(trial.Id, trial.Attempt, outcome.Score, outcome.FoldScores, outcome.BestRound);
+
+            // Compute is what was trained: rounds × rows, fewer rounds when the trial stopped early.
+            compute += (double)outcome.RoundsTrained * data.Train.RowCount;
             best = Math.Min(best, outcome.Score);
-            rows.Add(new TraceRow(trial.Id, trial.Rung, trial.Budget, trial.Proposer, compute, outcome.Score, best, clock.Elapsed.TotalSeconds, trial.Parameters.Describe()));
+            rows.Add(new TraceRow(trial.Id, trial.Rung, trial.Budget, trial.Proposer, compute, outcome.Score, best, clock.Elapsed.TotalSeconds, trial.Parameters.Describe(),
+                $"{outcome.RoundsTrained}/{outcome.BestRound?.ToString(System.Globalization.CultureInfo.InvariantCulture) ?? "-"}"));
             if (best <= stopBelow || compute >= computeCap)
             {
                 break;

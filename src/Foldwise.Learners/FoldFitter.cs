@@ -41,7 +41,7 @@ internal static class FoldFitter
             var model = train(ml, trainView);
             cancellation.ThrowIfCancellationRequested();
             var validation = Score(model, SparseViews.Rows(ml, inputs.Train, job.ValidationRows, labels: null), job.ValidationRows.Length, offset);
-            var test = Score(model, SparseViews.Test(inputs.Test), inputs.Test.RowCount, offset);
+            var test = job.PredictsTest ? Score(model, SparseViews.Test(inputs.Test), inputs.Test.RowCount, offset) : [];
             return new FoldPrediction(validation, test);
         }
     }

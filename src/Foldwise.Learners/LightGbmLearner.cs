@@ -10,13 +10,15 @@ namespace Foldwise.Learners;
 /// every fit of a process should use the same thread count (LightGBM keeps it in a process-wide setting).
 /// <see cref="LightGbmFoldModel"/> offers what a fit alone does not: per-round held-out scores and continued training.
 /// </summary>
-public sealed class LightGbmLearner : IFoldLearner
+public sealed class LightGbmLearner : IRoundLearner
 {
     public string Family => FamilyNames.LightGbm;
 
     public FoldPrediction Fit(FoldJob job, CancellationToken cancellation)
     {
         using var model = LightGbmFoldModel.Train(job, scoreEachRound: false, cancellation);
-        return model.Predict();
+        return model.Predict(model.Rounds, job.PredictsTest);
     }
+
+    public IRoundFit Start(FoldJob job, CancellationToken cancellation) => LightGbmFoldModel.Start(job, scoreEachRound: false, cancellation);
 }

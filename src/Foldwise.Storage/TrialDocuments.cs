@@ -50,6 +50,7 @@ internal static class TrialDocuments
             ["finished"] = Time(t.Finished),
             ["score"] = Nullable(t.Score),
             ["foldScores"] = Array(t.FoldScores),
+            ["bestRound"] = Nullable(t.BestRound),
             ["failureReason"] = Nullable(t.FailureReason),
             ["lostAttempts"] = Array(t.LostAttempts),
         };
@@ -83,6 +84,9 @@ internal static class TrialDocuments
             Finished = OptionalTime(doc, "finished", owner),
             Score = OptionalDouble(doc, "score"),
             FoldScores = DoubleArray(doc, "foldScores", owner),
+
+            // Absent from stores written before trials kept their best round.
+            BestRound = OptionalInt(doc, "bestRound"),
             FailureReason = OptionalString(doc, "failureReason"),
             LostAttempts = Strings(doc, "lostAttempts", owner),
         };

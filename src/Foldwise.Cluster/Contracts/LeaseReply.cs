@@ -2,7 +2,8 @@ namespace Foldwise.Cluster.Contracts;
 
 /// <summary>
 /// A leased trial as a slot needs it: a family name and parameter values (never code), a budget, a seed, how often to
-/// renew, and the search's trace context (W3C <c>traceparent</c>, null when the coordinator traces nothing).
+/// renew, the search's trace context (W3C <c>traceparent</c>, null when the coordinator traces nothing), and whether
+/// the test table is to be predicted (only trials the blend may weight need it).
 /// </summary>
 [GenerateSerializer, Immutable, Alias("Foldwise.LeaseReply")]
 public sealed record LeaseReply(
@@ -14,7 +15,8 @@ public sealed record LeaseReply(
     [property: Id(5)] int Budget,
     [property: Id(6)] int Seed,
     [property: Id(7)] TimeSpan LeaseDuration,
-    [property: Id(8)] string? TraceParent = null)
+    [property: Id(8)] string? TraceParent = null,
+    [property: Id(9)] bool PredictsTest = true)
 {
     public static LeaseReply Waiting { get; } = new(LeaseStatus.Wait, 0, 0, "", [], 0, 0, TimeSpan.Zero);
 

@@ -1,6 +1,9 @@
 namespace Foldwise.Cluster.Contracts;
 
-/// <summary>A slot's result for one attempt of a trial: scores and prediction vectors on the fitting scale.</summary>
+/// <summary>
+/// A slot's result for one attempt of a trial: scores and prediction vectors on the fitting scale (the test vector
+/// empty when the lease did not ask for it), and the round count the trial kept when it stopped at its best round.
+/// </summary>
 [GenerateSerializer, Immutable, Alias("Foldwise.TrialReport")]
 public sealed record TrialReport(
     [property: Id(0)] int TrialId,
@@ -11,4 +14,5 @@ public sealed record TrialReport(
     [property: Id(5)] double[] FoldScores,
     [property: Id(6)] double[] OutOfFold,
     [property: Id(7)] double[] Test,
-    [property: Id(8)] double Seconds);
+    [property: Id(8)] double Seconds,
+    [property: Id(9)] int? BestRound = null);

@@ -63,7 +63,8 @@ public sealed class CoordinatorSession
                 grant.Trial.Budget,
                 grant.Seed,
                 grant.Trial.LeaseExpires!.Value - grant.Trial.Started!.Value,
-                traceParent),
+                traceParent,
+                grant.PredictsTest),
             LeaseKind.Wait => LeaseReply.Waiting,
             _ => LeaseReply.Done,
         };
@@ -82,7 +83,7 @@ public sealed class CoordinatorSession
             }
 
             recorder.SaveVectors(report.TrialId, report.OutOfFold, report.Test);
-            bool accepted = Coordinator.Complete(report.TrialId, report.Attempt, report.Score, [.. report.FoldScores]);
+            bool accepted = Coordinator.Complete(report.TrialId, report.Attempt, report.Score, [.. report.FoldScores], report.BestRound);
             if (accepted)
             {
                 events.Report(new TrialScored(SearchId, Coordinator.Trial(report.TrialId)!, Coordinator.Progress()));

@@ -92,14 +92,14 @@ public sealed partial class SlotRunner(
             var parameters = ParameterSet.Of(lease.Parameters);
             using var folds = new FoldSpans(span?.Context ?? default, lease.TrialId, trialData.Folds.FoldCount);
             var outcome = await Task.Factory.StartNew(
-                () => executor.Run(trialData, parameters, lease.Budget, lease.Seed, options.Threads, abandon.Token, folds.FoldDone),
+                () => executor.Run(trialData, parameters, lease.Budget, lease.Seed, options.Threads, abandon.Token, folds.FoldDone, lease.PredictsTest),
                 abandon.Token,
                 TaskCreationOptions.LongRunning,
                 TaskScheduler.Default);
             statistics.AddBusy(clock.Elapsed);
             await abandon.CancelAsync();
             var report = new TrialReport(
-                lease.TrialId, lease.Attempt, options.Name, slot, outcome.Score, [.. outcome.FoldScores], outcome.OutOfFold, outcome.Test, clock.Elapsed.TotalSeconds);
+                lease.TrialId, lease.Attempt, options.Name, slot, outcome.Score, [.. outcome.FoldScores], outcome.OutOfFold, outcome.Test, clock.Elapsed.TotalSeconds, outcome.BestRound);
             bool accepted = await search.ReportAsync(report);
             ending = "scored";
             span?.SetTag("foldwise.score", outcome.Score).SetTag("foldwise.accepted", accepted);

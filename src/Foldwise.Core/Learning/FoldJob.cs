@@ -7,6 +7,7 @@ namespace Foldwise.Core.Learning;
 /// <param name="Budget">Boosting rounds (or trees) this fit may use.</param>
 /// <param name="Threads">Threads the learner may use; the slot has these cores to itself.</param>
 /// <param name="Inputs">The fold's encoded features; when null, the table's own features (a table without category columns).</param>
+/// <param name="PredictsTest">False when the trial's test predictions are not wanted (see <see cref="Blending.TestPredictions"/>): the fit returns an empty test vector.</param>
 public sealed record FoldJob(
     TrialData Data,
     int Fold,
@@ -16,8 +17,12 @@ public sealed record FoldJob(
     int Budget,
     int Seed,
     int Threads,
-    FoldInputs? Inputs = null)
+    FoldInputs? Inputs = null,
+    bool PredictsTest = true)
 {
     /// <summary>The features a learner reads: rows of <see cref="FoldInputs.Train"/> are indexed by <see cref="TrainRows"/> and <see cref="ValidationRows"/>.</summary>
     public FoldInputs Features => Inputs ?? FoldInputs.Plain(Data);
+
+    /// <summary>How many test predictions the fit returns: every test row, or none.</summary>
+    public int TestRowCount => PredictsTest ? Data.Test.RowCount : 0;
 }

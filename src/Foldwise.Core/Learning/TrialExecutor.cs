@@ -5,12 +5,33 @@ using Foldwise.Core.Spaces;
 namespace Foldwise.Core.Learning;
 
 /// <summary>
-/// Runs one trial: encodes each fold's inputs from its training rows, fits every fold of the plan in turn, pools the out-of-fold predictions and
-/// averages the fold models' test predictions (DESIGN: test prediction = mean over fold models).
+/// Runs one trial: encodes each fold's inputs from its training rows, fits every fold of the plan, pools the out-of-fold predictions and
+/// averages the fold models' test predictions (DESIGN: test prediction = mean over fold models). A family that trains
+/// round by round (<see cref="IRoundLearner"/>) trains all folds a round at a time and keeps the best round count of
+/// their pooled held-out score (<see cref="RoundStopping"/>); the others fit each fold whole.
 /// </summary>
-public sealed class TrialExecutor(IFoldLearner learner)
+public sealed class TrialExecutor
 {
-    public TrialOutcome Run(TrialData data, ParameterSet parameters, int budget, int seed, int threads, CancellationToken cancellation, Action<int>? foldDone = null)
+    private readonly IFoldLearner learner;
+    private readonly RoundStopping? stopping;
+
+    /// <summary>Stops round-by-round families by <see cref="RoundStopping.Default"/>.</summary>
+    public TrialExecutor(IFoldLearner learner)
+        : this(learner, RoundStopping.Default)
+    {
+    }
+
+    /// <param name="stopping">Null: every family trains its whole budget and keeps it.</param>
+    public TrialExecutor(IFoldLearner learner, RoundStopping? stopping)
+    {
+        ArgumentNullException.ThrowIfNull(learner);
+        this.learner = learner;
+        this.stopping = stopping;
+    }
+
+    /// <param name="predictsTest">False: the test table is not predicted and the outcome's test vector is empty.</param>
+    public TrialOutcome Run(
+        TrialData data, ParameterSet parameters, int budget, int seed, int threads, CancellationToken cancellation, Action<int>? foldDone = null, bool predictsTest = true)
     {
         var folds = data.Folds;
         if (folds.RowCount != data.Train.RowCount)
@@ -18,20 +39,124 @@ public sealed class TrialExecutor(IFoldLearner learner)
             throw new InvalidOperationException($"fold plan covers {folds.RowCount} rows but the table has {data.Train.RowCount}");
         }
 
-        var oof = new double[data.Train.RowCount];
-        var test = new double[data.Test.RowCount];
-        var foldScores = ImmutableArray.CreateBuilder<double>(folds.FoldCount);
-        for (int f = 0; f < folds.FoldCount; f++)
+        return learner is IRoundLearner rounds && stopping is not null
+            ? RunByRounds(rounds, stopping, data, parameters, budget, seed, threads, foldDone, predictsTest, cancellation)
+            : RunWhole(data, parameters, budget, seed, threads, foldDone, predictsTest, cancellation);
+    }
+
+    private static FoldJob Job(TrialData data, int fold, ParameterSet parameters, int budget, int seed, int threads, bool predictsTest)
+    {
+        var trainRows = data.Folds.TrainRows(fold);
+        int foldSeed = SearchSeeds.Fold(seed, fold);
+        return new FoldJob(data, fold, trainRows, data.Folds.ValidationRows(fold), parameters, budget, foldSeed, threads, data.InputsFor(trainRows, foldSeed), predictsTest);
+    }
+
+    private TrialOutcome RunWhole(
+        TrialData data, ParameterSet parameters, int budget, int seed, int threads, Action<int>? foldDone, bool predictsTest, CancellationToken cancellation)
+    {
+        var pooled = new Pooled(data, predictsTest);
+        for (int f = 0; f < data.Folds.FoldCount; f++)
         {
             cancellation.ThrowIfCancellationRequested();
-            var validation = folds.ValidationRows(f);
-            var trainRows = folds.TrainRows(f);
-            int foldSeed = SearchSeeds.Fold(seed, f);
-            var job = new FoldJob(data, f, trainRows, validation, parameters, budget, foldSeed, threads, data.InputsFor(trainRows, foldSeed));
-            var prediction = learner.Fit(job, cancellation);
+            var job = Job(data, f, parameters, budget, seed, threads, predictsTest);
+            pooled.Add(learner.Family, job, learner.Fit(job, cancellation));
+            foldDone?.Invoke(f);
+        }
+
+        return pooled.Outcome(bestRound: null, budget);
+    }
+
+    private static TrialOutcome RunByRounds(
+        IRoundLearner learner, RoundStopping stopping, TrialData data, ParameterSet parameters, int budget, int seed, int threads,
+        Action<int>? foldDone, bool predictsTest, CancellationToken cancellation)
+    {
+        var fits = new List<IRoundFit>(data.Folds.FoldCount);
+        try
+        {
+            var jobs = new List<FoldJob>(data.Folds.FoldCount);
+            for (int f = 0; f < data.Folds.FoldCount; f++)
+            {
+                cancellation.ThrowIfCancellationRequested();
+                jobs.Add(Job(data, f, parameters, budget, seed, threads, predictsTest));
+                fits.Add(learner.Start(jobs[f], cancellation));
+            }
+
+            // All folds advance together, so the pooled held-out score exists after every round.
+            var oof = new double[data.Train.RowCount];
+            double best = double.PositiveInfinity;
+            int bestRound = 0, round = 0;
+            while (round < budget)
+            {
+                cancellation.ThrowIfCancellationRequested();
+                bool grew = false;
+                foreach (var fit in fits)
+                {
+                    grew |= fit.TrainRound();
+                }
+
+                if (!grew)
+                {
+                    break;
+                }
+
+                round++;
+                for (int f = 0; f < fits.Count; f++)
+                {
+                    Place(fits[f].HeldOutPredictions(), jobs[f], oof);
+                }
+
+                double score = data.Metric.Score(data.Target, oof);
+                if (RoundStopping.Improves(score, best))
+                {
+                    (best, bestRound) = (score, round);
+                }
+
+                if (stopping.Stops(round, bestRound, budget))
+                {
+                    break;
+                }
+            }
+
+            var pooled = new Pooled(data, predictsTest);
+            for (int f = 0; f < fits.Count; f++)
+            {
+                cancellation.ThrowIfCancellationRequested();
+                pooled.Add(learner.Family, jobs[f], fits[f].Predict(Math.Min(bestRound, fits[f].Rounds), predictsTest));
+                foldDone?.Invoke(f);
+            }
+
+            return pooled.Outcome(bestRound, round);
+        }
+        finally
+        {
+            foreach (var fit in fits)
+            {
+                fit.Dispose();
+            }
+        }
+    }
+
+    private static void Place(double[] heldOut, FoldJob job, double[] oof)
+    {
+        for (int i = 0; i < heldOut.Length; i++)
+        {
+            oof[job.ValidationRows[i]] = heldOut[i];
+        }
+    }
+
+    /// <summary>The folds' predictions gathered into the out-of-fold vector, the fold scores and the mean test prediction.</summary>
+    private sealed class Pooled(TrialData data, bool predictsTest)
+    {
+        private readonly double[] oof = new double[data.Train.RowCount];
+        private readonly double[] test = new double[predictsTest ? data.Test.RowCount : 0];
+        private readonly ImmutableArray<double>.Builder foldScores = ImmutableArray.CreateBuilder<double>(data.Folds.FoldCount);
+
+        public void Add(string family, FoldJob job, FoldPrediction prediction)
+        {
+            var validation = job.ValidationRows;
             if (prediction.Validation.Length != validation.Length || prediction.Test.Length != test.Length)
             {
-                throw new InvalidOperationException($"{learner.Family} returned {prediction.Validation.Length} held-out and {prediction.Test.Length} test predictions; expected {validation.Length} and {test.Length}");
+                throw new InvalidOperationException($"{family} returned {prediction.Validation.Length} held-out and {prediction.Test.Length} test predictions; expected {validation.Length} and {test.Length}");
             }
 
             var actual = new double[validation.Length];
@@ -43,13 +168,13 @@ public sealed class TrialExecutor(IFoldLearner learner)
 
             for (int i = 0; i < test.Length; i++)
             {
-                test[i] += prediction.Test[i] / folds.FoldCount;
+                test[i] += prediction.Test[i] / data.Folds.FoldCount;
             }
 
             foldScores.Add(data.Metric.Score(actual, prediction.Validation));
-            foldDone?.Invoke(f);
         }
 
-        return new TrialOutcome(data.Metric.Score(data.Target, oof), foldScores.MoveToImmutable(), oof, test);
+        public TrialOutcome Outcome(int? bestRound, int roundsTrained) =>
+            new(data.Metric.Score(data.Target, oof), foldScores.MoveToImmutable(), oof, test, bestRound, roundsTrained);
     }
 }

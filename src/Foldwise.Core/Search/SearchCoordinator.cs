@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using Foldwise.Core.Blending;
 using Foldwise.Core.Definition;
 
 namespace Foldwise.Core.Search;
@@ -26,6 +27,7 @@ public sealed class SearchCoordinator
     private readonly DateTimeOffset sessionStart;
     private int nextId = 1;
     private bool stopRequested;
+    private bool fullBudgetDone;
     private StopReason? stopping;
 
     /// <param name="history">Trials from the store when resuming, in any order; running ones are queued again.</param>
@@ -107,7 +109,8 @@ public sealed class SearchCoordinator
     /// Records a finished trial. The caller stores its prediction vectors first, so a done trial always has them.
     /// Returns false for a report from a lost lease (another attempt owns the trial, or it finished already).
     /// </summary>
-    public bool Complete(int trialId, int attempt, double score, ImmutableArray<double> foldScores)
+    /// <param name="bestRound">The round count the trial kept when it stopped at its best round (null: its whole budget).</param>
+    public bool Complete(int trialId, int attempt, double score, ImmutableArray<double> foldScores, int? bestRound = null)
     {
         lock (gate)
         {
@@ -121,6 +124,7 @@ public sealed class SearchCoordinator
                 State = TrialState.Done,
                 Score = score,
                 FoldScores = foldScores,
+                BestRound = bestRound,
                 Worker = winner.Worker,
                 Slot = winner.Slot,
                 Started = winner.Started,
@@ -344,6 +348,7 @@ public sealed class SearchCoordinator
     private void ApplyLocked(TrialRecord trial)
     {
         trials[trial.Id] = trial;
+        fullBudgetDone |= trial.State == TrialState.Done && trial.Budget >= definition.Schedule.FullBudget;
         nextId = Math.Max(nextId, trial.Id + 1);
         queued.Remove(trial.Id);
         running.Remove(trial.Id);
@@ -381,7 +386,11 @@ public sealed class SearchCoordinator
     }
 
     private LeaseGrant Granted(TrialRecord trial) => new(
-        LeaseKind.Granted, trial, SeedOf(trial), definition.Schedule.ShortRungRate.For(trial.Parameters, trial.Budget, definition.Schedule.FullBudget));
+        LeaseKind.Granted,
+        trial,
+        SeedOf(trial),
+        definition.Schedule.ShortRungRate.For(trial.Parameters, trial.Budget, definition.Schedule.FullBudget),
+        TestPredictions.Wanted(trial.Budget, definition.Schedule.FullBudget, fullBudgetDone));
 
     /// <summary>Promotions share their first candidate's seed, so a longer fit grows the same trees.</summary>
     private int SeedOf(TrialRecord trial)

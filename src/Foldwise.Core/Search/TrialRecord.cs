@@ -48,6 +48,12 @@ public sealed record TrialRecord
 
     public ImmutableArray<double> FoldScores { get; init; } = [];
 
+    /// <summary>
+    /// The round count the trial kept (its best pooled held-out score, at most <see cref="Budget"/>) and predicted with,
+    /// when it trained round by round; null when it used its whole budget, and in stores written before rounds were kept.
+    /// </summary>
+    public int? BestRound { get; init; }
+
     public string? FailureReason { get; init; }
 
     /// <summary>Attempts lost to an expired lease or a worker error; at the coordinator's limit the trial fails. Interruptions (a stop, a restart) do not count.</summary>

@@ -8,7 +8,7 @@ namespace Foldwise.Learners.Native;
 /// rows after every round (on the fitting scale, with the search's metric), and able to train further rounds later.
 /// Disposing it frees the booster and its Datasets.
 /// </summary>
-public sealed class LightGbmFoldModel : IDisposable
+public sealed class LightGbmFoldModel : IRoundFit
 {
     private readonly FoldJob job;
     private readonly NativeFoldRows inputs;
@@ -33,6 +33,26 @@ public sealed class LightGbmFoldModel : IDisposable
     /// <summary>Trains <see cref="FoldJob.Budget"/> rounds; cancellation is honoured between rounds.</summary>
     public static LightGbmFoldModel Train(FoldJob job, bool scoreEachRound, CancellationToken cancellation)
     {
+        var model = Start(job, scoreEachRound, cancellation);
+        try
+        {
+            model.Continue(job.Budget, cancellation);
+            return model;
+        }
+        catch
+        {
+            model.Dispose();
+            throw;
+        }
+    }
+
+    /// <summary>
+    /// Bins the fold's rows and creates the booster with no round trained. The held-out rows are always added to the
+    /// booster (it keeps their scores up to date, <see cref="HeldOutPredictions"/>); <paramref name="scoreEachRound"/>
+    /// also scores them after every round into <see cref="ValidationScores"/>.
+    /// </summary>
+    public static LightGbmFoldModel Start(FoldJob job, bool scoreEachRound, CancellationToken cancellation)
+    {
         FoldFitter.Check(FamilyNames.LightGbm, job);
         cancellation.ThrowIfCancellationRequested();
         using var gate = ThreadCountGate.Enter(job.Threads);
@@ -53,15 +73,9 @@ public sealed class LightGbmFoldModel : IDisposable
         LightGbmFoldModel? model = null;
         try
         {
-            double[]? actual = null;
-            if (scoreEachRound)
-            {
-                booster.AddValidation(LightGbmDataset.FromRows(inputs.Validation, labels: null, parameters, train, $"the held-out rows of fold {job.Fold}"));
-                actual = [.. job.ValidationRows.Select(r => job.Data.Target[r])];
-            }
-
-            model = new LightGbmFoldModel(job, inputs, booster, actual);
-            model.Continue(job.Budget, cancellation);
+            booster.AddValidation(LightGbmDataset.FromRows(inputs.Validation, labels: null, parameters, train, $"the held-out rows of fold {job.Fold}"));
+            double[]? actual = scoreEachRound ? [.. job.ValidationRows.Select(r => job.Data.Target[r])] : null;
+            model = new LightGbmFoldModel(job, inputs with { Train = Released, Labels = [] }, booster, actual);
             return model;
         }
         catch
@@ -79,6 +93,17 @@ public sealed class LightGbmFoldModel : IDisposable
         }
     }
 
+    /// <summary>Trains one more round; false when no leaf can be split any more.</summary>
+    public bool TrainRound()
+    {
+        var rounds = Rounds;
+        Continue(1, CancellationToken.None);
+        return Rounds > rounds;
+    }
+
+    /// <summary>The held-out rows' predictions after the rounds trained so far, on the fitting scale.</summary>
+    public double[] HeldOutPredictions() => Shift(booster.ValidationScores(0));
+
     /// <summary>Trains up to <paramref name="rounds"/> more rounds on the same booster (bagging and all), as if the first fit had been longer.</summary>
     public void Continue(int rounds, CancellationToken cancellation)
     {
@@ -95,13 +120,7 @@ public sealed class LightGbmFoldModel : IDisposable
             Rounds++;
             if (actual is not null)
             {
-                var scores = booster.ValidationScores(0);
-                for (int k = 0; k < scores.Length; k++)
-                {
-                    scores[k] += inputs.Offset;
-                }
-
-                roundScores.Add(job.Data.Metric.Score(actual, scores));
+                roundScores.Add(job.Data.Metric.Score(actual, HeldOutPredictions()));
             }
         }
     }
@@ -118,21 +137,30 @@ public sealed class LightGbmFoldModel : IDisposable
     }
 
     /// <summary>Predictions of the held-out rows and the test table, on the fitting scale, from the first <paramref name="rounds"/> rounds (all by default).</summary>
-    public FoldPrediction Predict(int? rounds = null)
+    public FoldPrediction Predict(int? rounds = null) => Predict(rounds ?? Rounds, withTest: true);
+
+    /// <summary>
+    /// Predictions from the first <paramref name="rounds"/> rounds (0 only when none was trained): the held-out rows,
+    /// and the test table when <paramref name="withTest"/> (else an empty test vector: scoring it is skipped).
+    /// </summary>
+    public FoldPrediction Predict(int rounds, bool withTest)
     {
-        if (rounds is < 1 || rounds > Rounds)
+        if (rounds < (Rounds == 0 ? 0 : 1) || rounds > Rounds)
         {
             throw new ArgumentOutOfRangeException(nameof(rounds), rounds, $"the model has {Rounds} rounds");
         }
 
-        int use = rounds ?? 0;
+        // LightGBM reads 0 as "every round": the same as the model's own when it has none.
         using var gate = ThreadCountGate.Enter(job.Threads);
         return new FoldPrediction(
-            Shift(booster.Predict(inputs.Validation, use, job.Threads, $"the held-out rows of fold {job.Fold}")),
-            Shift(booster.Predict(inputs.Test, use, job.Threads, "the test table")));
+            Shift(booster.Predict(inputs.Validation, rounds, job.Threads, $"the held-out rows of fold {job.Fold}")),
+            withTest ? Shift(booster.Predict(inputs.Test, rounds, job.Threads, "the test table")) : []);
     }
 
     public void Dispose() => booster.Dispose();
+
+    /// <summary>What a model keeps of its training rows once they are binned: nothing (LightGBM holds its own copy).</summary>
+    private static CsrRows Released { get; } = new([0], [], [], 0);
 
     private double[] Shift(double[] raw)
     {

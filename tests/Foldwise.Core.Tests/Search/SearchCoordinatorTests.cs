@@ -202,6 +202,43 @@ public sealed class SearchCoordinatorTests
         Assert.Equal(first.Seed, promoted.Seed);
     }
 
+    [Fact]
+    public void A_trial_below_the_full_budget_predicts_the_test_table_only_until_a_full_budget_trial_is_done()
+    {
+        // Given a search whose full budget is 400 rounds
+        var coordinator = Coordinator(trials: 10);
+        int fullBudget = Definition().Schedule.FullBudget;
+
+        // When a short trial is leased before any full-budget trial is done, then a full-budget trial finishes
+        schedule.Budget = 10;
+        var before = coordinator.Lease("w1", "0");
+        schedule.Budget = fullBudget;
+        var full = coordinator.Lease("w1", "1");
+        Assert.True(coordinator.Complete(full.Trial!.Id, full.Trial.Attempt, 0.4, [0.4]));
+        schedule.Budget = 10;
+        var after = coordinator.Lease("w1", "1");
+        schedule.Budget = fullBudget;
+        var fullAfter = coordinator.Lease("w1", "2");
+
+        // Then the first short trial predicts it (the blend would fall back to it), the later one does not, full-budget trials always do
+        Assert.True(before.PredictsTest);
+        Assert.True(full.PredictsTest);
+        Assert.False(after.PredictsTest);
+        Assert.True(fullAfter.PredictsTest);
+    }
+
+    [Fact]
+    public void A_done_trial_keeps_the_round_count_it_reported()
+    {
+        var coordinator = Coordinator();
+        var grant = coordinator.Lease("w1", "0");
+
+        Assert.True(coordinator.Complete(grant.Trial!.Id, grant.Trial.Attempt, 0.5, [0.5], bestRound: 7));
+
+        Assert.Equal(7, coordinator.Trial(grant.Trial.Id)!.BestRound);
+        Assert.Equal(7, journal.Saved[^1].BestRound);
+    }
+
     private sealed class PromotingSchedule : ISchedule
     {
         private TrialRecord? done;

@@ -3,7 +3,7 @@ using Foldwise.Core.Spaces;
 
 namespace Foldwise.Testing.Fakes;
 
-/// <summary>A schedule that proposes new full-budget candidates of one family, numbering a parameter, and records what it observed.</summary>
+/// <summary>A schedule that proposes new candidates of one family at a budget (settable), numbering a parameter, and records what it observed.</summary>
 public sealed class CountingSchedule(string family = FamilyNames.LightGbm, int budget = 10) : ISchedule
 {
     private int proposed;
@@ -15,6 +15,9 @@ public sealed class CountingSchedule(string family = FamilyNames.LightGbm, int b
 
     public bool Exhausted { get; set; }
 
+    /// <summary>The budget of the trials proposed from now on.</summary>
+    public int Budget { get; set; } = budget;
+
     public void Observe(TrialRecord trial) => Observed.Add(trial);
 
     public TrialPlan? NextPlan()
@@ -25,6 +28,6 @@ public sealed class CountingSchedule(string family = FamilyNames.LightGbm, int b
         }
 
         proposed++;
-        return new TrialPlan(family, ParameterSet.Of([new("x", proposed)]), budget, 0, null, "counting");
+        return new TrialPlan(family, ParameterSet.Of([new("x", proposed)]), Budget, 0, null, "counting");
     }
 }

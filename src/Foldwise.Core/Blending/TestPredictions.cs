@@ -1,0 +1,11 @@
+namespace Foldwise.Core.Blending;
+
+/// <summary>
+/// Which trials predict the test table: only those the blend may weight. The blend pool takes full-budget trials
+/// (<see cref="BlendPool"/>); when none has finished, the blend falls back to the furthest budget reached, so until a
+/// full-budget trial is done every trial predicts the test table. Below the full budget that saves the test scoring.
+/// </summary>
+public static class TestPredictions
+{
+    public static bool Wanted(int budget, int fullBudget, bool fullBudgetTrialDone) => budget >= fullBudget || !fullBudgetTrialDone;
+}
