@@ -27,6 +27,9 @@ public sealed class LightGbmFoldModel : IRoundFit
     /// <summary>Rounds trained so far: the job's budget unless no leaf could be split any more.</summary>
     public int Rounds { get; private set; }
 
+    /// <summary>True once a round could split no leaf: the model trains no further (a later round's bag might split again, which a whole fit never tries).</summary>
+    public bool Finished { get; private set; }
+
     /// <summary>The held-out rows' score after each round (index 0 = after round 1); empty unless asked for at training.</summary>
     public IReadOnlyList<double> ValidationScores => roundScores;
 
@@ -109,11 +112,12 @@ public sealed class LightGbmFoldModel : IRoundFit
     {
         ArgumentOutOfRangeException.ThrowIfNegative(rounds);
         using var gate = ThreadCountGate.Enter(job.Threads);
-        for (int i = 0; i < rounds; i++)
+        for (int i = 0; i < rounds && !Finished; i++)
         {
             cancellation.ThrowIfCancellationRequested();
             if (!booster.TrainOneRound())
             {
+                Finished = true;
                 break;
             }
 
