@@ -36,9 +36,9 @@ internal sealed record BenchArgs(
             ? [.. list.Split(',').Select(s => int.Parse(s, CultureInfo.InvariantCulture))]
             : [.. Enumerable.Range(1, Int("--seeds", "5"))];
         string part = Get("--part", "both");
-        if (part is not ("both" or "random" or "asha" or "report" or "probe"))
+        if (part is not ("both" or "random" or "asha" or "report" or "probe" or "costs"))
         {
-            throw new ArgumentException($"--part must be both, random, asha, report or probe, not '{part}'");
+            throw new ArgumentException($"--part must be both, random, asha, report, probe or costs, not '{part}'");
         }
 
         return new BenchArgs(

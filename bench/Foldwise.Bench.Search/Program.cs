@@ -45,6 +45,12 @@ if (options.Part != "report")
         var data = TrialData.From(train, test, folds, metric) with { Test = testSlice };
         string randomPath = Path.Combine(options.Out, options.RandomFile(seed));
         var random = Trace.ReadIfComplete(randomPath, options.RandomTrials);
+        if (options.Part == "costs")
+        {
+            Costs.Run(TrialData.From(train, test, folds, metric), options, seed, candidates: 3);
+            continue;
+        }
+
         if (options.Part == "probe")
         {
             Probe.Run(data, options, random ?? throw new InvalidOperationException($"--part probe needs the random trace {randomPath}"), seed, options.ProbeBudget, options.ProbeExponents);
@@ -71,7 +77,7 @@ if (options.Part != "report")
     }
 }
 
-if (options.Part != "probe")
+if (options.Part is not ("probe" or "costs"))
 {
     Comparison.Print(options);
 }
