@@ -42,6 +42,10 @@ public class SearchHostSettings : CommandSettings
     [Description("Passphrase of --cert. Default: the FOLDWISE_CERT_PASSPHRASE environment variable.")]
     public string? Passphrase { get; init; }
 
+    [CommandOption("--verbose")]
+    [Description("Log information messages of the cluster to stderr too, not only warnings and errors.")]
+    public bool Verbose { get; init; }
+
     [CommandOption("--lease-seconds <S>", IsHidden = true)]
     [Description("Advanced: seconds a trial's lease lasts without renewal. Default 90.")]
     public double? LeaseSeconds { get; init; }
@@ -57,6 +61,7 @@ public class SearchHostSettings : CommandSettings
             Advertise = advertise,
             SiloName = $"coordinator@{Environment.MachineName}",
             Certificate = ClusterTrust.Load(Cert, Passphrase),
+            Verbose = Verbose,
         };
     }
 

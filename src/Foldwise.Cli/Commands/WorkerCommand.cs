@@ -35,6 +35,7 @@ public sealed class WorkerCommand(IAnsiConsole console) : AsyncCommand<WorkerSet
             Advertise = settings.Advertise is { } advertise ? IPAddress.Parse(advertise) : LocalAddress.Facing(join),
             SiloName = options.Name,
             Certificate = ClusterTrust.Load(settings.Cert, settings.Passphrase),
+            Verbose = settings.Verbose,
         };
 
         using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancellationToken);

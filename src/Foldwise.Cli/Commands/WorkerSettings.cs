@@ -47,6 +47,10 @@ public sealed class WorkerSettings : CommandSettings
     [Description("Passphrase of --cert. Default: the FOLDWISE_CERT_PASSPHRASE environment variable.")]
     public string? Passphrase { get; init; }
 
+    [CommandOption("--verbose")]
+    [Description("Log information messages of the cluster to stderr too, not only warnings and errors.")]
+    public bool Verbose { get; init; }
+
     public override ValidationResult Validate()
     {
         if (string.IsNullOrWhiteSpace(Join))

@@ -5,7 +5,6 @@ using Foldwise.Cluster.Workers;
 using Foldwise.Learners;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.Hosting;
-using Microsoft.Extensions.Logging;
 
 namespace Foldwise.Cli.Running;
 
@@ -31,11 +30,7 @@ public sealed class EmbeddedCluster : IAsyncDisposable
     public static async Task<EmbeddedCluster> StartAsync(ClusterRole role, int slots, int? threads, CancellationToken cancellation)
     {
         var builder = Host.CreateApplicationBuilder([]);
-        builder.Logging.ClearProviders();
-        if (Environment.GetEnvironmentVariable("FOLDWISE_LOG") is { Length: > 0 } level && Enum.TryParse<LogLevel>(level, true, out var min))
-        {
-            builder.Logging.AddSimpleConsole(o => o.SingleLine = true).SetMinimumLevel(min);
-        }
+        ConsoleLogging.Configure(builder.Logging, role.Verbose);
 
         builder.Services.Configure<HostOptions>(o => o.ShutdownTimeout = TimeSpan.FromSeconds(15));
         builder.UseOrleans(silo => silo.UseFoldwiseClustering(role));

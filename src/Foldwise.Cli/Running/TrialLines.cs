@@ -45,7 +45,7 @@ internal sealed class TrialLines(TextWriter output) : ILoggerProvider
 
         public void Log<TState>(LogLevel logLevel, EventId eventId, TState state, Exception? exception, Func<TState, Exception?, string> formatter)
         {
-            // Other categories are silent unless FOLDWISE_LOG asks for them.
+            // Other categories go to the console logger (stderr).
         }
     }
 }

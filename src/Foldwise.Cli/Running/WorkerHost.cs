@@ -71,14 +71,7 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
     private IHost Build()
     {
         var builder = Host.CreateApplicationBuilder([]);
-        builder.Logging.ClearProviders();
-        var level = Environment.GetEnvironmentVariable("FOLDWISE_LOG") is { Length: > 0 } text && Enum.TryParse<LogLevel>(text, true, out var parsed)
-            ? parsed
-            : LogLevel.None;
-        if (level != LogLevel.None)
-        {
-            builder.Logging.AddSimpleConsole(o => o.SingleLine = true).SetMinimumLevel(level);
-        }
+        ConsoleLogging.Configure(builder.Logging, role.Verbose);
 
         // One line per trial this worker runs, whatever the log level.
         builder.Logging.AddProvider(new TrialLines(output));
