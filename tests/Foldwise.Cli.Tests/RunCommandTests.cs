@@ -10,6 +10,25 @@ public sealed class RunCommandTests : IDisposable
     public void Dispose() => workspace.Dispose();
 
     [Fact]
+    public void A_twelve_row_table_narrows_the_leaf_sizes_to_its_folds_and_every_trial_is_done()
+    {
+        // Given a 12-row training table and the default ranges (min_leaf_rows 5–100, 5 folds)
+        workspace.WriteTables(trainRows: 12, testRows: 4);
+
+        // When a search runs from flags alone
+        var run = CliHarness.Run(
+            "run", "--train", workspace.PathOf("train.csv"), "--test", workspace.PathOf("test.csv"), "--id", "id", "--target", "y",
+            "--trials", "4", "--out", workspace.Out);
+
+        // Then it says the range was narrowed, and no trial fails
+        Assert.True(run.ExitCode == 0, run.Output);
+        Assert.Contains("lightgbm min_leaf_rows 5–100 narrowed to 2–2: the smallest fold trains on 9 rows", run.Output);
+        var trials = Resume.StoredTrial.Read(workspace.Out);
+        Assert.Equal(4, trials.Count);
+        Assert.All(trials, t => Assert.Equal("done", t.State));
+    }
+
+    [Fact]
     public void Runs_a_search_to_a_prediction_file_and_history_shows_both_families()
     {
         // Given small tables and a definition with both families

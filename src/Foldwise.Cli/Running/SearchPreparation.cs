@@ -11,7 +11,8 @@ using Spectre.Console;
 namespace Foldwise.Cli.Running;
 
 /// <summary>
-/// CSV → screened table → fold plan, before anything is written: bad input fails here with the file, line and column.
+/// CSV → screened table → fold plan (and leaf-size ranges the folds allow), before anything is written: bad input
+/// fails here with the file, line and column.
 /// </summary>
 public static class SearchPreparation
 {
@@ -47,10 +48,17 @@ public static class SearchPreparation
         }
 
         var folds = StratifiedFoldPlanner.Create([.. screenedTrain.Target.Select(metric.Forward)], definition.Folds, definition.Seed);
+        int smallestFold = Enumerable.Range(0, folds.FoldCount).Min(f => folds.TrainRows(f).Length);
+        var (fitted, narrowed) = LeafSizeFit.ToFolds(definition, smallestFold);
+        foreach (string change in narrowed)
+        {
+            console.MarkupLine($"  {Markup.Escape(change)}");
+        }
+
         byte[] trainBytes = TableCodec.Encode(screenedTrain);
         byte[] testBytes = TableCodec.Encode(screenedTest);
         return new PreparedSearch(
-            definition, screenedTrain, screenedTest, trainBytes, testBytes,
+            fitted, screenedTrain, screenedTest, trainBytes, testBytes,
             Convert.ToHexStringLower(SHA256.HashData(trainBytes)), Convert.ToHexStringLower(SHA256.HashData(testBytes)), report, folds);
     }
 }

@@ -32,6 +32,7 @@ public sealed class SearchRun(IAnsiConsole console)
         }
 
         var prepared = SearchPreparation.Prepare(definition, console);
+        definition = prepared.Definition;
         Directory.CreateDirectory(outDir);
         TableFiles.Write(outDir, prepared.TrainHash, prepared.TrainBytes);
         TableFiles.Write(outDir, prepared.TestHash, prepared.TestBytes);
