@@ -23,9 +23,10 @@ public sealed class RunCommandTests : IDisposable
         // Then it says the range was narrowed, and no trial fails
         Assert.True(run.ExitCode == 0, run.Output);
         Assert.Contains("lightgbm min_leaf_rows 5–100 narrowed to 2–2: the smallest fold trains on 9 rows", run.Output);
-        var trials = Resume.StoredTrial.Read(workspace.Out);
+        var history = CliHarness.Run("history", workspace.Out, "--json");
+        var trials = Resume.StoredTrial.Parse(history.Output);
         Assert.Equal(4, trials.Count);
-        Assert.All(trials, t => Assert.Equal("done", t.State));
+        Assert.True(trials.All(t => t.State == "done"), history.Output);
     }
 
     [Fact]

@@ -14,6 +14,13 @@ public sealed class WorkerCommand(IAnsiConsole console) : AsyncCommand<WorkerSet
 {
     public override async Task<int> ExecuteAsync(CommandContext context, WorkerSettings settings, CancellationToken cancellationToken)
     {
+        if (settings.ClearCache)
+        {
+            string folder = settings.Cache ?? new WorkerOptions().CacheDirectory;
+            console.MarkupLine($"Deleted {CacheFolder.Clear(folder)} cached table(s) from {Markup.Escape(folder)}");
+            return ExitCodes.Ok;
+        }
+
         IPEndPoint join;
         try
         {
@@ -27,6 +34,8 @@ public sealed class WorkerCommand(IAnsiConsole console) : AsyncCommand<WorkerSet
         var options = new WorkerOptions { Slots = settings.Slots, ThreadsPerSlot = settings.Threads };
         options.Name = settings.Name ?? options.Name;
         options.CacheDirectory = settings.Cache ?? options.CacheDirectory;
+        options.LeaveWhenDone = settings.LeaveWhenDone;
+        options.CacheLimitBytes = (long)(settings.CacheLimit * (1L << 30));
         var role = new ClusterRole
         {
             IsCoordinator = false,
@@ -38,17 +47,28 @@ public sealed class WorkerCommand(IAnsiConsole console) : AsyncCommand<WorkerSet
             Verbose = settings.Verbose,
         };
 
+        if (OpenCluster.Refusal("worker", role.Advertise, role.Certificate is not null, settings.OpenCluster) is { } refused)
+        {
+            await Console.Error.WriteLineAsync($"foldwise: {refused}");
+            return ExitCodes.Usage;
+        }
+
+        if (OpenCluster.Warning(role.Advertise, role.Certificate is not null) is { } risk)
+        {
+            console.MarkupLine($"[yellow]{Markup.Escape(risk)}[/]");
+        }
+
         using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancellationToken);
         using var sigterm = PosixSignalRegistration.Create(PosixSignal.SIGTERM, s => { s.Cancel = true; stop.Cancel(); });
         using var sigint = PosixSignalRegistration.Create(PosixSignal.SIGINT, s => { s.Cancel = true; stop.Cancel(); });
         console.MarkupLine($"Worker [bold]{Markup.Escape(options.Name)}[/] joining {Markup.Escape(join.ToString())} from {role.Advertise}" +
                            (role.Certificate is null ? " (no certificate)" : " (mutual TLS)") + "; Ctrl-C to leave");
         string[] commandLine = [.. context.Arguments];
-        await new WorkerHost(role, options, Console.Out)
+        string? refusal = await new WorkerHost(role, options, Console.Out)
         {
             StartOver = attempts => FreshProcess.Restart(commandLine, attempts),
             EarlierAttempts = int.TryParse(Environment.GetEnvironmentVariable(FreshProcess.AttemptVariable), out int earlier) ? earlier : 0,
         }.RunAsync(stop.Token);
-        return ExitCodes.Ok;
+        return refusal is null ? ExitCodes.Ok : ExitCodes.Refused;
     }
 }

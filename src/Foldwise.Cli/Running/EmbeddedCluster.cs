@@ -48,8 +48,13 @@ public sealed class EmbeddedCluster : IAsyncDisposable
         if (role.SiloPort != 0)
         {
             // Networked: say how to join, and who comes and goes (one plain line each).
+            if (OpenCluster.Warning(role.Advertise, role.Certificate is not null) is { } risk)
+            {
+                Console.Out.WriteLine(risk);
+            }
+
             Console.Out.WriteLine($"Coordinator listening on {role.Advertise}:{role.SiloPort}" +
-                                  (role.Certificate is null ? " (no certificate: any machine that reaches the port can join)" : " (mutual TLS)") +
+                                  (role.Certificate is null ? " (no certificate)" : " (mutual TLS)") +
                                   $"; workers join with: foldwise worker --join {role.Advertise}:{role.SiloPort}" + (role.Certificate is null ? "" : " --cert FILE"));
             host.Services.GetRequiredService<ClusterMembers>().Changed += line => Console.Out.WriteLine($"cluster {line}");
         }

@@ -157,6 +157,13 @@ public sealed class SearchRun(IAnsiConsole console)
             return ExitCodes.Interrupted;
         }
 
+        if (session.StoreFault is { } fault)
+        {
+            console.MarkupLine($"[red]Stopped: the store in {Markup.Escape(outDir)} refused a write ({Markup.Escape(fault)}). Every trial committed before is kept; " +
+                               $"free space, then 'foldwise resume {Markup.Escape(outDir)}' continues the search.[/]");
+            return ExitCodes.Failed;
+        }
+
         var progress = coordinator.Progress();
         store.UpdateSpent(progress.SpentSeconds, finished: false);
         if (progress.Done == 0)

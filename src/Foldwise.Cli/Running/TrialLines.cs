@@ -3,7 +3,10 @@ using Microsoft.Extensions.Logging;
 
 namespace Foldwise.Cli.Running;
 
-/// <summary>Prints the slot runner's own messages (a trial done, a lease lost) as plain lines: a worker's visible heartbeat.</summary>
+/// <summary>
+/// Prints the slot runner's information messages (a trial done) as plain lines on stdout: a worker's visible heartbeat.
+/// Its warnings and errors (a trial failed, a lease lost) go to stderr with every other warning.
+/// </summary>
 internal sealed class TrialLines(TextWriter output) : ILoggerProvider
 {
     private static readonly string Category = typeof(SlotRunner).FullName!;
@@ -20,7 +23,7 @@ internal sealed class TrialLines(TextWriter output) : ILoggerProvider
         public IDisposable? BeginScope<TState>(TState state)
             where TState : notnull => null;
 
-        public bool IsEnabled(LogLevel logLevel) => logLevel >= LogLevel.Information;
+        public bool IsEnabled(LogLevel logLevel) => logLevel == LogLevel.Information;
 
         public void Log<TState>(LogLevel logLevel, EventId eventId, TState state, Exception? exception, Func<TState, Exception?, string> formatter)
         {

@@ -30,7 +30,8 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
     /// <summary>Attempts made before this process started (a fresh process continues the count).</summary>
     public int EarlierAttempts { get; init; }
 
-    public async Task RunAsync(CancellationToken stopping)
+    /// <summary>Runs until stopped; returns null then, or the one line saying why this worker cannot work for the cluster.</summary>
+    public async Task<string?> RunAsync(CancellationToken stopping)
     {
         int attempt = EarlierAttempts;
         while (!stopping.IsCancellationRequested)
@@ -41,10 +42,23 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
             {
                 await host.StartAsync(stopping);
                 output.WriteLine($"Joined the cluster at {role.Join} as {options.Name} with {options.Slots} slot(s), {options.Threads} thread(s) each");
-                string why = await WatchAsync(host, stopping);
+                var end = await WatchAsync(host, stopping);
+                if (end.Refusal is { } refusal)
+                {
+                    output.WriteLine($"Cannot work for {role.Join}: {refusal}");
+                    await StopQuietly(host);
+                    return refusal;
+                }
+
+                if (end.Left)
+                {
+                    await StopQuietly(host);
+                    break;
+                }
+
                 if (!stopping.IsCancellationRequested)
                 {
-                    output.WriteLine($"Lost the cluster ({why}); joining again");
+                    output.WriteLine(end.Why);
                 }
             }
             catch (OperationCanceledException) when (stopping.IsCancellationRequested)
@@ -66,12 +80,15 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
         }
 
         output.WriteLine("Worker stopped");
+        return null;
     }
 
     private IHost Build()
     {
         var builder = Host.CreateApplicationBuilder([]);
         ConsoleLogging.Configure(builder.Logging, role.Verbose);
+        // The slots' information lines are printed by TrialLines below; the console logger keeps their warnings only.
+        builder.Logging.AddFilter<Microsoft.Extensions.Logging.Console.ConsoleLoggerProvider>(typeof(SlotRunner).FullName, LogLevel.Warning);
 
         // One line per trial this worker runs, whatever the log level.
         builder.Logging.AddProvider(new TrialLines(output));
@@ -84,19 +101,49 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
         return builder.Build();
     }
 
-    /// <summary>Returns when the worker should start over: the silo stopped itself, or the coordinator stayed unreachable.</summary>
-    private async Task<string> WatchAsync(IHost host, CancellationToken stopping)
+    /// <summary>
+    /// Returns when the worker should start over (the silo stopped itself, or the coordinator stayed unreachable), leave
+    /// (refused, or its search finished and it was asked to leave then), or was stopped. Says which search it works on,
+    /// and plainly when that search finished, so the coordinator going away after a search is not mistaken for a fault.
+    /// </summary>
+    private async Task<WatchEnd> WatchAsync(IHost host, CancellationToken stopping)
     {
         var lifetime = host.Services.GetRequiredService<IHostApplicationLifetime>();
         var board = host.Services.GetRequiredService<IGrainFactory>().GetGrain<ISearchBoardGrain>(0);
+        var stop = host.Services.GetRequiredService<WorkerStop>();
         using var either = CancellationTokenSource.CreateLinkedTokenSource(stopping, lifetime.ApplicationStopping);
         DateTime? unreachableSince = null;
+        string[] active = [];
+        string? finished = null;
         while (!either.IsCancellationRequested)
         {
+            if (stop.Reason is { } refusal)
+            {
+                return new WatchEnd("", refusal, Left: false);
+            }
+
             try
             {
-                await board.ActiveSearchesAsync().WaitAsync(TimeSpan.FromSeconds(5), either.Token);
+                string[] now = await board.ActiveSearchesAsync().WaitAsync(TimeSpan.FromSeconds(5), either.Token);
                 unreachableSince = null;
+                foreach (string started in now.Except(active))
+                {
+                    output.WriteLine($"Working on search {started}");
+                }
+
+                foreach (string ended in active.Except(now))
+                {
+                    finished = ended;
+                    output.WriteLine(options.LeaveWhenDone
+                        ? $"Search {ended} finished; leaving as asked"
+                        : $"Search {ended} finished; waiting for the next search (Ctrl-C to leave)");
+                    if (options.LeaveWhenDone)
+                    {
+                        return new WatchEnd("", null, Left: true);
+                    }
+                }
+
+                active = now;
             }
             catch (OperationCanceledException) when (either.IsCancellationRequested)
             {
@@ -104,10 +151,20 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
             }
             catch (Exception e) when (e is not OperationCanceledException || !either.IsCancellationRequested)
             {
+                if (unreachableSince is null && active.Length == 0 && finished is not null)
+                {
+                    output.WriteLine($"The coordinator of search {finished} has stopped; waiting for it to run the next search");
+                }
+
                 unreachableSince ??= DateTime.UtcNow;
                 if (DateTime.UtcNow - unreachableSince >= LostAfter)
                 {
-                    return $"coordinator unreachable for {LostAfter.TotalSeconds:F0} s: {FirstLine(e)}";
+                    return new WatchEnd(
+                        finished is not null && active.Length == 0
+                            ? "Rejoining to wait for the coordinator's next search"
+                            : $"Lost the cluster (coordinator unreachable for {LostAfter.TotalSeconds:F0} s: {FirstLine(e)}); joining again",
+                        null,
+                        Left: false);
                 }
             }
 
@@ -121,8 +178,11 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, TextWrit
             }
         }
 
-        return "the silo was stopped by the cluster";
+        return new WatchEnd("Lost the cluster (the silo was stopped by the cluster); joining again", stop.Reason, Left: false);
     }
+
+    /// <summary>How watching ended: the line to print before joining again, a refusal, or leaving.</summary>
+    private sealed record WatchEnd(string Why, string? Refusal, bool Left);
 
     private static async Task StopQuietly(IHost host)
     {

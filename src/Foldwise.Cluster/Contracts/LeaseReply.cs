@@ -10,7 +10,8 @@ public sealed record LeaseReply(
     [property: Id(4)] Dictionary<string, double> Parameters,
     [property: Id(5)] int Budget,
     [property: Id(6)] int Seed,
-    [property: Id(7)] TimeSpan LeaseDuration)
+    [property: Id(7)] TimeSpan LeaseDuration,
+    [property: Id(8)] string? Reason = null)
 {
     public static LeaseReply Waiting { get; } = new(LeaseStatus.Wait, 0, 0, "", [], 0, 0, TimeSpan.Zero);
 

@@ -6,7 +6,8 @@ namespace Foldwise.Cluster.Coordination;
 
 /// <summary>
 /// One running search on the coordinator: Core's <see cref="SearchCoordinator"/> plus the store it records into.
-/// It lives outside any grain, so a grain that is deactivated and activated again loses nothing.
+/// It lives outside any grain, so a grain that is deactivated and activated again loses nothing. A failed write to the
+/// store (a full disk) stops the search at once: what was committed before stays, and <c>resume</c> continues.
 /// </summary>
 public sealed class CoordinatorSession
 {
@@ -33,12 +34,19 @@ public sealed class CoordinatorSession
     /// <summary>Completes once the search has stopped creating trials and none is running.</summary>
     public Task Finished => finished.Task;
 
+    /// <summary>Why the search stopped on a failed store write (e.g. "IOException: No space left on device"); null while the store takes every write.</summary>
+    public string? StoreFault { get; private set; }
+
     /// <summary>Raised after a trial's result is committed (for progress lines).</summary>
     public event Action<TrialRecord>? TrialFinished;
 
-    public LeaseReply Lease(string worker, string slot)
+    public LeaseReply Lease(string worker, string slot, IReadOnlyCollection<string>? families = null)
     {
-        var grant = Coordinator.Lease(worker, slot);
+        if (StoreFault is not null || !Writing(() => Coordinator.Lease(worker, slot, families), out var grant))
+        {
+            return LeaseReply.Done;
+        }
+
         CheckFinished();
         return grant.Kind switch
         {
@@ -52,6 +60,7 @@ public sealed class CoordinatorSession
                 grant.Seed,
                 grant.Trial.LeaseExpires!.Value - grant.Trial.Started!.Value),
             LeaseKind.Wait => LeaseReply.Waiting,
+            LeaseKind.Quarantined => LeaseReply.Waiting with { Status = LeaseStatus.Quarantined, Reason = grant.Reason },
             _ => LeaseReply.Done,
         };
     }
@@ -68,8 +77,13 @@ public sealed class CoordinatorSession
                 return false;
             }
 
-            recorder.SaveVectors(report.TrialId, report.OutOfFold, report.Test);
-            bool accepted = Coordinator.Complete(report.TrialId, report.Attempt, report.Score, [.. report.FoldScores]);
+            if (StoreFault is not null ||
+                !Writing(() => { recorder.SaveVectors(report.TrialId, report.OutOfFold, report.Test); return true; }, out _) ||
+                !Writing(() => Coordinator.Complete(report.TrialId, report.Attempt, report.Score, [.. report.FoldScores]), out bool accepted))
+            {
+                return false;
+            }
+
             if (accepted)
             {
                 TrialFinished?.Invoke(Coordinator.Trial(report.TrialId)!);
@@ -82,7 +96,11 @@ public sealed class CoordinatorSession
 
     public bool Release(int trialId, int attempt, string reason, bool interrupted)
     {
-        bool released = Coordinator.Release(trialId, attempt, reason, interrupted);
+        if (StoreFault is not null || !Writing(() => Coordinator.Release(trialId, attempt, reason, interrupted), out bool released))
+        {
+            return false;
+        }
+
         CheckFinished();
         return released;
     }
@@ -96,16 +114,44 @@ public sealed class CoordinatorSession
             .ToArray();
         return new ProgressReply(
             p.Created, p.Queued, p.Running, p.Done, p.Failed, p.TrialBudget, p.SpentSeconds, p.HoursBudget,
-            p.BestByFamily.ToDictionary(), p.Stopping?.ToString(), p.Finished, runningOn);
+            p.BestByFamily.ToDictionary(), p.Stopping?.ToString(), p.Finished, runningOn, p.Quarantined?.ToDictionary());
     }
 
     /// <summary>Called about once a second: expires lost leases and records the time spent.</summary>
     public void Tick()
     {
-        Coordinator.ExpireLeases();
-        var progress = Coordinator.Progress();
-        recorder.UpdateSpent(progress.SpentSeconds, finished: false);
+        if (StoreFault is not null)
+        {
+            return;
+        }
+
+        Writing(() =>
+        {
+            Coordinator.ExpireLeases();
+            recorder.UpdateSpent(Coordinator.Progress().SpentSeconds, finished: false);
+            return true;
+        }, out _);
         CheckFinished();
+    }
+
+    /// <summary>Runs one write to the store; on failure records the fault, ends the search, and returns false.</summary>
+    private bool Writing<T>(Func<T> write, out T result)
+    {
+        try
+        {
+            result = write();
+            return true;
+        }
+#pragma warning disable CA1031 // Whatever the store threw, the search must stop rather than run on with results it cannot keep.
+        catch (Exception e)
+#pragma warning restore CA1031
+        {
+            result = default!;
+            StoreFault ??= $"{e.GetType().Name}: {e.Message.Split('\n')[0].Trim()}";
+            span.End(Coordinator.Progress());
+            finished.TrySetResult();
+            return false;
+        }
     }
 
     private void CheckFinished()

@@ -101,6 +101,7 @@ public static class FoldwiseSiloExtensions
         services.AddSingleton<TableCache>();
         services.AddSingleton<TrialDataCache>();
         services.AddSingleton<SlotStatistics>();
+        services.AddSingleton<WorkerStop>();
         services.AddHostedService<SlotPump>();
         return services;
     }

@@ -7,7 +7,8 @@ namespace Foldwise.Cluster.Workers;
 
 /// <summary>
 /// Tables by content hash: in memory, then on local disk, then fetched from the coordinator in chunks.
-/// Every fetched or cached byte string is checked against its hash before it is decoded.
+/// Every fetched or cached byte string is checked against its hash before it is decoded. The folder is its owner's
+/// only and kept under <see cref="WorkerOptions.CacheLimitBytes"/> (see <see cref="CacheFolder"/>).
 /// </summary>
 public sealed class TableCache(IGrainFactory grains, WorkerOptions options)
 {
@@ -36,12 +37,13 @@ public sealed class TableCache(IGrainFactory grains, WorkerOptions options)
 
     private async Task<FeatureTable> LoadAsync(string hash, CancellationToken cancellation)
     {
-        string path = Path.Combine(options.CacheDirectory, hash + ".fwt");
+        string path = Path.Combine(options.CacheDirectory, hash + CacheFolder.Extension);
         if (File.Exists(path))
         {
             var cached = await File.ReadAllBytesAsync(path, cancellation);
             if (Matches(cached, hash))
             {
+                CacheFolder.Touch(path);
                 return TableCodec.Decode(cached, path);
             }
 
@@ -49,10 +51,11 @@ public sealed class TableCache(IGrainFactory grains, WorkerOptions options)
         }
 
         var bytes = await FetchAsync(hash, cancellation);
-        Directory.CreateDirectory(options.CacheDirectory);
+        CacheFolder.Ensure(options.CacheDirectory);
         string partial = path + "." + Environment.ProcessId + ".part";
-        await File.WriteAllBytesAsync(partial, bytes, cancellation);
+        await CacheFolder.WriteAsync(partial, bytes, cancellation);
         File.Move(partial, path, overwrite: true);
+        CacheFolder.Prune(options.CacheDirectory, Math.Max(options.CacheLimitBytes, bytes.LongLength));
         return TableCodec.Decode(bytes, path);
     }
 
