@@ -22,7 +22,7 @@ internal static class ProcessUtilisation
         File.WriteAllText(Path.Combine(root, "search.json"), """
             { "name": "bench-cluster", "data": { "train": "train.csv", "test": "test.csv", "id": "id", "target": "y" },
               "folds": 3, "screening": { "min_nonzero": 2 }, "families": { "lightgbm": { "min_leaf_rows": 3 } },
-              "schedule": { "kind": "asha", "proposer": "random", "min_rounds": 300, "max_rounds": 900, "eta": 3 },
+              "schedule": { "kind": "asha", "proposer": "random", "first_rung": 300, "full_budget": 900, "eta": 3 },
               "budget": { "trials": 24 } }
             """);
         int port = FreePort();

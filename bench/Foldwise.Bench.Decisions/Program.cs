@@ -20,9 +20,9 @@ var definition = new SearchDefinition
     Families =
     [
         new FamilySearch(FamilyNames.LightGbm, DefaultSpaces.LightGbm),
-        new FamilySearch(FamilyNames.FastTree, new ParameterSpace([.. DefaultSpaces.FastTree.Ranges, ParameterRange.Choice("bagging", "off", "on")])),
+        new FamilySearch(FamilyNames.FastTree, new ParameterSpace([.. DefaultSpaces.FastTree.Ranges, ParameterRange.OneOf("bagging", "off", "on")])),
     ],
-    Schedule = new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, MinBudget: 25, MaxBudget: 400, Eta: 3),
+    Schedule = new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, FirstRung: 25, FullBudget: 400, Eta: 3),
     Budget = new SearchBudget(Trials: History + Decisions + Slots, Hours: null),
     Seed = 1,
 };

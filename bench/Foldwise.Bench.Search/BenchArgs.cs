@@ -5,14 +5,14 @@ using Foldwise.Core.Spaces;
 
 internal sealed record BenchArgs(
     string Part, DemoSize Size, int[] SeedList, int RandomTrials, int AshaTrials, ScheduleKind Schedule,
-    int Min, int Max, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe, ProposerKind Proposer, bool Ladder, int DrawOffset, int Brackets)
+    int FirstRung, int FullBudget, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe, ProposerKind Proposer, bool Ladder, int DrawOffset, int Brackets)
 {
-    public string RandomFile(int seed) => $"random-{Size}-{Family}-r{Max}-seed{seed}.tsv".ToLowerInvariant();
+    public string RandomFile(int seed) => $"random-{Size}-{Family}-r{FullBudget}-seed{seed}.tsv".ToLowerInvariant();
 
     /// <summary>What proposes the scheduled search's new candidates: TPE, independent or joint, or random draws (a control).</summary>
     public string ProposerLabel => Proposer == ProposerKind.Random ? "random" : $"TPE {(JointTpe ? "joint" : "independent")}, {(Ladder ? "ladder" : "top budget")}";
 
-    public string AshaFile(int seed) => $"{Schedule}-{(Proposer == ProposerKind.Random ? "random" : (JointTpe ? "tpejoint" : "tpe1d") + (Ladder ? "ladder" : ""))}-{Size}-{Family}-r{Min}-{Max}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}{(DrawOffset != 0 ? $"-d{DrawOffset}" : "")}{(Brackets > 1 ? $"-b{Brackets}" : "")}-seed{seed}.tsv".ToLowerInvariant();
+    public string AshaFile(int seed) => $"{Schedule}-{(Proposer == ProposerKind.Random ? "random" : (JointTpe ? "tpejoint" : "tpe1d") + (Ladder ? "ladder" : ""))}-{Size}-{Family}-r{FirstRung}-{FullBudget}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}{(DrawOffset != 0 ? $"-d{DrawOffset}" : "")}{(Brackets > 1 ? $"-b{Brackets}" : "")}-seed{seed}.tsv".ToLowerInvariant();
 
     public static BenchArgs Parse(string[] args)
     {
@@ -41,8 +41,8 @@ internal sealed record BenchArgs(
             Int("--random-trials", "16"),
             Int("--asha-trials", "10000"),
             Enum.Parse<ScheduleKind>(Get("--schedule", "asha"), ignoreCase: true),
-            Int("--min", "20"),
-            Int("--max", "180"),
+            Int("--first-rung", "20"),
+            Int("--full-budget", "180"),
             Int("--eta", "3"),
             Int("--threads", "2"),
             Get("--family", FamilyNames.LightGbm),

@@ -1,4 +1,5 @@
 using System.Globalization;
+using Foldwise.Core.Definition;
 
 /// <summary>
 /// Reads the traces of the seeds asked for and prints, for random search after half and after all of its trials,
@@ -14,7 +15,7 @@ internal static class Comparison
         var fractions = targets.ToDictionary(t => t, _ => new List<double>());
         double[] shares = [0.125, 0.25, 0.5, 1.0];
         var gaps = shares.ToDictionary(f => f, _ => new List<double>());
-        Console.WriteLine($"{options.Schedule}{(options.Brackets > 1 ? $" in {options.Brackets} brackets" : "")} ({options.ProposerLabel}) rounds {options.Min}..{options.Max}, eta {options.Eta}, rate exponent {options.RateExponent} against random search at {options.Max} rounds; {options.Size} table, {options.Family}");
+        Console.WriteLine($"{DefinitionWords.Of(options.Schedule)}{(options.Brackets > 1 ? $" in {options.Brackets} brackets" : "")} ({options.ProposerLabel}) rounds {options.FirstRung}..{options.FullBudget}, eta {options.Eta}, rate exponent {options.RateExponent} against random search at {options.FullBudget} rounds; {options.Size} table, {options.Family}");
         Console.WriteLine("seed  random trials  random best  random compute  asha compute to reach  fraction  asha trials so far  asha best (trials, at max)");
         foreach (int seed in options.SeedList)
         {
@@ -31,7 +32,7 @@ internal static class Comparison
                 gaps[share].Add(EqualComputeGap(random, asha, share * random[^1].Compute));
             }
 
-            string ashaBest = string.Create(c, $"{asha[^1].Best:F5} ({asha.Count}, {asha.Count(r => r.Budget == options.Max)})");
+            string ashaBest = string.Create(c, $"{asha[^1].Best:F5} ({asha.Count}, {asha.Count(r => r.Budget == options.FullBudget)})");
             foreach (int count in targets)
             {
                 double target = random[count - 1].Best;

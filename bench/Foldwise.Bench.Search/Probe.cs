@@ -7,7 +7,7 @@ using Foldwise.Learners;
 /// <summary>
 /// How well a short rung ranks candidates: reruns random search's traced candidates (already scored at the full
 /// budget) at a short budget, with the learning rate scaled by each exponent asked for, and compares the orders.
-/// At the full budget (--probe-rounds equal to --max) it refits them with other fit seeds: the fitting noise.
+/// At the full budget (--probe-rounds equal to --full-budget) it refits them with other fit seeds: the fitting noise.
 /// </summary>
 internal static class Probe
 {
@@ -21,12 +21,12 @@ internal static class Probe
         foreach (double exponent in exponents)
         {
             var rate = new ShortRungRate(exponent);
-            var shortScores = random.Select(r => executor.Run(data, rate.For(Parse(r.Parameters), budget, options.Max), budget, seed + r.Trial, options.Threads, CancellationToken.None).Score).ToArray();
+            var shortScores = random.Select(r => executor.Run(data, rate.For(Parse(r.Parameters), budget, options.FullBudget), budget, seed + r.Trial, options.Threads, CancellationToken.None).Score).ToArray();
             var promoted = Enumerable.Range(0, random.Count).OrderBy(i => shortScores[i]).Take(kept).ToArray();
             double bestPromoted = promoted.Min(i => full[i]);
             Console.WriteLine(string.Create(c,
-                $"seed {seed}  rounds {budget}  exponent {exponent:F2}  spearman {Spearman(shortScores, full),6:F3}  best of top {kept} at {options.Max}: {bestPromoted:F5} (regret {bestPromoted - bestFull:F5})  top-1 regret {full[promoted[0]] - bestFull:F5}  best at {budget}: {shortScores.Min():F5}"));
-            if (budget == options.Max)
+                $"seed {seed}  rounds {budget}  exponent {exponent:F2}  spearman {Spearman(shortScores, full),6:F3}  best of top {kept} at {options.FullBudget}: {bestPromoted:F5} (regret {bestPromoted - bestFull:F5})  top-1 regret {full[promoted[0]] - bestFull:F5}  best at {budget}: {shortScores.Min():F5}"));
+            if (budget == options.FullBudget)
             {
                 // At the full budget the probe only changes the fit seed: how much of a score is fitting noise.
                 int bestAt = Array.IndexOf(full, bestFull);

@@ -28,13 +28,13 @@ if (options.Part != "report")
     var train = ColumnScreen.Apply(report, rawTrain);
     var test = ColumnScreen.Apply(report, rawTest);
     Console.WriteLine($"table {options.Size}: {train.RowCount} × {train.FeatureCount} after screening; family {options.Family}; " +
-                      $"{options.Schedule} rounds {options.Min}..{options.Max}, eta {options.Eta}, rate exponent {options.RateExponent}, proposer {options.ProposerLabel}, brackets {options.Brackets}; random {options.RandomTrials} trials at {options.Max}; {options.Threads} threads");
+                      $"{DefinitionWords.Of(options.Schedule)} rounds {options.FirstRung}..{options.FullBudget}, eta {options.Eta}, rate exponent {options.RateExponent}, proposer {options.ProposerLabel}, brackets {options.Brackets}; random {options.RandomTrials} trials at {options.FullBudget}; {options.Threads} threads");
 
     // Test predictions are part of every trial but not of the comparison: a 50-row test slice keeps them cheap.
     var testRows = test.ToRows();
     var testSlice = new Foldwise.Core.Data.SparseRowMatrix(50, testRows.ColumnCount, testRows.RowStarts[..51],
         testRows.ColumnIndices[..testRows.RowStarts[50]], testRows.Values[..testRows.RowStarts[50]]);
-    double randomCompute = (double)options.RandomTrials * options.Max * train.RowCount;
+    double randomCompute = (double)options.RandomTrials * options.FullBudget * train.RowCount;
     foreach (int seed in options.SeedList)
     {
         var metric = Metric.Rmsle;
@@ -62,7 +62,7 @@ if (options.Part != "report")
             var asha = SearchRun.Run(data, options, options.Schedule, options.Proposer, options.AshaTrials, seed + options.DrawOffset, stopBelow, computeCap: randomCompute);
             string ashaPath = Path.Combine(options.Out, options.AshaFile(seed));
             Trace.Write(ashaPath, asha);
-            Console.WriteLine($"seed {seed}: {options.Schedule} ({options.ProposerLabel}) best {asha.Min(r => r.Score):F5} after {asha.Count} trials ({asha.Count(r => r.Budget == options.Max)} at {options.Max} rounds), {asha.Sum(r => r.Seconds):F0} s → {ashaPath}");
+            Console.WriteLine($"seed {seed}: {DefinitionWords.Of(options.Schedule)} ({options.ProposerLabel}) best {asha.Min(r => r.Score):F5} after {asha.Count} trials ({asha.Count(r => r.Budget == options.FullBudget)} at {options.FullBudget} rounds), {asha.Sum(r => r.Seconds):F0} s → {ashaPath}");
         }
     }
 }

@@ -18,10 +18,10 @@ internal static class SearchRun
             Data = new DataSource("-", "-", "id", "y"),
             Seed = seed,
             Families = [new FamilySearch(options.Family, DefaultSpaces.For(options.Family))],
-            Schedule = new ScheduleOptions(kind, proposer, options.Min, options.Max, options.Eta, options.RateExponent, kind == ScheduleKind.Asha ? options.Brackets : 1),
+            Schedule = new ScheduleOptions(kind, proposer, options.FirstRung, options.FullBudget, options.Eta, options.RateExponent, kind == ScheduleKind.Asha ? options.Brackets : 1),
             Budget = new SearchBudget(trials, null),
         };
-        var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition, new TpeOptions(Multivariate: options.JointTpe, Ladder: options.Ladder)), new NoJournal(), TimeProvider.System);
+        var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition, new TpeOptions(Joint: options.JointTpe, Ladder: options.Ladder)), new NoJournal(), TimeProvider.System);
         var executor = new TrialExecutor(LearnerCatalog.BuiltIn.Get(options.Family));
         var rows = new List<TraceRow>();
         double compute = 0, best = double.PositiveInfinity;

@@ -27,7 +27,7 @@ public static class FoldwiseApp
             .WithExample("history", "runs/demo/search.db");
         config.AddCommand<BlendCommand>("blend")
             .WithDescription("Solve the blend again from the stored out-of-fold predictions, store it, and rewrite the prediction file.")
-            .WithExample("blend", "runs/demo/search.db", "--mode", "nonneg", "--pool", "5");
+            .WithExample("blend", "runs/demo/search.db", "--mode", "non_negative", "--pool", "5");
         config.AddCommand<ExportCommand>("export")
             .WithDescription("Write every full-budget trial's out-of-fold predictions (original scale) to a CSV file.")
             .WithExample("export", "runs/demo/search.db", "--oof", "runs/demo/oof.csv");
@@ -42,7 +42,7 @@ public static class FoldwiseApp
             .WithExample("report", "runs/demo/search.db", "--out", "runs/demo/report.html");
         config.AddCommand<PlanCommand>("plan")
             .WithDescription("Print the rung and bracket plan for a budget range, to size a search before running it.")
-            .WithExample("plan", "--min-budget", "1", "--max-budget", "81", "--eta", "3");
+            .WithExample("plan", "--first-rung", "20", "--full-budget", "180", "--eta", "9");
         config.AddCommand<WorkerCommand>("worker")
             .WithDescription("Offer this machine's slots to a coordinator ('run --port P') until Ctrl-C; rejoins by itself when the coordinator restarts.")
             .WithExample("worker", "--join", "office-pc-7:11111", "--cert", "cluster.pfx");

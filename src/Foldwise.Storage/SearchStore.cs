@@ -132,8 +132,8 @@ public sealed partial class SearchStore : ISearchRecorder, IDisposable
         }
     }
 
-    // Shared mode everywhere: Connection=direct takes no lock between processes on Linux (STACK-NOTES.md),
-    // so a direct reader could read pages mid-write. The full path keeps every process on the same mutex name.
+    // Shared mode everywhere: Connection=direct takes no lock between processes on Linux (in a probe, two direct
+    // writers silently lost half their inserts), so a direct reader could read pages mid-write. The full path keeps every process on the same mutex name.
     private static LiteDatabase Connect(string fullPath, bool readOnly) => new(new ConnectionString
     {
         Filename = fullPath,

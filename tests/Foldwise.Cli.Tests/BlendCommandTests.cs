@@ -12,7 +12,7 @@ public sealed class BlendCommandTests(FinishedSearch search) : IClassFixture<Fin
 {
     [Theory]
     [InlineData("simplex")]
-    [InlineData("nonneg")]
+    [InlineData("non_negative")]
     [InlineData("greedy")]
     public void Lists_each_pool_member_with_its_trial_and_weight_as_json(string mode)
     {
@@ -26,7 +26,8 @@ public sealed class BlendCommandTests(FinishedSearch search) : IClassFixture<Fin
         Assert.All(members, m => Assert.True(m.GetProperty("trial").GetInt32() > 0));
         Assert.All(members, m => Assert.InRange(m.GetProperty("weight").GetDouble(), 0, double.MaxValue));
         double sum = members.Sum(m => m.GetProperty("weight").GetDouble());
-        if (mode != "nonneg")
+        Assert.Equal(mode, json.RootElement.GetProperty("mode").GetString());
+        if (mode != "non_negative")
         {
             Assert.Equal(1, sum, 9);
         }
@@ -37,12 +38,21 @@ public sealed class BlendCommandTests(FinishedSearch search) : IClassFixture<Fin
     }
 
     [Fact]
+    public void Refuses_the_retired_mode_word_and_names_the_definitions_spelling()
+    {
+        var blend = CliHarness.Run("blend", search.Store, "--mode", "nonneg");
+
+        Assert.Equal(ExitCodes.Usage, blend.ExitCode);
+        Assert.Contains("--mode 'nonneg' is not one of simplex, non_negative, greedy ('nonneg' is a retired name; did you mean non_negative?)", blend.Output);
+    }
+
+    [Fact]
     public void Prints_the_chosen_trials_weights_and_both_estimates_for_a_person()
     {
         var blend = CliHarness.Run("blend", search.Workspace.Out);
 
         Assert.True(blend.ExitCode == 0, blend.Output);
-        Assert.Contains("Blend (Simplex)", blend.Output);
+        Assert.Contains("Blend (simplex)", blend.Output);
         Assert.Contains("weight", blend.Output);
         Assert.Contains("in-sample", blend.Output);
         Assert.Contains("nested estimate", blend.Output);

@@ -33,7 +33,7 @@ public sealed class DemoCommandTests : IDisposable
         Assert.Contains("Search stopped (trial budget reached): 40 done", demo.Output);
         Assert.Contains("nested estimate", demo.Output);
         var rows = File.ReadAllLines(Path.Combine(workspace.Out, "predictions.csv"));
-        Assert.Equal("shipper_id,q1_spend", rows[0]);
+        Assert.Equal("shipper_id,predicted_q1_spend", rows[0]);
         Assert.Equal(2001, rows.Length);
     }
 }

@@ -7,7 +7,7 @@ public sealed class PlanCommandTests
     [Fact]
     public void Prints_the_published_hyperband_table_for_81_rounds_and_eta_3()
     {
-        var plan = CliHarness.Run("plan", "--min-budget", "1", "--max-budget", "81", "--eta", "3", "--json");
+        var plan = CliHarness.Run("plan", "--first-rung", "1", "--full-budget", "81", "--eta", "3", "--json");
 
         // Hyperband bracket table, R=81, eta=3 — Li et al., JMLR 18(185), 2018, Table 1: (n_i, r_i) per bracket
         int[][][] published =
@@ -30,7 +30,7 @@ public sealed class PlanCommandTests
     [Fact]
     public void Prints_the_plan_as_a_table_a_person_reads()
     {
-        var plan = CliHarness.Run("plan", "--min-budget", "25", "--max-budget", "400", "--eta", "3");
+        var plan = CliHarness.Run("plan", "--first-rung", "25", "--full-budget", "400", "--eta", "3");
 
         Assert.Equal(0, plan.ExitCode);
         Assert.Contains("ASHA rungs (rounds): 25 → 75 → 225 → 400", plan.Output);
@@ -42,7 +42,7 @@ public sealed class PlanCommandTests
     [Fact]
     public void Prints_what_each_asha_bracket_costs_and_its_share_of_new_candidates()
     {
-        var plan = CliHarness.Run("plan", "--min-budget", "20", "--max-budget", "180", "--eta", "3", "--json");
+        var plan = CliHarness.Run("plan", "--first-rung", "20", "--full-budget", "180", "--eta", "3", "--json");
 
         // Worked by hand: 20 + 60/3 + 180/9 = 60, 60 + 180/3 = 120, 180; equal compute gives shares 1/60 : 1/120 : 1/180 = 6 : 3 : 2 of 11
         Assert.Equal(0, plan.ExitCode);
@@ -52,7 +52,30 @@ public sealed class PlanCommandTests
         Assert.Equal([60.0, 120.0, 180.0], brackets.Select(b => b.GetProperty("mean_rounds").GetDouble()));
         Assert.Equal([Math.Round(6 / 11.0, 4), Math.Round(3 / 11.0, 4), Math.Round(2 / 11.0, 4)], brackets.Select(b => b.GetProperty("share_of_new_candidates").GetDouble()));
 
-        var text = CliHarness.Run("plan", "--min-budget", "20", "--max-budget", "180", "--eta", "3");
+        var text = CliHarness.Run("plan", "--first-rung", "20", "--full-budget", "180", "--eta", "3");
         Assert.Contains("bracket 3 starts at 180 rounds, 180 per candidate on average; with all 3, new candidates split 55 % : 27 % : 18 %", text.Output.ReplaceLineEndings(" ").Replace("  ", " "));
+    }
+
+    [Theory]
+    [InlineData("--min-budget", "20", "--first-rung")]
+    [InlineData("--max-budget", "180", "--full-budget")]
+    public void Refuses_the_retired_budget_options_and_names_their_replacements(string retired, string value, string replacement)
+    {
+        var plan = CliHarness.Run("plan", retired, value, "--eta", "9");
+
+        Assert.Equal(ExitCodes.Usage, plan.ExitCode);
+        Assert.Contains($"{retired} is a retired name; did you mean {replacement}?", plan.Output);
+    }
+
+    [Fact]
+    public void Numbers_hyperband_brackets_from_one_with_their_halvings_beside_them()
+    {
+        var plan = CliHarness.Run("plan", "--first-rung", "1", "--full-budget", "9", "--eta", "3", "--json");
+
+        // s_max = 2 for R = 9, η = 3: brackets 1, 2, 3 halve 2, 1 and 0 times (Li et al., JMLR 18(185), 2018, Algorithm 1)
+        using var json = JsonDocument.Parse(plan.Output);
+        var brackets = json.RootElement.GetProperty("hyperband").EnumerateArray().ToArray();
+        Assert.Equal([1, 2, 3], brackets.Select(b => b.GetProperty("bracket").GetInt32()));
+        Assert.Equal([2, 1, 0], brackets.Select(b => b.GetProperty("halvings").GetInt32()));
     }
 }

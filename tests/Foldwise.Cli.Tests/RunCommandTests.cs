@@ -45,7 +45,7 @@ public sealed class RunCommandTests : IDisposable
         Assert.Contains("Search stopped (trial budget reached): 10 done", run.Output);
         Assert.Contains("nested estimate", run.Output);
         var lines = File.ReadAllLines(Path.Combine(workspace.Out, "predictions.csv"));
-        Assert.Equal("id,y", lines[0]);
+        Assert.Equal("id,predicted_y", lines[0]);
         Assert.Equal(Enumerable.Range(0, 20).Select(r => $"b{r}"), lines.Skip(1).Select(l => l.Split(',')[0]));
         Assert.All(lines.Skip(1), l =>
         {

@@ -54,7 +54,7 @@ public sealed class Workspace : IDisposable
           "folds": 3,
           "screening": { "min_nonzero": 2 },
           "families": { "lightgbm": { "min_leaf_rows": 3 }, "fasttree": { "min_leaf_rows": 3 } },
-          "schedule": { "kind": "asha", "proposer": "random", "min_rounds": 5, "max_rounds": 15, "eta": 3 },
+          "schedule": { "kind": "asha", "proposer": "random", "first_rung": 5, "full_budget": 15, "eta": 3 },
           "budget": { "trials": {{trials}} }{{extra}}
         }
         """);

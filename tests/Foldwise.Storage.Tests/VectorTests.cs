@@ -72,7 +72,7 @@ public sealed class VectorTests : IDisposable
             store.SaveVectors(id, outOfFold, []);
         }
 
-        // 1–5 ms measured here on 2 shared cores (STACK-NOTES.md: 1–2 ms); the bound leaves room for a busy machine.
+        // 1–5 ms measured here on 2 shared cores (1–2 ms in an earlier probe); the bound leaves room for a busy machine.
         double perCall = watch.Elapsed.TotalMilliseconds / 10;
         Assert.True(perCall < 50, $"SaveVectors of 50,000 doubles took {perCall:F1} ms per call.");
     }

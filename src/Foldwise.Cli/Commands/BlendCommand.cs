@@ -28,7 +28,7 @@ public sealed class BlendCommand(IAnsiConsole console) : Command<BlendSettings>
         {
             var root = new JsonObject
             {
-                ["mode"] = blend.Mode.ToString().ToLowerInvariant(),
+                ["mode"] = DefinitionWords.Of(blend.Mode),
                 ["in_sample_score"] = blend.InSampleScore,
                 ["nested_score"] = blend.NestedScore,
                 ["nested_fold_scores"] = new JsonArray([.. blend.NestedFoldScores.Select(s => (JsonNode?)s)]),

@@ -13,7 +13,7 @@ public sealed class BlendSettings : CommandSettings
     public string Store { get; init; } = "";
 
     [CommandOption("--mode <MODE>")]
-    [Description("simplex (w ≥ 0, Σw = 1; the default), nonneg (w ≥ 0 only) or greedy (forward selection with replacement).")]
+    [Description("simplex (w ≥ 0, Σw = 1; the default), non_negative (w ≥ 0 only) or greedy (forward selection with replacement), spelled as blend.mode in a definition.")]
     public string? Mode { get; init; }
 
     [CommandOption("--pool <K>")]
@@ -24,20 +24,17 @@ public sealed class BlendSettings : CommandSettings
     [Description("Print the blend as JSON.")]
     public bool Json { get; init; }
 
-    public BlendMode? ParsedMode => Mode?.ToLowerInvariant() switch
-    {
-        null => null,
-        "simplex" => BlendMode.Simplex,
-        "nonneg" => BlendMode.NonNegative,
-        "greedy" => BlendMode.Greedy,
-        _ => throw new InvalidOperationException("unreachable: validated"),
-    };
+    public BlendMode? ParsedMode => Mode is null ? null
+        : DefinitionWords.TryBlendMode(Mode, out var mode) ? mode
+        : throw new InvalidOperationException("unreachable: validated");
 
     public override ValidationResult Validate()
     {
-        if (Mode is { } m && m.ToLowerInvariant() is not ("simplex" or "nonneg" or "greedy"))
+        if (Mode is { } m && !DefinitionWords.TryBlendMode(m, out _))
         {
-            return ValidationResult.Error($"--mode '{m}' is not one of simplex, nonneg, greedy");
+            string? renamed = RetiredNames.ReplacementOf(m);
+            string hint = renamed is null ? "" : $" ('{m}' is a retired name; did you mean {renamed}?)";
+            return ValidationResult.Error($"--mode '{m}' is not one of {string.Join(", ", DefinitionWords.BlendModes)}{hint}");
         }
 
         return Pool is < 1 ? ValidationResult.Error("--pool must be at least 1") : ValidationResult.Success();

@@ -16,8 +16,8 @@ public static class DemoDefinition
         Seed = seed,
         Families = [.. FamilyNames.All.Select(f => new FamilySearch(f, DefaultSpaces.For(f)))],
         Schedule = quick
-            ? new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, MinBudget: 20, MaxBudget: 180, Eta: 3)
-            : new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, MinBudget: 25, MaxBudget: 400, Eta: 3),
+            ? new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, FirstRung: 20, FullBudget: 180, Eta: 3)
+            : new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, FirstRung: 25, FullBudget: 400, Eta: 3),
         Budget = quick ? new SearchBudget(Trials: 40, Hours: null) : new SearchBudget(Trials: 60, Hours: 3),
     };
 }

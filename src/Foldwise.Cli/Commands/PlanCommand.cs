@@ -13,9 +13,9 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
 {
     public override int Execute(CommandContext context, PlanSettings settings, CancellationToken cancellationToken)
     {
-        var plan = HyperbandPlan.For(settings.MinBudget, settings.MaxBudget, settings.Eta);
-        var rungs = RungBudgets.For(settings.MinBudget, settings.MaxBudget, settings.Eta);
-        var rates = rungs.Select(b => ShortRungRate.Default.Multiplier(b, settings.MaxBudget)).ToArray();
+        var plan = HyperbandPlan.For(settings.FirstRung, settings.FullBudget, settings.Eta);
+        var rungs = RungBudgets.For(settings.FirstRung, settings.FullBudget, settings.Eta);
+        var rates = rungs.Select(b => ShortRungRate.Default.Multiplier(b, settings.FullBudget)).ToArray();
 
         // With every bracket asked for (schedule.brackets = rungs): where each starts, what a candidate costs there on
         // average, and the share of new candidates that equal compute per bracket gives it.
@@ -23,16 +23,17 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
         var starts = Enumerable.Range(0, hedge.Count).Select(b => (Bracket: b + 1, Budget: rungs[b], Rounds: hedge.CostOf(b), Share: hedge.ShareOf(b))).ToArray();
         if (settings.Json)
         {
-            var brackets = new JsonArray([.. plan.Brackets.Select(b => (JsonNode?)new JsonObject
+            var brackets = new JsonArray([.. plan.Brackets.Select((b, i) => (JsonNode?)new JsonObject
             {
-                ["s"] = b.S,
+                ["bracket"] = i + 1,
+                ["halvings"] = b.S,
                 ["rounds"] = b.Rounds,
                 ["rungs"] = new JsonArray([.. b.Rungs.Select(r => (JsonNode?)new JsonObject { ["candidates"] = r.Count, ["budget"] = r.Budget })]),
             })]);
             var root = new JsonObject
             {
-                ["min_budget"] = settings.MinBudget,
-                ["max_budget"] = settings.MaxBudget,
+                ["first_rung"] = settings.FirstRung,
+                ["full_budget"] = settings.FullBudget,
                 ["eta"] = settings.Eta,
                 ["asha_rungs"] = new JsonArray([.. rungs.Select(r => (JsonNode?)r)]),
                 ["rate_multipliers"] = new JsonArray([.. rates.Select(r => (JsonNode?)Math.Round(r, 4))]),
@@ -56,18 +57,19 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
             $"; with all {starts.Length}, new candidates split {string.Join(" : ", starts.Select(b => b.Share.ToString("P0")))}.");
         int widest = plan.Brackets.Max(b => b.Rungs.Length);
         var table = new Table()
-            .Title($"Hyperband brackets, {settings.MinBudget} to {settings.MaxBudget} rounds, η = {settings.Eta}")
+            .Title($"Hyperband brackets, {settings.FirstRung} to {settings.FullBudget} rounds, η = {settings.Eta}")
             .Caption("each cell: candidates × rounds");
-        table.AddColumn("bracket s");
+        table.AddColumn("bracket");
+        table.AddColumn("halvings");
         for (int i = 0; i < widest; i++)
         {
             table.AddColumn($"rung {i}");
         }
 
         table.AddColumn("total rounds");
-        foreach (var bracket in plan.Brackets)
+        foreach (var (bracket, i) in plan.Brackets.Select((b, i) => (b, i)))
         {
-            var cells = new List<string> { bracket.S.ToString() };
+            var cells = new List<string> { (i + 1).ToString(), bracket.S.ToString() };
             cells.AddRange(bracket.Rungs.Select(r => $"{r.Count} × {r.Budget}"));
             cells.AddRange(Enumerable.Repeat("", widest - bracket.Rungs.Length));
             cells.Add(bracket.Rounds.ToString("N0"));

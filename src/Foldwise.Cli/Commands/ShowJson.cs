@@ -2,6 +2,7 @@ using System.Text.Json;
 using System.Text.Json.Nodes;
 using Foldwise.Cli.Output;
 using Foldwise.Cli.Report;
+using Foldwise.Core.Schedules;
 using Foldwise.Core.Search;
 
 namespace Foldwise.Cli.Commands;
@@ -32,7 +33,7 @@ public static class ShowJson
             ["fold_sd"] = t.FoldScores.Length > 1 ? BlendView.Spread(t.FoldScores) : null,
             ["budget"] = t.Budget,
             ["rung"] = t.Rung,
-            ["bracket"] = t.Bracket,
+            ["bracket"] = BracketNumbers.For(search.Definition.Schedule).Of(t.Bracket),
             ["parent"] = t.ParentId,
             ["parent_chain"] = new JsonArray([.. ShowLineage.Chain(t, search.Trials).Skip(1).Select(c => (JsonNode?)c.Id)]),
             ["promoted_to"] = new JsonArray([.. ShowLineage.Children(t, search.Trials).Select(c => (JsonNode?)c.Id)]),

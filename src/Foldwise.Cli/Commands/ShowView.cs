@@ -1,6 +1,7 @@
 using System.Globalization;
 using Foldwise.Cli.Output;
 using Foldwise.Cli.Report;
+using Foldwise.Core.Schedules;
 using Foldwise.Core.Search;
 using Spectre.Console;
 
@@ -18,8 +19,9 @@ public static class ShowView
         var facts = new Grid().AddColumn(new GridColumn().NoWrap()).AddColumn();
         void Fact(string name, string value) => facts.AddRow(name, Markup.Escape(value));
 
-        // Bracket 0: a schedule without brackets (plain ASHA, full budget).
-        Fact("rung", $"{t.Rung}{(t.Bracket > 0 ? $" (bracket {t.Bracket})" : "")}, {t.Budget} rounds");
+        // No bracket: a schedule without brackets (plain ASHA, full budget).
+        int? bracket = BracketNumbers.For(search.Definition.Schedule).Of(t.Bracket);
+        Fact("rung", $"{t.Rung}{(bracket is { } b ? $" (bracket {b})" : "")}, {t.Budget} rounds");
         Fact("proposed by", t.ParentId is { } p ? $"{t.Proposer} of trial {p}" : t.Proposer);
         var chain = ShowLineage.Chain(t, search.Trials);
         if (chain.Count > 1)
@@ -78,8 +80,8 @@ public static class ShowView
     public static string RangeText(Core.Spaces.ParameterRange range) => range switch
     {
         { IsFixed: true } => "fixed",
-        { Kind: Core.Spaces.ParameterKind.Choice } => string.Join(" | ", range.Choices),
-        { Kind: Core.Spaces.ParameterKind.LogFloat } => $"{range.Display(range.Low)} to {range.Display(range.High)} (log)",
+        { Kind: Core.Spaces.ParameterKind.OneOf } => string.Join(" | ", range.Choices),
+        { Kind: Core.Spaces.ParameterKind.Log } => $"{range.Display(range.Low)} to {range.Display(range.High)} (log)",
         _ => $"{range.Display(range.Low)} to {range.Display(range.High)}",
     };
 

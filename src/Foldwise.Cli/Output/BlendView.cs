@@ -1,4 +1,5 @@
 using Foldwise.Core.Blending;
+using Foldwise.Core.Definition;
 using Foldwise.Core.Metrics;
 using Foldwise.Core.Search;
 using Spectre.Console;
@@ -11,7 +12,7 @@ public static class BlendView
     public static void Render(IAnsiConsole console, BlendSummary blend, Metric metric, IReadOnlyList<TrialRecord> trials)
     {
         var byId = trials.ToDictionary(t => t.Id);
-        var table = new Table().Title($"Blend ({blend.Mode})").AddColumns("trial", "family", "rounds", $"OOF {metric.Name}", "weight");
+        var table = new Table().Title($"Blend ({DefinitionWords.Of(blend.Mode)})").AddColumns("trial", "family", "rounds", $"OOF {metric.Name}", "weight");
         foreach (var member in blend.Members.Where(m => m.Weight > 0).OrderByDescending(m => m.Weight))
         {
             var trial = byId.GetValueOrDefault(member.TrialId);

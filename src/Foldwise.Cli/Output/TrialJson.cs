@@ -1,5 +1,7 @@
 using System.Text.Json;
 using System.Text.Json.Nodes;
+using Foldwise.Core.Definition;
+using Foldwise.Core.Schedules;
 using Foldwise.Core.Search;
 
 namespace Foldwise.Cli.Output;
@@ -9,8 +11,10 @@ public static class TrialJson
 {
     private static readonly JsonSerializerOptions Indented = new() { WriteIndented = true };
 
-    public static string Write(IEnumerable<TrialRecord> trials)
+    /// <param name="schedule">Numbers the brackets as plan does (<see cref="BracketNumbers"/>).</param>
+    public static string Write(IEnumerable<TrialRecord> trials, ScheduleOptions schedule)
     {
+        var brackets = BracketNumbers.For(schedule);
         var array = new JsonArray();
         foreach (var t in trials)
         {
@@ -28,7 +32,7 @@ public static class TrialJson
                 ["score"] = t.Score,
                 ["fold_scores"] = new JsonArray([.. t.FoldScores.Select(s => (JsonNode?)s)]),
                 ["rung"] = t.Rung,
-                ["bracket"] = t.Bracket,
+                ["bracket"] = brackets.Of(t.Bracket),
                 ["budget"] = t.Budget,
                 ["parent"] = t.ParentId,
                 ["proposer"] = t.Proposer,

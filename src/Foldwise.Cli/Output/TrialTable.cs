@@ -1,5 +1,6 @@
 using Foldwise.Core.Definition;
 using Foldwise.Core.Metrics;
+using Foldwise.Core.Schedules;
 using Foldwise.Core.Search;
 using Spectre.Console;
 
@@ -12,7 +13,8 @@ public static class TrialTable
     public static void Render(IAnsiConsole console, IReadOnlyList<TrialRecord> trials, SearchDefinition definition, Metric metric, bool wide = false)
     {
         var spaces = definition.Families.ToDictionary(f => f.Family, f => f.Space);
-        // Bracket 0 means the schedule has none (plain ASHA, full budget): the column would only say 0.
+        // A schedule without brackets (plain ASHA, full budget) stores 0: the column would say nothing.
+        var brackets = BracketNumbers.For(definition.Schedule);
         bool bracketed = trials.Any(t => t.Bracket > 0);
         string[] columns = ["trial", "family", "state", "rung", .. bracketed ? ["bracket"] : Array.Empty<string>(), "rounds", $"OOF {metric.Name}", "fold sd", "from", "machine/slot", "secs"];
         var table = new Table().Border(TableBorder.Simple).AddColumns(columns);
@@ -29,7 +31,7 @@ public static class TrialTable
                 t.Family,
                 t.State.ToString().ToLowerInvariant(),
                 t.Rung.ToString(),
-                .. bracketed ? [t.Bracket.ToString()] : Array.Empty<string>(),
+                .. bracketed ? [brackets.Of(t.Bracket)?.ToString() ?? ""] : Array.Empty<string>(),
                 t.Budget.ToString(),
                 t.Score?.ToString("F5") ?? "",
                 t.FoldScores.Length > 1 ? BlendView.Spread(t.FoldScores).ToString("F4") : "",
@@ -50,11 +52,11 @@ public static class TrialTable
                            $"{trials.Count(t => t.State == TrialState.Running)} running, {trials.Count(t => t.State == TrialState.Queued)} queued, " +
                            $"{trials.Count(t => t.State == TrialState.Failed)} failed.");
         var schedule = definition.Schedule;
-        if (wide && schedule.RateScaling > 0 && trials.Any(t => t.Budget < schedule.MaxBudget))
+        if (wide && schedule.RateScaling > 0 && trials.Any(t => t.Budget < schedule.FullBudget))
         {
             console.MarkupLine(Markup.Escape(
-                $"Parameters are as drawn; a trial below {schedule.MaxBudget} rounds ran learning_rate × ({schedule.MaxBudget} / rounds)" +
-                $"{(schedule.RateScaling == 1 ? "" : $"^{schedule.RateScaling:G3}")}, at most {Core.Schedules.ShortRungRate.Ceiling:G} (schedule.rate_scaling)."));
+                $"Parameters are as drawn; a trial below {schedule.FullBudget} rounds ran learning_rate × ({schedule.FullBudget} / rounds)" +
+                $"{(schedule.RateScaling == 1 ? "" : $"^{schedule.RateScaling:G3}")}, at most {ShortRungRate.Ceiling:G} (schedule.rate_scaling)."));
         }
     }
 }

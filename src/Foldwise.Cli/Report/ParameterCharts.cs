@@ -54,14 +54,14 @@ public static class ParameterCharts
             series.Add(family, xs.Length);
         }
 
-        if (shown is { Kind: ParameterKind.Choice })
+        if (shown is { Kind: ParameterKind.OneOf })
         {
             plot.Axes.Bottom.SetTicks([.. Enumerable.Range(0, shown.Choices.Length).Select(i => (double)i)], [.. shown.Choices]);
         }
 
         // The page names the family colours above the grid; a legend in a small chart would hide its points.
         plot.HideLegend();
-        plot.XLabel(shown is { Kind: ParameterKind.LogFloat } ? $"{name} (log10)" : name);
+        plot.XLabel(shown is { Kind: ParameterKind.Log } ? $"{name} (log10)" : name);
         plot.YLabel(search.Metric.Name);
         return new ChartSection(
             id,
@@ -73,7 +73,7 @@ public static class ParameterCharts
     }
 
     private static double Position(ParameterRange range, double value) =>
-        range.Kind == ParameterKind.LogFloat && value > 0 ? Math.Log10(value) : value;
+        range.Kind == ParameterKind.Log && value > 0 ? Math.Log10(value) : value;
 
     /// <summary>|Spearman rank correlation| of the parameter with the score; 0 with fewer than 3 points.</summary>
     public static double Strength(IReadOnlyList<TrialRecord> trials, string name)

@@ -26,13 +26,13 @@ public static class BlendStep
         using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.BlendSpan);
         var metric = Metric.For(definition.Metric);
         var trials = store.LoadTrials();
-        var pool = BlendPool.Select(trials, options.Pool, definition.Schedule.MaxBudget);
+        var pool = BlendPool.Select(trials, options.Pool, definition.Schedule.FullBudget);
         if (pool.Count == 0)
         {
             // No candidate reached the full budget (a very small trial budget): blend what went furthest.
             int furthest = trials.Where(t => t.State == TrialState.Done).Max(t => t.Budget);
             pool = BlendPool.Select(trials, options.Pool, furthest);
-            console.MarkupLine($"[yellow]No trial reached the full {definition.Schedule.MaxBudget} rounds; blending trials at {furthest} rounds.[/]");
+            console.MarkupLine($"[yellow]No trial reached the full {definition.Schedule.FullBudget} rounds; blending trials at {furthest} rounds.[/]");
         }
 
         var vectors = pool.Select(t => store.LoadVectors(t.Id) ?? throw new InvalidOperationException($"trial {t.Id} is done but its predictions are missing from the store")).ToList();
@@ -50,7 +50,7 @@ public static class BlendStep
         string path = Path.Combine(outDir, PredictionFileName);
         PredictionFile.Write(path, definition.Data.IdColumn, definition.Data.TargetColumn, header.TestIds, [.. blended.Select(metric.Inverse)]);
         store.SaveBlend(result.Summary);
-        span?.SetTag("foldwise.blend.mode", result.Summary.Mode.ToString()).SetTag("foldwise.blend.pool", pool.Count)
+        span?.SetTag("foldwise.blend.mode", DefinitionWords.Of(result.Summary.Mode)).SetTag("foldwise.blend.pool", pool.Count)
             .SetTag("foldwise.blend.nested", result.Summary.NestedScore).SetTag("foldwise.blend.in_sample", result.Summary.InSampleScore);
         Output.BlendView.Render(console, result.Summary, metric, trials);
         console.MarkupLine($"Wrote [bold]{Markup.Escape(path)}[/]: {header.TestIds.Length:N0} predictions.");

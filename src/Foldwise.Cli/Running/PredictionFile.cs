@@ -3,7 +3,10 @@ using System.Globalization;
 
 namespace Foldwise.Cli.Running;
 
-/// <summary>Writes <c>id,target</c> rows in test order, to a temporary file first so no half-written file is ever left.</summary>
+/// <summary>
+/// Writes the test predictions under the header <c>&lt;id&gt;,predicted_&lt;target&gt;</c>, one row per test row in test
+/// order, to a temporary file first so no half-written file is ever left.
+/// </summary>
 public static class PredictionFile
 {
     public static void Write(string path, string idColumn, string targetColumn, ImmutableArray<string> ids, IReadOnlyList<double> predictions)
@@ -18,7 +21,7 @@ public static class PredictionFile
         {
             writer.Write(Quote(idColumn));
             writer.Write(',');
-            writer.WriteLine(Quote(targetColumn));
+            writer.WriteLine(Quote(ColumnFor(targetColumn)));
             for (int i = 0; i < ids.Length; i++)
             {
                 double p = predictions[i];
@@ -35,6 +38,9 @@ public static class PredictionFile
 
         File.Move(partial, path, overwrite: true);
     }
+
+    /// <summary>The prediction column's name: the target's, marked as predicted.</summary>
+    public static string ColumnFor(string targetColumn) => "predicted_" + targetColumn;
 
     private static string Quote(string field) =>
         field.AsSpan().IndexOfAny(",\"\r\n") >= 0 ? "\"" + field.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : field;

@@ -64,7 +64,7 @@ public sealed class SearchRun(IAnsiConsole console)
         string outDir = Path.GetDirectoryName(storePath)!;
         using var store = SearchStore.Open(storePath);
         var header = store.LoadHeader() ?? throw new StoreException($"{storePath} holds no search header: it was stopped before its first record, so no trial ran. Start it again with 'foldwise run' (the same --out works).");
-        var definition = DefinitionReader.Parse(header.DefinitionJson, storePath, outDir);
+        var definition = DefinitionReader.ParseStored(header.DefinitionJson, storePath, outDir);
         if (header.Finished)
         {
             string predictions = Path.Combine(outDir, BlendStep.PredictionFileName);
@@ -137,7 +137,7 @@ public sealed class SearchRun(IAnsiConsole console)
         using var linked = CancellationTokenSource.CreateLinkedTokenSource(cancellation, stopping.Abandon);
         stopping.StopRequested += coordinator.RequestStop;
 
-        console.MarkupLine($"Search [bold]{Markup.Escape(header.SearchId)}[/]: {definition.Schedule.Kind} with {definition.Schedule.Proposer}, " +
+        console.MarkupLine($"Search [bold]{Markup.Escape(header.SearchId)}[/]: {DefinitionWords.Of(definition.Schedule.Kind)} with {DefinitionWords.Of(definition.Schedule.Proposer)}, " +
                            $"{string.Join(" + ", definition.Families.Select(f => f.Family))}, {definition.Folds}-fold, {slots} local slot(s)");
         try
         {

@@ -37,7 +37,7 @@ public static class FoldwiseTelemetryExtensions
             {
                 m.AddMeter(FoldwiseTelemetry.Name, FoldwiseTelemetry.OrleansMeter);
 
-                // The SDK's default buckets assume milliseconds (STACK-NOTES); trials are timed in seconds.
+                // The SDK's default buckets are sized for milliseconds; trials are timed in seconds (TelemetryTests pins these buckets).
                 m.AddView(FoldwiseTelemetry.TrialDuration, new ExplicitBucketHistogramConfiguration { Boundaries = FoldwiseTelemetry.DurationBuckets });
                 if (options.Otlp)
                 {

@@ -7,8 +7,11 @@ namespace Foldwise.Core.Definition;
 /// <summary>
 /// The strict checks every part of a definition shares: known keys only, the right JSON type, whole
 /// numbers, bounds. Each failure is an <see cref="InputException"/> naming the key's path and position.
+/// A retired name (<see cref="RetiredNames"/>) is refused with its replacement suggested, unless
+/// <paramref name="acceptRetired"/> is set (reading a definition a store kept from an earlier version),
+/// when it is read as its replacement.
 /// </summary>
-internal sealed class DefinitionCheck(string file)
+internal sealed class DefinitionCheck(string file, bool acceptRetired = false)
 {
     public InputException Fail(TextPosition at, string problem) => new(file, problem, at.Line, at.Column);
 
@@ -30,22 +33,35 @@ internal sealed class DefinitionCheck(string file)
         }
 
         var members = new Dictionary<string, DefinitionMember>(StringComparer.Ordinal);
-        foreach (var member in node.Members)
+        var ordered = new List<DefinitionMember>();
+        foreach (var given in node.Members)
         {
+            var member = given;
             if (!known.Contains(member.Key))
             {
-                string? near = NearestName.Find(member.Key, known);
-                string hint = near is null ? "" : $"; did you mean '{near}'?";
-                throw Fail(member.KeyPosition, $"unknown {noun} '{member.Path}'{hint} ({listing}: {string.Join(", ", known)})");
+                string? renamed = RetiredNames.ReplacementOf(member.Key) is { } r && known.Contains(r) ? r : null;
+                if (renamed is not null && acceptRetired)
+                {
+                    member = member with { Key = renamed };
+                }
+                else
+                {
+                    string? near = renamed ?? NearestName.Find(member.Key, known);
+                    string retired = renamed is null ? "" : " (a retired name)";
+                    string hint = near is null ? "" : $"; did you mean '{near}'?";
+                    throw Fail(member.KeyPosition, $"unknown {noun} '{member.Path}'{retired}{hint} ({listing}: {string.Join(", ", known)})");
+                }
             }
 
             if (!members.TryAdd(member.Key, member))
             {
                 throw Fail(member.KeyPosition, $"'{member.Path}' is given twice");
             }
+
+            ordered.Add(member);
         }
 
-        return new StrictObject(node, members);
+        return new StrictObject(node, members, ordered);
     }
 
     public DefinitionMember Require(StrictObject obj, string key) =>
@@ -106,8 +122,15 @@ internal sealed class DefinitionCheck(string file)
             return value;
         }
 
-        string? near = NearestName.Find(node.Text!, table.Names);
+        string? renamed = RetiredNames.ReplacementOf(node.Text!) is { } r && table.Names.Contains(r) ? r : null;
+        if (renamed is not null && acceptRetired && table.TryParse(renamed, out value))
+        {
+            return value;
+        }
+
+        string? near = renamed ?? NearestName.Find(node.Text!, table.Names);
+        string retired = renamed is null ? "" : " (a retired name)";
         string hint = near is null ? "" : $"; did you mean \"{near}\"?";
-        throw Fail(node, $"{Label(node)} cannot be \"{node.Text}\"{hint} (valid: {valid})");
+        throw Fail(node, $"{Label(node)} cannot be \"{node.Text}\"{retired}{hint} (valid: {valid})");
     }
 }

@@ -8,10 +8,10 @@ internal static class DefinitionNames
     public static readonly string[] RootKeys = ["name", "data", "metric", "folds", "seed", "screening", "families", "schedule", "budget", "blend"];
     public static readonly string[] DataKeys = ["train", "test", "id", "target"];
     public static readonly string[] ScreeningKeys = ["min_nonzero"];
-    public static readonly string[] ScheduleKeys = ["kind", "proposer", "min_rounds", "max_rounds", "eta", "rate_scaling", "brackets"];
+    public static readonly string[] ScheduleKeys = ["kind", "proposer", "first_rung", "full_budget", "eta", "rate_scaling", "brackets"];
     public static readonly string[] BudgetKeys = ["trials", "hours"];
     public static readonly string[] BlendKeys = ["mode", "pool"];
-    public static readonly string[] RangeKeys = ["int", "float", "log", "choice"];
+    public static readonly string[] RangeKeys = ["whole", "linear", "log", "one_of"];
 
     public static readonly NameTable<MetricKind> Metrics = new(("rmsle", MetricKind.Rmsle), ("rmse", MetricKind.Rmse), ("mae", MetricKind.Mae));
 

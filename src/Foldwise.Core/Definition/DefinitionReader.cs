@@ -36,8 +36,16 @@ public static class DefinitionReader
     public static SearchDefinition Parse(string json, string sourcePath, string baseDirectory) =>
         Parse(Encoding.UTF8.GetBytes(json), sourcePath, baseDirectory, DefinitionDefaults.BuiltInFamilies);
 
+    /// <summary>
+    /// Reads the definition text a store kept. A store written before a name was retired holds the old name
+    /// (<see cref="RetiredNames"/>), so here each retired name is read as its replacement; a file a person writes is
+    /// held to the current names by <see cref="Parse(string, string, string)"/>.
+    /// </summary>
+    public static SearchDefinition ParseStored(string json, string sourcePath, string baseDirectory) =>
+        Parse(Encoding.UTF8.GetBytes(json), sourcePath, baseDirectory, DefinitionDefaults.BuiltInFamilies, acceptRetired: true);
+
     // Test seam: the families a file may name, with their default spaces.
-    internal static SearchDefinition Parse(ReadOnlySpan<byte> utf8, string sourcePath, string baseDirectory, IReadOnlyList<FamilySearch> builtIn)
+    internal static SearchDefinition Parse(ReadOnlySpan<byte> utf8, string sourcePath, string baseDirectory, IReadOnlyList<FamilySearch> builtIn, bool acceptRetired = false)
     {
         ReadOnlySpan<byte> bom = [0xEF, 0xBB, 0xBF];
         if (utf8.StartsWith(bom))
@@ -45,7 +53,7 @@ public static class DefinitionReader
             utf8 = utf8[bom.Length..];
         }
 
-        var check = new DefinitionCheck(sourcePath);
+        var check = new DefinitionCheck(sourcePath, acceptRetired);
         var root = check.Object(DefinitionTree.Parse(utf8, sourcePath), DefinitionNames.RootKeys);
         var definition = new SearchDefinition
         {

@@ -51,8 +51,8 @@ public static class DefinitionWriter
             {
                 json.WriteString("kind", DefinitionNames.Schedules.NameOf(schedule.Kind));
                 json.WriteString("proposer", DefinitionNames.Proposers.NameOf(schedule.Proposer));
-                json.WriteNumber("min_rounds", schedule.MinBudget);
-                json.WriteNumber("max_rounds", schedule.MaxBudget);
+                json.WriteNumber("first_rung", schedule.FirstRung);
+                json.WriteNumber("full_budget", schedule.FullBudget);
                 json.WriteNumber("eta", schedule.Eta);
                 json.WriteNumber("rate_scaling", schedule.RateScaling);
                 json.WriteNumber("brackets", schedule.Brackets);
@@ -87,7 +87,7 @@ public static class DefinitionWriter
         json.WriteEndObject();
     }
 
-    // Each range goes on one line as raw JSON: {"int": [8, 128]} reads better than the writer's six lines.
+    // Each range goes on one line as raw JSON: {"whole": [8, 128]} reads better than the writer's six lines.
     private static void Space(Utf8JsonWriter json, ParameterSpace space)
     {
         foreach (var range in space.Ranges)
@@ -100,12 +100,12 @@ public static class DefinitionWriter
     internal static string Range(ParameterRange range) => range.Kind switch
     {
         // Fixed ints and floats read back as bare numbers; a fixed log range keeps its kind.
-        ParameterKind.Integer when range.IsFixed => Number(range.Low),
-        ParameterKind.Float when range.IsFixed => Number(range.Low),
-        ParameterKind.Integer => $"{{\"int\": [{Number(range.Low)}, {Number(range.High)}]}}",
-        ParameterKind.Float => $"{{\"float\": [{Number(range.Low)}, {Number(range.High)}]}}",
-        ParameterKind.LogFloat => $"{{\"log\": [{Number(range.Low)}, {Number(range.High)}]}}",
-        _ => $"{{\"choice\": [{string.Join(", ", range.Choices.Select(c => $"\"{JsonEncodedText.Encode(c, Options.Encoder)}\""))}]}}",
+        ParameterKind.Whole when range.IsFixed => Number(range.Low),
+        ParameterKind.Linear when range.IsFixed => Number(range.Low),
+        ParameterKind.Whole => $"{{\"whole\": [{Number(range.Low)}, {Number(range.High)}]}}",
+        ParameterKind.Linear => $"{{\"linear\": [{Number(range.Low)}, {Number(range.High)}]}}",
+        ParameterKind.Log => $"{{\"log\": [{Number(range.Low)}, {Number(range.High)}]}}",
+        _ => $"{{\"one_of\": [{string.Join(", ", range.Choices.Select(c => $"\"{JsonEncodedText.Encode(c, Options.Encoder)}\""))}]}}",
     };
 
     // "R" is the shortest text that parses back to the same double, e.g. 0.01, 1E-05; JSON accepts both forms.

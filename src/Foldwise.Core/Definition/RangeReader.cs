@@ -4,8 +4,8 @@ using Foldwise.Core.Spaces;
 namespace Foldwise.Core.Definition;
 
 /// <summary>
-/// Reads one parameter's range: <c>{"int": [lo, hi]}</c>, <c>{"float": [lo, hi]}</c>, <c>{"log": [lo, hi]}</c>,
-/// <c>{"choice": ["a", "b"]}</c>, or a bare number for a fixed value. The family's default range decides
+/// Reads one parameter's range: <c>{"whole": [lo, hi]}</c>, <c>{"linear": [lo, hi]}</c>, <c>{"log": [lo, hi]}</c>,
+/// <c>{"one_of": ["a", "b"]}</c>, or a bare number for a fixed value. The family's default range decides
 /// which of these fit: whole-number parameters take int, real ones float or log, named ones choice.
 /// </summary>
 internal sealed class RangeReader(DefinitionCheck check)
@@ -31,10 +31,10 @@ internal sealed class RangeReader(DefinitionCheck check)
         var member = range.Members.Single();
         var kind = member.Key switch
         {
-            "int" => ParameterKind.Integer,
-            "float" => ParameterKind.Float,
-            "log" => ParameterKind.LogFloat,
-            _ => ParameterKind.Choice,
+            "whole" => ParameterKind.Whole,
+            "linear" => ParameterKind.Linear,
+            "log" => ParameterKind.Log,
+            _ => ParameterKind.OneOf,
         };
 
         if (!Fits(kind, standard.Kind))
@@ -42,22 +42,22 @@ internal sealed class RangeReader(DefinitionCheck check)
             throw check.Fail(member.KeyPosition, $"'{node.Path}' {Takes(standard.Kind)}, not '{member.Key}': write {Example(standard.Kind)}");
         }
 
-        return kind == ParameterKind.Choice ? Choice(member.Value, standard) : Bounds(member.Value, standard.Name, kind);
+        return kind == ParameterKind.OneOf ? OneOf(member.Value, standard) : Bounds(member.Value, standard.Name, kind);
     }
 
     private ParameterRange Fixed(DefinitionNode node, ParameterRange standard)
     {
-        if (standard.Kind == ParameterKind.Choice)
+        if (standard.Kind == ParameterKind.OneOf)
         {
             throw check.Fail(node, $"'{node.Path}' {Takes(standard.Kind)}: write {Example(standard.Kind)}");
         }
 
-        double value = standard.Kind == ParameterKind.Integer ? check.Whole(node) : check.Number(node);
+        double value = standard.Kind == ParameterKind.Whole ? check.Whole(node) : check.Number(node);
         WithinLimits(node, standard.Name, value);
 
         // A whole-number parameter stays whole when fixed, so workers still reject 31.5.
-        return standard.Kind == ParameterKind.Integer
-            ? ParameterRange.Integer(standard.Name, (int)value, (int)value)
+        return standard.Kind == ParameterKind.Whole
+            ? ParameterRange.Whole(standard.Name, (int)value, (int)value)
             : ParameterRange.Fixed(standard.Name, value);
     }
 
@@ -69,14 +69,14 @@ internal sealed class RangeReader(DefinitionCheck check)
         }
 
         var (loNode, hiNode) = (node.Items[0], node.Items[1]);
-        double lo = kind == ParameterKind.Integer ? check.Whole(loNode) : check.Number(loNode);
-        double hi = kind == ParameterKind.Integer ? check.Whole(hiNode) : check.Number(hiNode);
+        double lo = kind == ParameterKind.Whole ? check.Whole(loNode) : check.Number(loNode);
+        double hi = kind == ParameterKind.Whole ? check.Whole(hiNode) : check.Number(hiNode);
         if (lo > hi)
         {
             throw check.Fail(loNode, $"'{node.Path}' has lo {loNode.Text} above hi {hiNode.Text}");
         }
 
-        if (kind == ParameterKind.LogFloat && lo <= 0)
+        if (kind == ParameterKind.Log && lo <= 0)
         {
             throw check.Fail(loNode, $"'{node.Path}' is sampled in log space, so lo must be above 0, got {loNode.Text}");
         }
@@ -86,7 +86,7 @@ internal sealed class RangeReader(DefinitionCheck check)
         return new ParameterRange(name, kind, lo, hi, []);
     }
 
-    private ParameterRange Choice(DefinitionNode node, ParameterRange standard)
+    private ParameterRange OneOf(DefinitionNode node, ParameterRange standard)
     {
         if (node.Kind != JsonValueKind.Array || node.Items.Length == 0)
         {
@@ -112,7 +112,7 @@ internal sealed class RangeReader(DefinitionCheck check)
             names.Add(name);
         }
 
-        return new ParameterRange(standard.Name, ParameterKind.Choice, 0, names.Count - 1, [.. names]);
+        return new ParameterRange(standard.Name, ParameterKind.OneOf, 0, names.Count - 1, [.. names]);
     }
 
     private void WithinLimits(DefinitionNode node, string name, double value)
@@ -125,23 +125,23 @@ internal sealed class RangeReader(DefinitionCheck check)
 
     private static bool Fits(ParameterKind given, ParameterKind standard) => standard switch
     {
-        ParameterKind.Integer => given == ParameterKind.Integer,
-        ParameterKind.Choice => given == ParameterKind.Choice,
-        _ => given is ParameterKind.Float or ParameterKind.LogFloat,
+        ParameterKind.Whole => given == ParameterKind.Whole,
+        ParameterKind.OneOf => given == ParameterKind.OneOf,
+        _ => given is ParameterKind.Linear or ParameterKind.Log,
     };
 
     private static string Takes(ParameterKind standard) => standard switch
     {
-        ParameterKind.Integer => "takes whole numbers",
-        ParameterKind.Choice => "takes named choices",
+        ParameterKind.Whole => "takes whole numbers",
+        ParameterKind.OneOf => "takes one of its named values",
         _ => "takes real numbers",
     };
 
     private static string Example(ParameterKind standard) => standard switch
     {
-        ParameterKind.Integer => "{\"int\": [lo, hi]}",
-        ParameterKind.Choice => "{\"choice\": [\"a\", \"b\"]}",
-        _ => "{\"float\": [lo, hi]} or {\"log\": [lo, hi]}",
+        ParameterKind.Whole => "{\"whole\": [lo, hi]}",
+        ParameterKind.OneOf => "{\"one_of\": [\"a\", \"b\"]}",
+        _ => "{\"linear\": [lo, hi]} or {\"log\": [lo, hi]}",
     };
 
     private static string Count(DefinitionNode node) =>

@@ -7,28 +7,28 @@ internal static class ScheduleReader
     {
         var schedule = check.Object(node, DefinitionNames.ScheduleKeys);
         var standard = new ScheduleOptions();
-        var min = schedule.Get("min_rounds")?.Value;
-        var max = schedule.Get("max_rounds")?.Value;
+        var first = schedule.Get("first_rung")?.Value;
+        var full = schedule.Get("full_budget")?.Value;
         var options = new ScheduleOptions(
             schedule.Get("kind") is { } k ? check.Word(k.Value, DefinitionNames.Schedules) : standard.Kind,
             schedule.Get("proposer") is { } p ? check.Word(p.Value, DefinitionNames.Proposers) : standard.Proposer,
-            min is null ? standard.MinBudget : check.Whole(min, 1),
-            max is null ? standard.MaxBudget : check.Whole(max, 1),
+            first is null ? standard.FirstRung : check.Whole(first, 1),
+            full is null ? standard.FullBudget : check.Whole(full, 1),
             schedule.Get("eta") is { } e ? check.Whole(e.Value, 2, " (each rung keeps 1/eta)") : standard.Eta,
             schedule.Get("rate_scaling") is { } r ? Scaling(check, r.Value) : standard.RateScaling,
             schedule.Get("brackets") is { } b ? check.Whole(b.Value, 1) : standard.Brackets);
 
-        if (options.MaxBudget < options.MinBudget)
+        if (options.FullBudget < options.FirstRung)
         {
             // Point at whichever of the two the file wrote; if it wrote one, the other is the default.
-            string problem = $"'schedule.max_rounds' ({options.MaxBudget}{(max is null ? ", the default" : "")}) " +
-                             $"is below 'schedule.min_rounds' ({options.MinBudget}{(min is null ? ", the default" : "")})";
-            throw check.Fail(max ?? min!, problem);
+            string problem = $"'schedule.full_budget' ({options.FullBudget}{(full is null ? ", the default" : "")}) " +
+                             $"is below 'schedule.first_rung' ({options.FirstRung}{(first is null ? ", the default" : "")})";
+            throw check.Fail(full ?? first!, problem);
         }
 
         if (schedule.Get("brackets") is { } given)
         {
-            var rungs = Schedules.RungBudgets.For(options.MinBudget, options.MaxBudget, options.Eta);
+            var rungs = Schedules.RungBudgets.For(options.FirstRung, options.FullBudget, options.Eta);
             if (options.Kind != ScheduleKind.Asha && options.Brackets != 1)
             {
                 throw check.Fail(given.Value, $"'schedule.brackets' applies to the asha schedule only, not '{DefinitionNames.Schedules.NameOf(options.Kind)}'");
@@ -48,6 +48,6 @@ internal static class ScheduleReader
         double value = check.Number(node);
         return value is >= 0 and <= 1
             ? value
-            : throw check.Fail(node, $"'{node.Path}' must be between 0 (short rungs run the drawn learning rate) and 1 (scaled by max_rounds / rounds), got {node.Describe()}");
+            : throw check.Fail(node, $"'{node.Path}' must be between 0 (short rungs run the drawn learning rate) and 1 (scaled by full_budget / rounds), got {node.Describe()}");
     }
 }

@@ -22,10 +22,10 @@ internal sealed class CategoricalEstimator : IUnivariateDensity
         }
     }
 
-    public static CategoricalEstimator Fit(ReadOnlySpan<double> indices, int choices, double priorWeight)
+    public static CategoricalEstimator Fit(ReadOnlySpan<double> indices, int choices, double wideKernelWeight)
     {
         var counts = new double[choices];
-        Array.Fill(counts, priorWeight);
+        Array.Fill(counts, wideKernelWeight);
         foreach (double index in indices)
         {
             counts[Math.Clamp((int)index, 0, choices - 1)] += 1.0;

@@ -16,7 +16,7 @@ internal sealed class IndependentDensity : IJointDensity
     }
 
     /// <summary>Fits every parameter on its column of <paramref name="points"/>; a prior weight of 0 leaves the prior out.</summary>
-    public static IndependentDensity Fit(TpeDimension[] dimensions, IReadOnlyList<double[]> points, double priorWeight)
+    public static IndependentDensity Fit(TpeDimension[] dimensions, IReadOnlyList<double[]> points, double wideKernelWeight)
     {
         var densities = new IUnivariateDensity[dimensions.Length];
         var column = new double[points.Count];
@@ -29,8 +29,8 @@ internal sealed class IndependentDensity : IJointDensity
 
             var dim = dimensions[d];
             densities[d] = dim.IsChoice
-                ? CategoricalEstimator.Fit(column, dim.Choices, priorWeight)
-                : ParzenEstimator.Fit(column, dim.Low, dim.High, priorWeight);
+                ? CategoricalEstimator.Fit(column, dim.Choices, wideKernelWeight)
+                : ParzenEstimator.Fit(column, dim.Low, dim.High, wideKernelWeight);
         }
 
         return new IndependentDensity(dimensions, densities);
@@ -54,7 +54,7 @@ internal sealed class IndependentDensity : IJointDensity
             double x = _densities[d].Sample(random);
 
             // Evaluate whole numbers where they will actually be tried.
-            into[d] = _dimensions[d].Range.Kind is Spaces.ParameterKind.Integer ? _dimensions[d].ToValue(x) : x;
+            into[d] = _dimensions[d].Range.Kind is Spaces.ParameterKind.Whole ? _dimensions[d].ToValue(x) : x;
         }
     }
 }

@@ -47,9 +47,9 @@ internal sealed class ParzenEstimator : IUnivariateDensity
     public int Kernels => _means.Length;
 
     /// <summary>Fits kernels on the points; a prior weight of 0 leaves the prior kernel out (for the liars' density).</summary>
-    public static ParzenEstimator Fit(ReadOnlySpan<double> points, double low, double high, double priorWeight)
+    public static ParzenEstimator Fit(ReadOnlySpan<double> points, double low, double high, double wideKernelWeight)
     {
-        bool prior = priorWeight > 0;
+        bool prior = wideKernelWeight > 0;
         int n = points.Length;
         int kernels = n + (prior ? 1 : 0);
         double width = high - low;
@@ -60,7 +60,7 @@ internal sealed class ParzenEstimator : IUnivariateDensity
         if (prior)
         {
             means[n] = low + (width / 2);
-            weights[n] = priorWeight;
+            weights[n] = wideKernelWeight;
         }
 
         // Sort kernels by mean (the prior among them, as a neighbour) to find each point's neighbours.

@@ -42,9 +42,9 @@ internal sealed class ProductKernelDensity : IJointDensity
     }
 
     /// <summary>Fits one product kernel per point; a prior weight of 0 leaves the prior kernel out (for the liars' density).</summary>
-    public static ProductKernelDensity Fit(TpeDimension[] dimensions, IReadOnlyList<double[]> points, double priorWeight)
+    public static ProductKernelDensity Fit(TpeDimension[] dimensions, IReadOnlyList<double[]> points, double wideKernelWeight)
     {
-        bool prior = priorWeight > 0;
+        bool prior = wideKernelWeight > 0;
         int n = points.Count;
         var numeric = new ParzenEstimator?[dimensions.Length];
         var choices = new int[dimensions.Length][];
@@ -64,7 +64,7 @@ internal sealed class ProductKernelDensity : IJointDensity
             else
             {
                 // Kernel i of the fit is point i; the prior, when there is one, is kernel n.
-                numeric[d] = ParzenEstimator.Fit(column, dim.Low, dim.High, priorWeight);
+                numeric[d] = ParzenEstimator.Fit(column, dim.Low, dim.High, wideKernelWeight);
             }
         }
 
@@ -72,7 +72,7 @@ internal sealed class ProductKernelDensity : IJointDensity
         Array.Fill(weights, 1.0, 0, n);
         if (prior)
         {
-            weights[n] = priorWeight;
+            weights[n] = wideKernelWeight;
         }
 
         return new ProductKernelDensity(dimensions, numeric, choices, weights, prior);
@@ -117,7 +117,7 @@ internal sealed class ProductKernelDensity : IJointDensity
             else
             {
                 double x = _numeric[d]!.SampleKernel(k, random);
-                into[d] = dim.Range.Kind is Spaces.ParameterKind.Integer ? dim.ToValue(x) : x;
+                into[d] = dim.Range.Kind is Spaces.ParameterKind.Whole ? dim.ToValue(x) : x;
             }
         }
     }

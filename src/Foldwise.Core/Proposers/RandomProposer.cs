@@ -35,8 +35,8 @@ public sealed class RandomProposer : IProposer
 
         return range.Kind switch
         {
-            ParameterKind.Integer or ParameterKind.Choice => random.NextInt64((long)range.Low, (long)range.High + 1),
-            ParameterKind.LogFloat => Math.Clamp(
+            ParameterKind.Whole or ParameterKind.OneOf => random.NextInt64((long)range.Low, (long)range.High + 1),
+            ParameterKind.Log => Math.Clamp(
                 Math.Exp(Math.Log(range.Low) + (random.NextDouble() * (Math.Log(range.High) - Math.Log(range.Low)))),
                 range.Low,
                 range.High),

@@ -14,8 +14,8 @@ internal sealed class TpeDimension
         Range = range;
         (Low, High) = range.Kind switch
         {
-            ParameterKind.LogFloat => (Math.Log(range.Low), Math.Log(range.High)),
-            ParameterKind.Integer => (range.Low - 0.5, range.High + 0.5),
+            ParameterKind.Log => (Math.Log(range.Low), Math.Log(range.High)),
+            ParameterKind.Whole => (range.Low - 0.5, range.High + 0.5),
             _ => (range.Low, range.High),
         };
     }
@@ -25,7 +25,7 @@ internal sealed class TpeDimension
 
     public ParameterRange Range { get; }
 
-    public bool IsChoice => Range.Kind == ParameterKind.Choice;
+    public bool IsChoice => Range.Kind == ParameterKind.OneOf;
 
     public int Choices => (int)Range.High + 1;
 
@@ -34,13 +34,13 @@ internal sealed class TpeDimension
     public double High { get; }
 
     /// <summary>A parameter value in model coordinates.</summary>
-    public double ToModel(double value) => Range.Kind == ParameterKind.LogFloat ? Math.Log(Math.Max(value, Range.Low)) : value;
+    public double ToModel(double value) => Range.Kind == ParameterKind.Log ? Math.Log(Math.Max(value, Range.Low)) : value;
 
     /// <summary>A model coordinate snapped to a value the range contains.</summary>
     public double ToValue(double model) => Range.Kind switch
     {
-        ParameterKind.LogFloat => Math.Clamp(Math.Exp(model), Range.Low, Range.High),
-        ParameterKind.Integer or ParameterKind.Choice => Math.Clamp(Math.Round(model), Range.Low, Range.High),
+        ParameterKind.Log => Math.Clamp(Math.Exp(model), Range.Low, Range.High),
+        ParameterKind.Whole or ParameterKind.OneOf => Math.Clamp(Math.Round(model), Range.Low, Range.High),
         _ => Math.Clamp(model, Range.Low, Range.High),
     };
 }

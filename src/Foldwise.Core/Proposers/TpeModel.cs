@@ -12,9 +12,9 @@ internal sealed class TpeModel
     private readonly IJointDensity _good;
     private readonly IJointDensity _rest;
     private readonly int _restCount;
-    private readonly bool _multivariate;
+    private readonly bool _joint;
 
-    private TpeModel(int budget, int results, TpeDimension[] dimensions, IJointDensity good, IJointDensity rest, int restCount, bool multivariate)
+    private TpeModel(int budget, int results, TpeDimension[] dimensions, IJointDensity good, IJointDensity rest, int restCount, bool joint)
     {
         Budget = budget;
         Results = results;
@@ -22,7 +22,7 @@ internal sealed class TpeModel
         _good = good;
         _rest = rest;
         _restCount = restCount;
-        _multivariate = multivariate;
+        _joint = joint;
     }
 
     /// <summary>The budget fitted on, and how many results it had then: together they identify the window.</summary>
@@ -40,11 +40,11 @@ internal sealed class TpeModel
         int n = window.Count;
 
         // The quantile is taken over real results only; liars always join the rest (they carry the worst score).
-        int goodCount = Math.Clamp((int)Math.Ceiling(options.Gamma * n), 1, n - 1);
+        int goodCount = Math.Clamp((int)Math.Ceiling(options.GoodFraction * n), 1, n - 1);
         var points = window.Select(o => ToModel(dimensions, o.Values)).ToList();
-        var good = Estimate(dimensions, points[..goodCount], options.PriorWeight, options.Multivariate);
-        var rest = Estimate(dimensions, points[goodCount..], options.PriorWeight, options.Multivariate);
-        return new TpeModel(budget, results, dimensions, good, rest, n - goodCount, options.Multivariate);
+        var good = Estimate(dimensions, points[..goodCount], options.WideKernelWeight, options.Joint);
+        var rest = Estimate(dimensions, points[goodCount..], options.WideKernelWeight, options.Joint);
+        return new TpeModel(budget, results, dimensions, good, rest, n - goodCount, options.Joint);
     }
 
     /// <summary>Draws candidates from l and returns the one (in model coordinates) with the largest log l − log g.</summary>
@@ -52,7 +52,7 @@ internal sealed class TpeModel
     {
         var liars = pending.Count == 0
             ? null
-            : Estimate(_dimensions, [.. pending.Select(p => ToModel(_dimensions, p))], priorWeight: 0, _multivariate);
+            : Estimate(_dimensions, [.. pending.Select(p => ToModel(_dimensions, p))], wideKernelWeight: 0, _joint);
         double logRestShare = Math.Log(_restCount / (double)(_restCount + pending.Count));
         double logLiarShare = Math.Log(pending.Count / (double)(_restCount + pending.Count));
         double[] best = new double[_dimensions.Length];
@@ -95,7 +95,7 @@ internal sealed class TpeModel
         return point;
     }
 
-    private static IJointDensity Estimate(TpeDimension[] dimensions, List<double[]> points, double priorWeight, bool multivariate) => multivariate
-        ? ProductKernelDensity.Fit(dimensions, points, priorWeight)
-        : IndependentDensity.Fit(dimensions, points, priorWeight);
+    private static IJointDensity Estimate(TpeDimension[] dimensions, List<double[]> points, double wideKernelWeight, bool joint) => joint
+        ? ProductKernelDensity.Fit(dimensions, points, wideKernelWeight)
+        : IndependentDensity.Fit(dimensions, points, wideKernelWeight);
 }

@@ -1,17 +1,17 @@
 namespace Foldwise.Core.Proposers;
 
 /// <summary>
-/// Settings of the TPE proposer. Defaults: γ = 0.25 of the results count as good; 24 candidates drawn from the
-/// good density; random proposals until dims + 1 candidates have a result; the model sees at most the 128
-/// most recent candidates, ranked on the ladder; prior weight 1.
+/// Settings of the TPE proposer. Defaults: the best quarter of the results count as good; 24 draws from the good
+/// density per proposal; random proposals until dims + 1 candidates have a result; the model sees at most the 128
+/// most recent candidates, ranked on the ladder; wide kernel weight 1; parameters modelled one by one.
 /// </summary>
-/// <param name="Gamma">
+/// <param name="GoodFraction">
 /// Fraction of results (best first) that make up the good density l(x). Bergstra et al. (NeurIPS 2011) leave the
-/// quantile γ free; 0.25 is the brief's suggestion and was measured best (with the earlier start-up of 12) of 0.10, 0.15, 0.25 and 0.35 here (median best
+/// quantile γ free; 0.25 was measured best (with the earlier start-up of 12) of 0.10, 0.15, 0.25 and 0.35 here (median best
 /// over 10 seeds on Branin, 60 evaluations, and Hartmann-6, 100 evaluations; see TpeProposerTests).
 /// </param>
-/// <param name="Candidates">Draws from l(x) among which the one with the largest l(x)/g(x) is proposed.</param>
-/// <param name="StartupResults">
+/// <param name="DrawsPerProposal">Draws from l(x) among which the one with the largest l(x)/g(x) is proposed.</param>
+/// <param name="RandomStart">
 /// Results a budget needs before the model is used there; null means dims + 1, the smallest number BOHB (Falkner et al.,
 /// ICML 2018) fits a model on (from memory). Measured against the earlier max(10, 2·dims) over 40 seeds here (median best;
 /// Branin at 15/25/40/60 evaluations, Hartmann-6 at 20/30/50/100): better in 7 of the 8 (Branin 0.681 against 0.861 at
@@ -19,8 +19,8 @@ namespace Foldwise.Core.Proposers;
 /// where a few dozen results are all there is, gains most.
 /// </param>
 /// <param name="Window">Most recent results at the chosen budget the model is fitted on (bounds the cost of a decision).</param>
-/// <param name="PriorWeight">Weight of the wide prior kernel, and the pseudo-count of every choice.</param>
-/// <param name="Multivariate">
+/// <param name="WideKernelWeight">Weight of the wide kernel spanning the whole range (the prior), and the pseudo-count of every named value.</param>
+/// <param name="Joint">
 /// Model the parameters jointly (<see cref="ProductKernelDensity"/>) rather than one by one (<see cref="IndependentDensity"/>).
 /// </param>
 /// <param name="Ladder">
@@ -38,41 +38,41 @@ namespace Foldwise.Core.Proposers;
 /// budget ranks with those promoted there (there fewer seeds missed too: 16 against 27 of the same six runs).
 /// </param>
 public sealed record TpeOptions(
-    double Gamma = 0.25,
-    int Candidates = 24,
-    int? StartupResults = null,
+    double GoodFraction = 0.25,
+    int DrawsPerProposal = 24,
+    int? RandomStart = null,
     int Window = 128,
-    double PriorWeight = 1.0,
-    bool Multivariate = false,
+    double WideKernelWeight = 1.0,
+    bool Joint = false,
     bool Ladder = true)
 {
-    public int StartupFor(int dimensions) => StartupResults ?? Math.Max(2, dimensions + 1);
+    public int RandomStartFor(int dimensions) => RandomStart ?? Math.Max(2, dimensions + 1);
 
     public void Validate()
     {
-        if (Gamma is not (> 0 and < 1))
+        if (GoodFraction is not (> 0 and < 1))
         {
-            throw new ArgumentOutOfRangeException(nameof(Gamma), Gamma, "gamma must lie strictly between 0 and 1");
+            throw new ArgumentOutOfRangeException(nameof(GoodFraction), GoodFraction, "the good fraction must lie strictly between 0 and 1");
         }
 
-        if (Candidates < 1)
+        if (DrawsPerProposal < 1)
         {
-            throw new ArgumentOutOfRangeException(nameof(Candidates), Candidates, "at least one candidate is needed");
+            throw new ArgumentOutOfRangeException(nameof(DrawsPerProposal), DrawsPerProposal, "at least one candidate is needed");
         }
 
-        if (StartupResults is < 2)
+        if (RandomStart is < 2)
         {
-            throw new ArgumentOutOfRangeException(nameof(StartupResults), StartupResults, "the model needs at least two results");
+            throw new ArgumentOutOfRangeException(nameof(RandomStart), RandomStart, "the model needs at least two results");
         }
 
-        if (Window < 2 || (StartupResults is int s && Window < s))
+        if (Window < 2 || (RandomStart is int s && Window < s))
         {
             throw new ArgumentOutOfRangeException(nameof(Window), Window, "the window must hold at least the start-up results");
         }
 
-        if (!(PriorWeight > 0))
+        if (!(WideKernelWeight > 0))
         {
-            throw new ArgumentOutOfRangeException(nameof(PriorWeight), PriorWeight, "the prior weight must be positive");
+            throw new ArgumentOutOfRangeException(nameof(WideKernelWeight), WideKernelWeight, "the wide kernel weight must be positive");
         }
     }
 }

@@ -37,7 +37,7 @@ public sealed class TpeProposer : IProposer
     {
         var space = history.Space;
         var dimensions = Dimensions(space);
-        int startup = _options.StartupFor(dimensions.Length);
+        int startup = _options.RandomStartFor(dimensions.Length);
         int budget = dimensions.Length == 0 ? -1 : _options.Ladder ? LadderBudget(history, startup) : BudgetToFit(history, startup);
         if (budget < 0)
         {
@@ -52,7 +52,7 @@ public sealed class TpeProposer : IProposer
             _models.AddOrUpdate(history, model);
         }
 
-        double[] best = model.BestCandidate(random, _options.Candidates, history.Pending);
+        double[] best = model.BestCandidate(random, _options.DrawsPerProposal, history.Pending);
         return new Proposal(Assemble(space, dimensions, best), ProposerName);
     }
 

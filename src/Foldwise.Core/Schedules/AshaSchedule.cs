@@ -29,7 +29,7 @@ public sealed class AshaSchedule : ISchedule
 
     public AshaSchedule(ImmutableArray<FamilySearch> families, ScheduleOptions options, IProposer proposer, int seed)
     {
-        _budgets = RungBudgets.For(options.MinBudget, options.MaxBudget, options.Eta);
+        _budgets = RungBudgets.For(options.FirstRung, options.FullBudget, options.Eta);
         _eta = options.Eta;
         _source = new CandidateSource(families, proposer, seed);
         _brackets = AshaBrackets.For(_budgets, _eta, options.Brackets);

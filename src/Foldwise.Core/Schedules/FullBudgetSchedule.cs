@@ -6,7 +6,7 @@ using Foldwise.Core.Search;
 namespace Foldwise.Core.Schedules;
 
 /// <summary>
-/// Plain search: every plan is a new candidate at MaxBudget (rung 0), families taking turns in definition order.
+/// Plain search: every plan is a new candidate at FullBudget (rung 0), families taking turns in definition order.
 /// It never runs out; the coordinator's trial and hour budgets end it.
 /// </summary>
 public sealed class FullBudgetSchedule : ISchedule
@@ -18,7 +18,7 @@ public sealed class FullBudgetSchedule : ISchedule
     {
         ScheduleChecks.Validate(options);
         _source = new CandidateSource(families, proposer, seed);
-        _budget = options.MaxBudget;
+        _budget = options.FullBudget;
     }
 
     public bool Exhausted => false;

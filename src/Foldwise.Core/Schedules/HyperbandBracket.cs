@@ -2,7 +2,7 @@ using System.Collections.Immutable;
 
 namespace Foldwise.Core.Schedules;
 
-/// <summary>One bracket of successive halving: <see cref="S"/> is its number of halvings, its rungs go from the most trials at the smallest budget to the fewest at MaxBudget.</summary>
+/// <summary>One bracket of successive halving: <see cref="S"/> is its number of halvings, its rungs go from the most trials at the smallest budget to the fewest at FullBudget.</summary>
 public sealed record HyperbandBracket(int S, ImmutableArray<HyperbandRung> Rungs)
 {
     /// <summary>Total rounds the bracket trains when each trial starts from scratch.</summary>

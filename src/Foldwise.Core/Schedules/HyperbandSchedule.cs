@@ -22,7 +22,7 @@ public sealed class HyperbandSchedule : ISchedule
 
     public HyperbandSchedule(ImmutableArray<FamilySearch> families, ScheduleOptions options, IProposer proposer, int seed)
     {
-        _plan = HyperbandPlan.For(options.MinBudget, options.MaxBudget, options.Eta);
+        _plan = HyperbandPlan.For(options.FirstRung, options.FullBudget, options.Eta);
         _source = new CandidateSource(families, proposer, seed);
     }
 

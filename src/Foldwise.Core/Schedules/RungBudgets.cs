@@ -2,20 +2,20 @@ using System.Collections.Immutable;
 
 namespace Foldwise.Core.Schedules;
 
-/// <summary>The budgets of successive-halving rungs: MinBudget·ηᵏ while below MaxBudget, then MaxBudget as the last rung.</summary>
+/// <summary>The budgets of successive-halving rungs: FirstRung·ηᵏ while below FullBudget, then FullBudget as the last rung.</summary>
 public static class RungBudgets
 {
     /// <summary>E.g. 25, 75, 225, 400 for the defaults (25 to 400 rounds, η = 3).</summary>
-    public static ImmutableArray<int> For(int minBudget, int maxBudget, int eta)
+    public static ImmutableArray<int> For(int firstRung, int fullBudget, int eta)
     {
-        ScheduleChecks.Validate(minBudget, maxBudget, eta);
+        ScheduleChecks.Validate(firstRung, fullBudget, eta);
         var budgets = ImmutableArray.CreateBuilder<int>();
-        for (long b = minBudget; b < maxBudget; b *= eta)
+        for (long b = firstRung; b < fullBudget; b *= eta)
         {
             budgets.Add((int)b);
         }
 
-        budgets.Add(maxBudget);
+        budgets.Add(fullBudget);
         return budgets.ToImmutable();
     }
 }

@@ -2,21 +2,21 @@ using Foldwise.Core.Definition;
 
 namespace Foldwise.Core.Schedules;
 
-/// <summary>The budget settings every schedule relies on: 1 ≤ MinBudget ≤ MaxBudget and η ≥ 2.</summary>
+/// <summary>The budget settings every schedule relies on: 1 ≤ FirstRung ≤ FullBudget and η ≥ 2.</summary>
 internal static class ScheduleChecks
 {
-    public static void Validate(ScheduleOptions options) => Validate(options.MinBudget, options.MaxBudget, options.Eta);
+    public static void Validate(ScheduleOptions options) => Validate(options.FirstRung, options.FullBudget, options.Eta);
 
-    public static void Validate(int minBudget, int maxBudget, int eta)
+    public static void Validate(int firstRung, int fullBudget, int eta)
     {
-        if (minBudget < 1)
+        if (firstRung < 1)
         {
-            throw new ArgumentOutOfRangeException(nameof(minBudget), minBudget, "the minimum budget must be at least 1");
+            throw new ArgumentOutOfRangeException(nameof(firstRung), firstRung, "the first rung's budget must be at least 1");
         }
 
-        if (maxBudget < minBudget)
+        if (fullBudget < firstRung)
         {
-            throw new ArgumentOutOfRangeException(nameof(maxBudget), maxBudget, $"the maximum budget must be at least the minimum ({minBudget})");
+            throw new ArgumentOutOfRangeException(nameof(fullBudget), fullBudget, $"the full budget must be at least the first rung's ({firstRung})");
         }
 
         if (eta < 2)

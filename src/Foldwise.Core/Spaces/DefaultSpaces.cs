@@ -10,22 +10,22 @@ public static class DefaultSpaces
     /// <summary>Ranges are common practice for gradient-boosted trees on a few thousand wide, sparse rows.</summary>
     public static ParameterSpace LightGbm { get; } = new(
     [
-        ParameterRange.LogFloat("learning_rate", 0.01, 0.3),
-        ParameterRange.Integer("leaves", 8, 128),
-        ParameterRange.Integer("min_leaf_rows", 5, 100),
-        ParameterRange.Float("feature_fraction", 0.1, 1.0),
-        ParameterRange.Float("row_fraction", 0.5, 1.0),
-        ParameterRange.LogFloat("l2", 1e-3, 10),
+        ParameterRange.Log("learning_rate", 0.01, 0.3),
+        ParameterRange.Whole("leaves", 8, 128),
+        ParameterRange.Whole("min_leaf_rows", 5, 100),
+        ParameterRange.Linear("feature_fraction", 0.1, 1.0),
+        ParameterRange.Linear("row_fraction", 0.5, 1.0),
+        ParameterRange.Log("l2", 1e-3, 10),
     ]);
 
     /// <summary>The same shape for ML.NET's FastTree, which has no L2 term on leaves.</summary>
     public static ParameterSpace FastTree { get; } = new(
     [
-        ParameterRange.LogFloat("learning_rate", 0.01, 0.3),
-        ParameterRange.Integer("leaves", 8, 128),
-        ParameterRange.Integer("min_leaf_rows", 5, 100),
-        ParameterRange.Float("feature_fraction", 0.1, 1.0),
-        ParameterRange.Float("row_fraction", 0.5, 1.0),
+        ParameterRange.Log("learning_rate", 0.01, 0.3),
+        ParameterRange.Whole("leaves", 8, 128),
+        ParameterRange.Whole("min_leaf_rows", 5, 100),
+        ParameterRange.Linear("feature_fraction", 0.1, 1.0),
+        ParameterRange.Linear("row_fraction", 0.5, 1.0),
     ]);
 
     public static ParameterSpace For(string family) => family switch

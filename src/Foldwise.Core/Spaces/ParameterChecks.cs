@@ -25,7 +25,7 @@ public static class ParameterChecks
             {
                 problems.Add($"parameter '{name}' is {value}");
             }
-            else if (range.Kind is ParameterKind.Integer or ParameterKind.Choice && value != Math.Round(value))
+            else if (range.Kind is ParameterKind.Whole or ParameterKind.OneOf && value != Math.Round(value))
             {
                 problems.Add($"parameter '{name}' = {value} must be a whole number");
             }

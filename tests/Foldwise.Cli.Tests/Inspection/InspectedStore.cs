@@ -18,7 +18,8 @@ public sealed class InspectedStore : IDisposable
 {
     public static readonly DateTimeOffset T0 = new(2025, 3, 4, 9, 0, 0, TimeSpan.Zero);
 
-    public InspectedStore(bool finished = false)
+    /// <param name="definitionJson">The definition text the store keeps; <see cref="Definition"/> when null.</param>
+    public InspectedStore(bool finished = false, string? definitionJson = null)
     {
         Directory.CreateDirectory(Folder);
         using var store = SearchStore.Create(Path);
@@ -26,7 +27,7 @@ public sealed class InspectedStore : IDisposable
         store.SaveHeader(new SearchHeader
         {
             SearchId = "inspect-1",
-            DefinitionJson = Definition,
+            DefinitionJson = definitionJson ?? Definition,
             Folds = new FoldPlan(3, 1, [.. Enumerable.Range(0, 12).Select(i => i % 3)]),
             TrainHash = "aa",
             TestHash = "bb",
@@ -70,14 +71,14 @@ public sealed class InspectedStore : IDisposable
         Trial(6, "fasttree", 5, TrialState.Queued, null, [], worker: null, slot: null, startMinute: null, seconds: null),
     ];
 
-    // The definition as the store keeps it; data paths need not exist to read it back.
-    private static string Definition => """
+    /// <summary>The definition as the store keeps it; data paths need not exist to read it back.</summary>
+    public static string Definition => """
         {
           "name": "inspect-test",
           "data": { "train": "train.csv", "test": "test.csv", "id": "id", "target": "y" },
           "folds": 3,
           "families": { "lightgbm": {}, "fasttree": {} },
-          "schedule": { "kind": "asha", "proposer": "random", "min_rounds": 5, "max_rounds": 15, "eta": 3 },
+          "schedule": { "kind": "asha", "proposer": "random", "first_rung": 5, "full_budget": 15, "eta": 3 },
           "budget": { "trials": 10, "hours": 1 }
         }
         """;

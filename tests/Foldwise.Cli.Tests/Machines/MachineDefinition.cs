@@ -17,7 +17,7 @@ internal static class MachineDefinition
               "folds": 3,
               "screening": { "min_nonzero": 2 },
               "families": { "lightgbm": { "min_leaf_rows": 3 } },
-              "schedule": { "kind": "asha", "proposer": "random", "min_rounds": 300, "max_rounds": 900, "eta": 3 },
+              "schedule": { "kind": "asha", "proposer": "random", "first_rung": 300, "full_budget": 900, "eta": 3 },
               "budget": { "trials": {{trials}} }
             }
             """);

@@ -5,7 +5,7 @@ public sealed class FoldwiseProcessTests
     [Fact]
     public async Task Runs_foldwise_as_a_child_process_and_reads_its_exit_code()
     {
-        using var plan = FoldwiseProcess.Start("plan", "--min-budget", "1", "--max-budget", "9", "--eta", "3");
+        using var plan = FoldwiseProcess.Start("plan", "--first-rung", "1", "--full-budget", "9", "--eta", "3");
 
         int code = await plan.WaitForExitAsync(TimeSpan.FromSeconds(60));
 

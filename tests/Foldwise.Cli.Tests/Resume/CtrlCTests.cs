@@ -23,7 +23,7 @@ public sealed class CtrlCTests : IDisposable
               "folds": 3,
               "screening": { "min_nonzero": 2 },
               "families": { "lightgbm": { "min_leaf_rows": 3 }, "fasttree": { "min_leaf_rows": 3 } },
-              "schedule": { "kind": "asha", "proposer": "random", "min_rounds": 30, "max_rounds": 90, "eta": 3 },
+              "schedule": { "kind": "asha", "proposer": "random", "first_rung": 30, "full_budget": 90, "eta": 3 },
               "budget": { "trials": 30 }
             }
             """);

@@ -13,32 +13,32 @@ public sealed class DefinitionErrorTests
     {
         // unknown keys, with the nearest known one suggested
         { "\"folds\": 5", "\"fold\": 5", "unknown key 'fold'; did you mean 'folds'?", "\"fold\"" },
-        { "\"min_rounds\": 25", "\"min_round\": 25", "unknown key 'schedule.min_round'; did you mean 'min_rounds'?", "\"min_round\"" },
+        { "\"first_rung\": 25", "\"first_rungs\": 25", "unknown key 'schedule.first_rungs'; did you mean 'first_rung'?", "\"first_rungs\"" },
         { "\"pool\": 3", "\"pool\": 3, \"weights\": 1", "unknown key 'blend.weights' (known keys here: mode, pool)", "\"weights\"" },
         { "\"lightgbm\": {", "\"lightgmb\": {", "unknown family 'families.lightgmb'; did you mean 'lightgbm'? (built-in families: lightgbm, fasttree)", "\"lightgmb\"" },
         { "\"leaves\": {", "\"leafs\": {", "unknown parameter 'families.lightgbm.leafs'; did you mean 'leaves'? (lightgbm's parameters: learning_rate, leaves, min_leaf_rows, feature_fraction, row_fraction, l2)", "\"leafs\"" },
         { "\"fasttree\": {}", "\"fasttree\": { \"l2\": 1 }", "unknown parameter 'families.fasttree.l2'", "\"l2\"" },
-        { "{ \"int\": [8, 128] }", "{ \"uniform\": [8, 128] }", "unknown key 'families.lightgbm.leaves.uniform'", "\"uniform\"" },
+        { "{ \"whole\": [8, 128] }", "{ \"uniform\": [8, 128] }", "unknown key 'families.lightgbm.leaves.uniform'", "\"uniform\"" },
         { "\"seed\": 7,", "\"seed\": 7, \"seed\": 8,", "'seed' is given twice", "\"seed\": 8" },
 
         // wrong types
         { "\"folds\": 5", "\"folds\": \"5\"", "'folds' must be a number, got \"5\"", "\"5\"" },
         { "\"seed\": 7", "\"seed\": 7.5", "'seed' must be a whole number, got 7.5", "7.5" },
         { "\"name\": \"freight-test\"", "\"name\": 3", "'name' must be a non-empty string, got 3", "3," },
-        { "{ \"kind\": \"asha\", \"proposer\": \"tpe\", \"min_rounds\": 25, \"max_rounds\": 400, \"eta\": 3 }", "[]", "'schedule' must be an object { ... }, got a list", "[]" },
+        { "{ \"kind\": \"asha\", \"proposer\": \"tpe\", \"first_rung\": 25, \"full_budget\": 400, \"eta\": 3 }", "[]", "'schedule' must be an object { ... }, got a list", "[]" },
         { "\"row_fraction\": 0.8", "\"row_fraction\": \"0.8\"", "'families.lightgbm.row_fraction' must be a number or a range", "\"0.8\"" },
-        { "{ \"int\": [8, 128] }", "{ \"int\": [8, 128], \"float\": [1, 2] }", "'families.lightgbm.leaves' must hold exactly one of", "{ \"int\": [8, 128], \"float\"" },
-        { "{ \"int\": [8, 128] }", "{ \"int\": [8] }", "'families.lightgbm.leaves.int' must be a list of two numbers [lo, hi], got a list of 1", "[8]" },
-        { "{ \"int\": [8, 128] }", "{ \"float\": [8, 128] }", "'families.lightgbm.leaves' takes whole numbers, not 'float'", "\"float\"" },
-        { "{ \"int\": [8, 128] }", "{ \"int\": [8.5, 128] }", "'families.lightgbm.leaves.int[0]' must be a whole number, got 8.5", "8.5" },
-        { "{ \"log\": [0.01, 0.3] }", "{ \"choice\": [\"a\"] }", "'families.lightgbm.learning_rate' takes real numbers, not 'choice'", "\"choice\"" },
+        { "{ \"whole\": [8, 128] }", "{ \"whole\": [8, 128], \"linear\": [1, 2] }", "'families.lightgbm.leaves' must hold exactly one of", "{ \"whole\": [8, 128], \"linear\"" },
+        { "{ \"whole\": [8, 128] }", "{ \"whole\": [8] }", "'families.lightgbm.leaves.whole' must be a list of two numbers [lo, hi], got a list of 1", "[8]" },
+        { "{ \"whole\": [8, 128] }", "{ \"linear\": [8, 128] }", "'families.lightgbm.leaves' takes whole numbers, not 'linear'", "\"linear\"" },
+        { "{ \"whole\": [8, 128] }", "{ \"whole\": [8.5, 128] }", "'families.lightgbm.leaves.whole[0]' must be a whole number, got 8.5", "8.5" },
+        { "{ \"log\": [0.01, 0.3] }", "{ \"one_of\": [\"a\"] }", "'families.lightgbm.learning_rate' takes real numbers, not 'one_of'", "\"one_of\"" },
 
         // ranges and the families' hard limits
-        { "{ \"int\": [8, 128] }", "{ \"int\": [128, 8] }", "'families.lightgbm.leaves.int' has lo 128 above hi 8", "128, 8" },
+        { "{ \"whole\": [8, 128] }", "{ \"whole\": [128, 8] }", "'families.lightgbm.leaves.whole' has lo 128 above hi 8", "128, 8" },
         { "{ \"log\": [0.01, 0.3] }", "{ \"log\": [0, 0.3] }", "'families.lightgbm.learning_rate.log' is sampled in log space, so lo must be above 0, got 0", "0, 0.3" },
-        { "{ \"int\": [8, 128] }", "{ \"int\": [1, 128] }", "'families.lightgbm.leaves.int[0]' must be at least 2 (leaves per tree), got 1", "1, 128" },
+        { "{ \"whole\": [8, 128] }", "{ \"whole\": [1, 128] }", "'families.lightgbm.leaves.whole[0]' must be at least 2 (leaves per tree), got 1", "1, 128" },
         { "\"row_fraction\": 0.8", "\"row_fraction\": 1.5", "'families.lightgbm.row_fraction' must be at most 1 (a fraction of rows), got 1.5", "1.5" },
-        { "\"fasttree\": {}", "\"fasttree\": { \"feature_fraction\": { \"float\": [0, 1] } }", "'families.fasttree.feature_fraction.float[0]' must be above 0", "0, 1]" },
+        { "\"fasttree\": {}", "\"fasttree\": { \"feature_fraction\": { \"linear\": [0, 1] } }", "'families.fasttree.feature_fraction.linear[0]' must be above 0", "0, 1]" },
 
         // bounds of the scalar keys
         { "\"folds\": 5", "\"folds\": 1", "'folds' must be at least 2 (K of a K-fold plan), got 1", "1," },
@@ -46,9 +46,9 @@ public sealed class DefinitionErrorTests
         { "\"eta\": 3", "\"eta\": 3, \"brackets\": 5", "'schedule.brackets' (5) is more than the schedule's 4 rungs (25, 75, 225, 400 rounds)", "5 }" },
         { "\"kind\": \"asha\"", "\"kind\": \"hyperband\", \"brackets\": 2", "'schedule.brackets' applies to the asha schedule only, not 'hyperband'", "2," },
         { "\"eta\": 3", "\"eta\": 3, \"brackets\": 0", "'schedule.brackets' must be at least 1, got 0", "0 }" },
-        { "\"eta\": 3", "\"eta\": 3, \"rate_scaling\": 2", "'schedule.rate_scaling' must be between 0 (short rungs run the drawn learning rate) and 1 (scaled by max_rounds / rounds), got 2", "2 }" },
-        { "\"min_rounds\": 25", "\"min_rounds\": 0", "'schedule.min_rounds' must be at least 1, got 0", "0," },
-        { "\"max_rounds\": 400", "\"max_rounds\": 20", "'schedule.max_rounds' (20) is below 'schedule.min_rounds' (25)", "20" },
+        { "\"eta\": 3", "\"eta\": 3, \"rate_scaling\": 2", "'schedule.rate_scaling' must be between 0 (short rungs run the drawn learning rate) and 1 (scaled by full_budget / rounds), got 2", "2 }" },
+        { "\"first_rung\": 25", "\"first_rung\": 0", "'schedule.first_rung' must be at least 1, got 0", "0," },
+        { "\"full_budget\": 400", "\"full_budget\": 20", "'schedule.full_budget' (20) is below 'schedule.first_rung' (25)", "20" },
         { "\"min_nonzero\": 3", "\"min_nonzero\": 0", "'screening.min_nonzero' must be at least 1, got 0", "0 }" },
         { "\"budget\": { \"trials\": 60, \"hours\": 2 }", "\"budget\": { }", "'budget' needs 'trials', 'hours' or both", "{ }" },
         { "\"trials\": 60", "\"trials\": 0", "'budget.trials' must be at least 1, got 0", "0, \"hours\"" },
@@ -90,14 +90,14 @@ public sealed class DefinitionErrorTests
     public void Points_at_a_misspelt_schedule_key_by_line_and_column()
     {
         // Given a misspelt key on line 3, column 5 (counted by hand)
-        string json = "{\n  \"data\": { \"train\": \"a\", \"test\": \"b\", \"id\": \"i\", \"target\": \"y\" },\n  \"schedule\": {\n    \"min_round\": 10\n  }\n}";
+        string json = "{\n  \"data\": { \"train\": \"a\", \"test\": \"b\", \"id\": \"i\", \"target\": \"y\" },\n  \"schedule\": {\n    \"frist_rung\": 10\n  }\n}";
 
         // When it is parsed
         var e = Assert.Throws<InputException>(() => DefinitionReader.Parse(json, "s.json", "/defs"));
 
         // Then the error is at the key's opening quote
         Assert.Equal((4L, 5), (e.Line, e.Column));
-        Assert.Equal("s.json:4:5: unknown key 'schedule.min_round'; did you mean 'min_rounds'? (known keys here: kind, proposer, min_rounds, max_rounds, eta, rate_scaling, brackets)", e.Message);
+        Assert.Equal("s.json:4:5: unknown key 'schedule.frist_rung'; did you mean 'first_rung'? (known keys here: kind, proposer, first_rung, full_budget, eta, rate_scaling, brackets)", e.Message);
     }
 
     [Fact]

@@ -54,7 +54,7 @@ public sealed class DefinitionReaderTests
         // Then those three change, the rest keep their defaults, and the default order holds
         Assert.Equal(DefaultSpaces.LightGbm.Ranges.Select(r => r.Name), space.Ranges.Select(r => r.Name));
         Assert.Equal(ParameterRange.Fixed("row_fraction", 0.8), space.Find("row_fraction"));
-        Assert.Equal(ParameterRange.Integer("leaves", 8, 128), space.Find("leaves"));
+        Assert.Equal(ParameterRange.Whole("leaves", 8, 128), space.Find("leaves"));
         Assert.Equal(DefaultSpaces.LightGbm.Find("l2"), space.Find("l2"));
         Assert.Equal(DefaultSpaces.LightGbm.Find("min_leaf_rows"), space.Find("min_leaf_rows"));
     }
@@ -69,7 +69,7 @@ public sealed class DefinitionReaderTests
         var leaves = DefinitionReader.Parse(json, "/defs/x.json", "/defs").Families.Single().Space.Find("leaves")!;
 
         // Then it is an integer range of one value, so 31.5 is still refused
-        Assert.Equal((ParameterKind.Integer, 31.0, 31.0), (leaves.Kind, leaves.Low, leaves.High));
+        Assert.Equal((ParameterKind.Whole, 31.0, 31.0), (leaves.Kind, leaves.Low, leaves.High));
         Assert.False(leaves.Contains(31.5));
     }
 

@@ -15,10 +15,10 @@ internal static class DefinitionText
           "seed": 7,
           "screening": { "min_nonzero": 3 },
           "families": {
-            "lightgbm": { "learning_rate": { "log": [0.01, 0.3] }, "leaves": { "int": [8, 128] }, "row_fraction": 0.8 },
+            "lightgbm": { "learning_rate": { "log": [0.01, 0.3] }, "leaves": { "whole": [8, 128] }, "row_fraction": 0.8 },
             "fasttree": {}
           },
-          "schedule": { "kind": "asha", "proposer": "tpe", "min_rounds": 25, "max_rounds": 400, "eta": 3 },
+          "schedule": { "kind": "asha", "proposer": "tpe", "first_rung": 25, "full_budget": 400, "eta": 3 },
           "budget": { "trials": 60, "hours": 2 },
           "blend": { "mode": "simplex", "pool": 3 }
         }

@@ -32,11 +32,11 @@ public sealed class DefinitionWriterTests
         var lightgbm = new ParameterSpace(
         [
             ParameterRange.Fixed("learning_rate", 0.05),
-            ParameterRange.Integer("leaves", 31, 31),
-            ParameterRange.Integer("min_leaf_rows", 2, 400),
-            ParameterRange.LogFloat("feature_fraction", 0.012345678901234567, 1),
-            ParameterRange.Float("row_fraction", 1.0 / 3, 0.9),
-            ParameterRange.LogFloat("l2", 1e-7, 1e-7),
+            ParameterRange.Whole("leaves", 31, 31),
+            ParameterRange.Whole("min_leaf_rows", 2, 400),
+            ParameterRange.Log("feature_fraction", 0.012345678901234567, 1),
+            ParameterRange.Linear("row_fraction", 1.0 / 3, 0.9),
+            ParameterRange.Log("l2", 1e-7, 1e-7),
         ]);
         var d = new SearchDefinition
         {
@@ -84,36 +84,36 @@ public sealed class DefinitionWriterTests
     [Fact]
     public void Choice_parameters_are_read_and_written_by_name()
     {
-        // Given a family whose space has a named choice (no built-in family has one yet)
-        var standard = new ParameterSpace([ParameterRange.Choice("growth", "leafwise", "depthwise", "symmetric"), ParameterRange.Integer("leaves", 8, 64)]);
+        // Given a family whose space has a one_of parameter (no built-in family has one yet)
+        var standard = new ParameterSpace([ParameterRange.OneOf("growth", "leafwise", "depthwise", "symmetric"), ParameterRange.Whole("leaves", 8, 64)]);
         IReadOnlyList<FamilySearch> builtIn = [new("toy", standard)];
-        string json = """{ "data": { "train": "a", "test": "b", "id": "i", "target": "y" }, "families": { "toy": { "growth": { "choice": ["symmetric", "leafwise"] } } } }""";
+        string json = """{ "data": { "train": "a", "test": "b", "id": "i", "target": "y" }, "families": { "toy": { "growth": { "one_of": ["symmetric", "leafwise"] } } } }""";
 
         // When it is read, written and read again
         var d = DefinitionReader.Parse(System.Text.Encoding.UTF8.GetBytes(json), "t.json", "/t", builtIn);
         string text = DefinitionWriter.Write(d);
         var back = DefinitionReader.Parse(System.Text.Encoding.UTF8.GetBytes(text), "t.json", "/t", builtIn);
 
-        // Then the choice keeps the file's names in the file's order, and survives the trip
+        // Then the one_of range keeps the file's names in the file's order, and survives the trip
         var growth = d.Families.Single().Space.Find("growth")!;
         Assert.Equal<string>(["symmetric", "leafwise"], growth.Choices);
         Assert.Equal((0.0, 1.0), (growth.Low, growth.High));
-        Assert.Contains("\"growth\": {\"choice\": [\"symmetric\", \"leafwise\"]}", text);
+        Assert.Contains("\"growth\": {\"one_of\": [\"symmetric\", \"leafwise\"]}", text);
         Assert.Equal(d, back, DefinitionComparer.Instance);
     }
 
     [Fact]
-    public void A_choice_outside_the_family_s_names_is_refused_with_the_valid_ones()
+    public void A_name_outside_the_familys_one_of_list_is_refused_with_the_valid_ones()
     {
-        // Given a misspelt choice
-        IReadOnlyList<FamilySearch> builtIn = [new("toy", new ParameterSpace([ParameterRange.Choice("growth", "leafwise", "depthwise")]))];
-        string json = """{ "data": { "train": "a", "test": "b", "id": "i", "target": "y" }, "families": { "toy": { "growth": { "choice": ["leafwise", "depthwsie"] } } } }""";
+        // Given a misspelt name
+        IReadOnlyList<FamilySearch> builtIn = [new("toy", new ParameterSpace([ParameterRange.OneOf("growth", "leafwise", "depthwise")]))];
+        string json = """{ "data": { "train": "a", "test": "b", "id": "i", "target": "y" }, "families": { "toy": { "growth": { "one_of": ["leafwise", "depthwsie"] } } } }""";
 
         // When it is read
         var e = Assert.Throws<InputException>(() => DefinitionReader.Parse(System.Text.Encoding.UTF8.GetBytes(json), "t.json", "/t", builtIn));
 
         // Then the message names the item, suggests the near name and points at it
-        Assert.Equal("'families.toy.growth.choice[1]' cannot be \"depthwsie\"; did you mean \"depthwise\"? (valid: leafwise, depthwise)", e.Problem);
+        Assert.Equal("'families.toy.growth.one_of[1]' cannot be \"depthwsie\"; did you mean \"depthwise\"? (valid: leafwise, depthwise)", e.Problem);
         Assert.Equal(DefinitionText.PositionOf(json, "\"depthwsie\""), (e.Line!.Value, e.Column!.Value));
     }
 

@@ -6,7 +6,7 @@ namespace Foldwise.Core.Tests.Proposers;
 
 public sealed class FamilyHistoryTests
 {
-    private static readonly ParameterSpace Space = new([ParameterRange.Float("x", 0, 1), ParameterRange.Choice("c", "a", "b")]);
+    private static readonly ParameterSpace Space = new([ParameterRange.Linear("x", 0, 1), ParameterRange.OneOf("c", "a", "b")]);
 
     private static TrialRecord Trial(int id, TrialState state, double? score = null, int? parent = null, int budget = 1) => new()
     {

@@ -18,7 +18,7 @@ public sealed class GaussianTests
     public void Renormalises_a_truncated_kernel_so_the_density_integrates_to_one()
     {
         // Given a Parzen density of three points on [0, 2] (kernels near the edges lose mass outside)
-        var density = ParzenEstimator.Fit([0.05, 0.1, 1.9], 0, 2, priorWeight: 1);
+        var density = ParzenEstimator.Fit([0.05, 0.1, 1.9], 0, 2, wideKernelWeight: 1);
 
         // Then its integral over [0, 2] is one (midpoint rule, 20,000 steps)
         double sum = 0, h = 2.0 / 20000;

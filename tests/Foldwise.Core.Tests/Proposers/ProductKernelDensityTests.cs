@@ -7,8 +7,8 @@ public sealed class ProductKernelDensityTests
 {
     private static readonly TpeDimension[] Square =
     [
-        new(0, ParameterRange.Float("x", 0, 1)),
-        new(1, ParameterRange.Float("y", 0, 1)),
+        new(0, ParameterRange.Linear("x", 0, 1)),
+        new(1, ParameterRange.Linear("y", 0, 1)),
     ];
 
     private static readonly double[][] Diagonal = [[0.1, 0.1], [0.3, 0.3], [0.5, 0.5], [0.7, 0.7], [0.9, 0.9]];
@@ -17,7 +17,7 @@ public sealed class ProductKernelDensityTests
     public void Integrates_to_one_over_the_space()
     {
         // Given kernels near the edges, which truncation must renormalise
-        var density = ProductKernelDensity.Fit(Square, [[0.02, 0.5], [0.5, 0.98], [0.6, 0.6]], priorWeight: 1);
+        var density = ProductKernelDensity.Fit(Square, [[0.02, 0.5], [0.5, 0.98], [0.6, 0.6]], wideKernelWeight: 1);
 
         // When the density is summed on a 400 × 400 midpoint grid
         const int n = 400;
@@ -38,8 +38,8 @@ public sealed class ProductKernelDensityTests
     public void Keeps_which_values_came_together_where_independent_densities_cannot()
     {
         // Given points on the diagonal x = y: every x and every y alone is equally common
-        var joint = ProductKernelDensity.Fit(Square, Diagonal, priorWeight: 1);
-        var independent = IndependentDensity.Fit(Square, Diagonal, priorWeight: 1);
+        var joint = ProductKernelDensity.Fit(Square, Diagonal, wideKernelWeight: 1);
+        var independent = IndependentDensity.Fit(Square, Diagonal, wideKernelWeight: 1);
 
         // Then the joint density is far higher on the diagonal than off it, and the independent one is not
         double jointGap = joint.LogDensity([0.1, 0.1]) - joint.LogDensity([0.1, 0.9]);
@@ -52,8 +52,8 @@ public sealed class ProductKernelDensityTests
     public void Draws_a_choice_as_often_as_its_density_says()
     {
         // Given four points that all took choice 1 of three, and the uniform prior kernel
-        TpeDimension[] kind = [new(0, ParameterRange.Choice("kind", "a", "b", "c"))];
-        var density = ProductKernelDensity.Fit(kind, [[1], [1], [1], [1]], priorWeight: 1);
+        TpeDimension[] kind = [new(0, ParameterRange.OneOf("kind", "a", "b", "c"))];
+        var density = ProductKernelDensity.Fit(kind, [[1], [1], [1], [1]], wideKernelWeight: 1);
 
         // When it draws 20,000 times
         var random = new Random(5);
@@ -76,8 +76,8 @@ public sealed class ProductKernelDensityTests
     [Fact]
     public void Draws_whole_numbers_for_integer_parameters_and_stays_inside_the_space()
     {
-        TpeDimension[] dims = [new(0, ParameterRange.Integer("leaves", 8, 128)), new(1, ParameterRange.LogFloat("rate", 0.01, 0.3))];
-        var density = ProductKernelDensity.Fit(dims, [[8, Math.Log(0.01)], [128, Math.Log(0.3)], [40, Math.Log(0.05)]], priorWeight: 1);
+        TpeDimension[] dims = [new(0, ParameterRange.Whole("leaves", 8, 128)), new(1, ParameterRange.Log("rate", 0.01, 0.3))];
+        var density = ProductKernelDensity.Fit(dims, [[8, Math.Log(0.01)], [128, Math.Log(0.3)], [40, Math.Log(0.05)]], wideKernelWeight: 1);
         var random = new Random(2);
         var draw = new double[2];
         for (int i = 0; i < 2_000; i++)

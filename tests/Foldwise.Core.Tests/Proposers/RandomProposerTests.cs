@@ -7,10 +7,10 @@ public sealed class RandomProposerTests
 {
     private static readonly ParameterSpace Mixed = new(
     [
-        ParameterRange.Integer("leaves", 8, 12),
-        ParameterRange.Float("fraction", 0.5, 1.0),
-        ParameterRange.LogFloat("l2", 1e-3, 10),
-        ParameterRange.Choice("kind", "gbdt", "dart", "goss"),
+        ParameterRange.Whole("leaves", 8, 12),
+        ParameterRange.Linear("fraction", 0.5, 1.0),
+        ParameterRange.Log("l2", 1e-3, 10),
+        ParameterRange.OneOf("kind", "gbdt", "dart", "goss"),
         ParameterRange.Fixed("rounds_per_tree", 1),
     ]);
 

@@ -5,10 +5,10 @@ namespace Foldwise.Core.Tests.Proposers;
 /// <summary>Standard global-optimisation test functions (Dixon &amp; Szegő, "Towards Global Optimisation 2", 1978).</summary>
 internal static class TestFunctions
 {
-    public static ParameterSpace BraninSpace { get; } = new([ParameterRange.Float("x1", -5, 10), ParameterRange.Float("x2", 0, 15)]);
+    public static ParameterSpace BraninSpace { get; } = new([ParameterRange.Linear("x1", -5, 10), ParameterRange.Linear("x2", 0, 15)]);
 
     public static ParameterSpace HartmannSpace { get; } = new(
-        [.. Enumerable.Range(1, 6).Select(i => ParameterRange.Float($"x{i}", 0, 1))]);
+        [.. Enumerable.Range(1, 6).Select(i => ParameterRange.Linear($"x{i}", 0, 1))]);
 
     // Branin–Hoo with a = 1, b = 5.1/(4π²), c = 5/π, r = 6, s = 10, t = 1/(8π); minimum 5/(4π) = 0.397887
     // at (−π, 12.275), (π, 2.275), (9.42478, 2.475) — Dixon & Szegő 1978.

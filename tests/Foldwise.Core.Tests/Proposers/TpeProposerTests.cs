@@ -77,12 +77,12 @@ public sealed class TpeProposerTests
         // Given a space of every kind, with two fixed ranges, and a score that prefers leaves = 20, kind = 2
         var space = new ParameterSpace(
         [
-            ParameterRange.Integer("leaves", 8, 128),
-            ParameterRange.LogFloat("learning_rate", 0.01, 0.3),
-            ParameterRange.Float("fraction", 0.1, 1.0),
-            ParameterRange.Choice("kind", "a", "b", "c", "d"),
+            ParameterRange.Whole("leaves", 8, 128),
+            ParameterRange.Log("learning_rate", 0.01, 0.3),
+            ParameterRange.Linear("fraction", 0.1, 1.0),
+            ParameterRange.OneOf("kind", "a", "b", "c", "d"),
             ParameterRange.Fixed("seed_offset", 3),
-            ParameterRange.Integer("depth", 6, 6),
+            ParameterRange.Whole("depth", 6, 6),
         ]);
         double Score(ParameterSet p) => (Math.Abs(p["leaves"] - 20) / 100) + Math.Abs(Math.Log(p["learning_rate"] / 0.05)) + (p["kind"] == 2 ? 0 : 1);
 
@@ -115,7 +115,7 @@ public sealed class TpeProposerTests
     public void Fits_on_the_highest_budget_that_has_enough_results()
     {
         // Given 1-D results where the low budget favours x near 0.1 and the full budget favours x near 0.9
-        var space = new ParameterSpace([ParameterRange.Float("x", 0, 1)]);
+        var space = new ParameterSpace([ParameterRange.Linear("x", 0, 1)]);
         var history = new FamilyHistory("f", space);
         int id = 0;
         void Add(int budget, int count, double best)
@@ -129,7 +129,7 @@ public sealed class TpeProposerTests
 
         Add(budget: 1, count: 40, best: 0.1);
         Add(budget: 9, count: 9, best: 0.9);
-        var tpe = new TpeProposer(new TpeOptions(StartupResults: 10, Ladder: false));
+        var tpe = new TpeProposer(new TpeOptions(RandomStart: 10, Ladder: false));
         double Mean() => Enumerable.Range(0, 40).Average(s => tpe.Propose(history, new Random(s)).Parameters["x"]);
 
         // When the full budget has fewer than the ten results this model is set to need, proposals follow the low budget
@@ -144,8 +144,8 @@ public sealed class TpeProposerTests
     public void On_the_ladder_ranks_candidates_promoted_further_first_whatever_they_scored_lower_down()
     {
         // Given 20 candidates at budget 1 where x near 0.1 scores best, and four candidates near 0.9 promoted to budget 9
-        var space = new ParameterSpace([ParameterRange.Float("x", 0, 1)]);
-        TpeProposer Tpe(bool ladder) => new(new TpeOptions(StartupResults: 10, Ladder: ladder));
+        var space = new ParameterSpace([ParameterRange.Linear("x", 0, 1)]);
+        TpeProposer Tpe(bool ladder) => new(new TpeOptions(RandomStart: 10, Ladder: ladder));
         var history = new FamilyHistory("f", space);
         var xs = Enumerable.Range(0, 20).Select(i => (i + 0.5) / 20).ToArray();
         for (int i = 0; i < xs.Length; i++)
@@ -170,7 +170,7 @@ public sealed class TpeProposerTests
     public void Steers_simultaneous_proposals_away_from_candidates_still_running()
     {
         // Given 30 results of a 1-D bowl at 0.5, and where TPE would propose next on its own
-        var space = new ParameterSpace([ParameterRange.Float("x", 0, 1)]);
+        var space = new ParameterSpace([ParameterRange.Linear("x", 0, 1)]);
         FamilyHistory Fresh()
         {
             var h = new FamilyHistory("f", space);
@@ -205,8 +205,8 @@ public sealed class TpeProposerTests
         // Measured here, median best over 40 seeds (random search in brackets): at 20/30/50/100 evaluations joint
         // −1.961/−2.439/−2.848/−3.141, independent −1.906/−2.220/−2.735/−3.127 (−1.295/−1.406/−1.712/−1.961); on Branin
         // at 15/25/40/60 joint 1.256/0.658/0.498/0.441, independent 1.414/0.681/0.504/0.454. The widest gap is checked.
-        double joint = ProposerRuns.MedianBest(new TpeProposer(new TpeOptions(Multivariate: true)), TestFunctions.HartmannSpace, TestFunctions.Hartmann, 30, 40);
-        double independent = ProposerRuns.MedianBest(new TpeProposer(new TpeOptions(Multivariate: false)), TestFunctions.HartmannSpace, TestFunctions.Hartmann, 30, 40);
+        double joint = ProposerRuns.MedianBest(new TpeProposer(new TpeOptions(Joint: true)), TestFunctions.HartmannSpace, TestFunctions.Hartmann, 30, 40);
+        double independent = ProposerRuns.MedianBest(new TpeProposer(new TpeOptions(Joint: false)), TestFunctions.HartmannSpace, TestFunctions.Hartmann, 30, 40);
 
         Assert.True(joint < independent - 0.1, $"joint {joint:F3}, independent {independent:F3}");
     }
@@ -223,8 +223,8 @@ public sealed class TpeProposerTests
     [Fact]
     public void Rejects_settings_outside_their_meaning()
     {
-        Assert.Throws<ArgumentOutOfRangeException>(() => new TpeProposer(new TpeOptions(Gamma: 1)));
-        Assert.Throws<ArgumentOutOfRangeException>(() => new TpeProposer(new TpeOptions(Candidates: 0)));
-        Assert.Throws<ArgumentOutOfRangeException>(() => new TpeProposer(new TpeOptions(StartupResults: 1)));
+        Assert.Throws<ArgumentOutOfRangeException>(() => new TpeProposer(new TpeOptions(GoodFraction: 1)));
+        Assert.Throws<ArgumentOutOfRangeException>(() => new TpeProposer(new TpeOptions(DrawsPerProposal: 0)));
+        Assert.Throws<ArgumentOutOfRangeException>(() => new TpeProposer(new TpeOptions(RandomStart: 1)));
     }
 }

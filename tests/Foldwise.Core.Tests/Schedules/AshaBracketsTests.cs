@@ -68,7 +68,7 @@ public sealed class AshaBracketsTests
     [Fact]
     public void Starts_each_bracket_at_its_own_rung_and_promotes_within_the_bracket_as_worked_by_hand()
     {
-        var options = new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Random, MinBudget: 1, MaxBudget: 9, Eta: 3, Brackets: 3);
+        var options = new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Random, FirstRung: 1, FullBudget: 9, Eta: 3, Brackets: 3);
         var coordinator = new FakeCoordinator(new AshaSchedule(FakeCoordinator.Families("only"), options, new RandomProposer(), seed: 7));
         var first = Enumerable.Range(0, 5).Select(_ => coordinator.CreateNext()!).ToList();
         Assert.Equal([(0, 1, 1), (0, 1, 1), (1, 3, 2), (0, 1, 1), (2, 9, 3)], first.Select(t => (t.Rung, t.Budget, t.Bracket)));
@@ -100,7 +100,7 @@ public sealed class AshaBracketsTests
     public void A_trial_without_a_bracket_counts_in_the_first_so_a_store_from_plain_asha_resumes_into_brackets()
     {
         // Given three results of plain ASHA (bracket 0 on the record), the best at .1
-        var options = new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Random, MinBudget: 1, MaxBudget: 9, Eta: 3, Brackets: 2);
+        var options = new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Random, FirstRung: 1, FullBudget: 9, Eta: 3, Brackets: 2);
         var schedule = new AshaSchedule(FakeCoordinator.Families("only"), options, new RandomProposer(), seed: 7);
         var plain = new FakeCoordinator(new AshaSchedule(FakeCoordinator.Families("only"), options with { Brackets = 1 }, new RandomProposer(), seed: 7));
         for (int i = 1; i <= 3; i++)

@@ -9,10 +9,10 @@ namespace Foldwise.Core.Tests.Schedules;
 public sealed class AshaScheduleTests
 {
     private static AshaSchedule Schedule(params string[] families) =>
-        new(FakeCoordinator.Families(families), new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Random, MinBudget: 1, MaxBudget: 9, Eta: 3), new RandomProposer(), seed: 7);
+        new(FakeCoordinator.Families(families), new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Random, FirstRung: 1, FullBudget: 9, Eta: 3), new RandomProposer(), seed: 7);
 
     [Fact]
-    public void Places_rungs_at_min_budget_times_powers_of_eta_ending_with_max_budget()
+    public void Places_rungs_at_first_rung_times_powers_of_eta_ending_with_full_budget()
     {
         Assert.Equal([25, 75, 225, 400], RungBudgets.For(25, 400, 3).ToArray());
         Assert.Equal([1, 3, 9], RungBudgets.For(1, 9, 3).ToArray());

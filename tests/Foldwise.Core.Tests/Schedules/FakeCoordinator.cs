@@ -80,7 +80,7 @@ internal sealed class FakeCoordinator(ISchedule schedule)
     };
 
     public static FamilySearch Family(string name) => new(name, new ParameterSpace(
-        [ParameterRange.Float("x", 0, 1), ParameterRange.Integer("k", 1, 20), ParameterRange.Choice("c", "a", "b", "c")]));
+        [ParameterRange.Linear("x", 0, 1), ParameterRange.Whole("k", 1, 20), ParameterRange.OneOf("c", "a", "b", "c")]));
 
     /// <summary>A smooth synthetic score that improves with budget and has its best near x = 0.3, k = 12, c = b.</summary>
     public static double Score(TrialRecord trial)

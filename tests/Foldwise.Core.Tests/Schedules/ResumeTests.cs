@@ -20,7 +20,7 @@ public sealed class ResumeTests
     public void Replaying_the_journal_into_a_fresh_schedule_gives_the_same_next_plans(ScheduleKind kind, ProposerKind proposer, int brackets)
     {
         // Given a search that ran 150 trials on four slots, with failures and lost leases along the way
-        var definition = FakeCoordinator.Definition(new ScheduleOptions(kind, proposer, MinBudget: 1, MaxBudget: 27, Eta: 3, Brackets: brackets), seed: 11,
+        var definition = FakeCoordinator.Definition(new ScheduleOptions(kind, proposer, FirstRung: 1, FullBudget: 27, Eta: 3, Brackets: brackets), seed: 11,
             FakeCoordinator.Family("first"), FakeCoordinator.Family("second"));
         var original = new FakeCoordinator(ScheduleFactory.Create(definition));
         Simulate(original, trials: 150, slots: 4, seed: 5);

@@ -1,0 +1,25 @@
+using Foldwise.Core.Definition;
+
+namespace Foldwise.Core.Schedules;
+
+/// <summary>
+/// The one numbering of brackets a person reads — in plan, show, history, the report and JSON: from 1, in the
+/// order <c>foldwise plan</c> lists them. ASHA trials store that number already (0 when the schedule has a single
+/// bracket); Hyperband trials store the ordinal of their bracket's run, which counts on past the plan's last
+/// bracket when the plan starts over, so it is folded back onto the plan's brackets here.
+/// </summary>
+public sealed class BracketNumbers
+{
+    private readonly int _hyperbandBrackets;
+
+    private BracketNumbers(int hyperbandBrackets) => _hyperbandBrackets = hyperbandBrackets;
+
+    public static BracketNumbers For(ScheduleOptions schedule) => new(schedule.Kind == ScheduleKind.Hyperband
+        ? HyperbandPlan.For(schedule.FirstRung, schedule.FullBudget, schedule.Eta).Brackets.Length
+        : 0);
+
+    /// <summary>The bracket a trial stored as <paramref name="stored"/> belongs to, or null when its schedule has no brackets.</summary>
+    public int? Of(int stored) => stored < 1 ? null
+        : _hyperbandBrackets > 0 ? ((stored - 1) % _hyperbandBrackets) + 1
+        : stored;
+}
