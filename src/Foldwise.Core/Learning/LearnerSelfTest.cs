@@ -53,8 +53,8 @@ public static class LearnerSelfTest
 
     private static double Middle(ParameterRange range) => range.Kind switch
     {
-        ParameterKind.LogFloat => Math.Sqrt(range.Low * range.High),
-        ParameterKind.Integer or ParameterKind.Choice => Math.Floor((range.Low + range.High) / 2),
+        ParameterKind.Log => Math.Sqrt(range.Low * range.High),
+        ParameterKind.Whole or ParameterKind.OneOf => Math.Floor((range.Low + range.High) / 2),
         _ => (range.Low + range.High) / 2,
     };
 
