@@ -56,6 +56,15 @@ public sealed class PlanCommandTests
         Assert.Contains("bracket 3 starts at 180 rounds, 180 per candidate on average; with all 3, new candidates split 55 % : 27 % : 18 %", text.Output.ReplaceLineEndings(" ").Replace("  ", " "));
     }
 
+    [Fact]
+    public void Refuses_an_eta_below_two()
+    {
+        var plan = CliHarness.Run("plan", "--eta", "1");
+
+        Assert.Equal(ExitCodes.Usage, plan.ExitCode);
+        Assert.Contains("--eta must be at least 2", plan.Output);
+    }
+
     [Theory]
     [InlineData("--min-budget", "20", "--first-rung")]
     [InlineData("--max-budget", "180", "--full-budget")]

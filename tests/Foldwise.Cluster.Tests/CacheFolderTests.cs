@@ -20,7 +20,7 @@ public sealed class CacheFolderTests : IDisposable
         CacheFolder.Ensure(folder);
         string table = Path.Combine(folder, "a" + CacheFolder.Extension);
 
-        await CacheFolder.WriteAsync(table, [1, 2, 3], CancellationToken.None);
+        await WriteAsync(table, [1, 2, 3]);
 
         Assert.Equal(UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.UserExecute, File.GetUnixFileMode(folder));
         Assert.Equal(UnixFileMode.UserRead | UnixFileMode.UserWrite, File.GetUnixFileMode(table));
@@ -35,7 +35,7 @@ public sealed class CacheFolderTests : IDisposable
         for (int i = 0; i < names.Length; i++)
         {
             string path = Path.Combine(folder, names[i] + CacheFolder.Extension);
-            await CacheFolder.WriteAsync(path, new byte[100], CancellationToken.None);
+            await WriteAsync(path, new byte[100]);
             File.SetLastWriteTimeUtc(path, new DateTime(2026, 12, 1, 9, i, 0, DateTimeKind.Utc));
         }
 
@@ -47,5 +47,11 @@ public sealed class CacheFolderTests : IDisposable
         Assert.Equal(["middle.fwt", "new.fwt"], Directory.GetFiles(folder).Select(Path.GetFileName).Order());
         Assert.Equal(2, CacheFolder.Clear(folder));
         Assert.Empty(Directory.GetFiles(folder));
+    }
+
+    private static async Task WriteAsync(string path, byte[] bytes)
+    {
+        await using var file = CacheFolder.CreateOwnerOnly(path);
+        await file.WriteAsync(bytes);
     }
 }

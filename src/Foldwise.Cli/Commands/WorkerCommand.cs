@@ -1,9 +1,13 @@
 using System.Net;
 using System.Runtime.InteropServices;
+using Foldwise.Cli.Output;
 using Foldwise.Cli.Running;
+using Foldwise.Tuning;
 using Foldwise.Cluster.Hosting;
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Cluster.Workers;
 using Foldwise.Core.Data;
+using Foldwise.Core.Events;
 using Spectre.Console;
 using Spectre.Console.Cli;
 
@@ -55,17 +59,18 @@ public sealed class WorkerCommand(IAnsiConsole console) : AsyncCommand<WorkerSet
 
         if (OpenCluster.Warning(role.Advertise, role.Certificate is not null) is { } risk)
         {
-            console.MarkupLine($"[yellow]{Markup.Escape(risk)}[/]");
+            // stderr, with the other warnings: stdout may be the --json event stream.
+            await Console.Error.WriteLineAsync($"foldwise: {risk}");
         }
 
         using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancellationToken);
         using var sigterm = PosixSignalRegistration.Create(PosixSignal.SIGTERM, s => { s.Cancel = true; stop.Cancel(); });
         using var sigint = PosixSignalRegistration.Create(PosixSignal.SIGINT, s => { s.Cancel = true; stop.Cancel(); });
-        console.MarkupLine($"Worker [bold]{Markup.Escape(options.Name)}[/] joining {Markup.Escape(join.ToString())} from {role.Advertise}" +
-                           (role.Certificate is null ? " (no certificate)" : " (mutual TLS)") + "; Ctrl-C to leave");
         string[] commandLine = [.. context.Arguments];
-        string? refusal = await new WorkerHost(role, options, Console.Out)
+        IProgress<SearchEvent> events = settings.Json ? new EventJsonLines(Console.Out) : new WorkerLines(Console.Out);
+        string? refusal = await new WorkerHost(role, options, events)
         {
+            Telemetry = FoldwiseTelemetryOptions.FromEnvironment(),
             StartOver = attempts => FreshProcess.Restart(commandLine, attempts),
             EarlierAttempts = int.TryParse(Environment.GetEnvironmentVariable(FreshProcess.AttemptVariable), out int earlier) ? earlier : 0,
         }.RunAsync(stop.Token);

@@ -1,5 +1,7 @@
+using System.Diagnostics;
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Telemetry;
+using Foldwise.Core.Events;
 using Foldwise.Core.Search;
 
 namespace Foldwise.Cluster.Coordination;
@@ -14,15 +16,18 @@ public sealed class CoordinatorSession
     private readonly ISearchRecorder recorder;
     private readonly TaskCompletionSource finished = new(TaskCreationOptions.RunContinuationsAsynchronously);
     private readonly object gate = new();
-    private readonly SearchSpan span;
+    private readonly IProgress<SearchEvent> events;
+    private readonly string? traceParent;
 
-    public CoordinatorSession(SearchManifest manifest, SearchCoordinator coordinator, ISearchRecorder recorder)
+    /// <param name="events">Receives trials started, promoted, scored and failed, on the threads that decide them. Default: none.</param>
+    /// <param name="search">The search's span: every lease carries it, so each trial's span, on whichever machine, is its child. Default: none.</param>
+    public CoordinatorSession(SearchManifest manifest, SearchCoordinator coordinator, ISearchRecorder recorder, IProgress<SearchEvent>? events = null, ActivityContext search = default)
     {
         Manifest = manifest;
         Coordinator = coordinator;
         this.recorder = recorder;
-        span = new SearchSpan(manifest.SearchId, coordinator.Definition.Name);
-        FoldwiseMetrics.Track(this);
+        this.events = events ?? NoEvents.Instance;
+        traceParent = search == default ? null : TraceParent.Of(search);
     }
 
     public string SearchId => Manifest.SearchId;
@@ -37,14 +42,22 @@ public sealed class CoordinatorSession
     /// <summary>Why the search stopped on a failed store write (e.g. "IOException: No space left on device"); null while the store takes every write.</summary>
     public string? StoreFault { get; private set; }
 
-    /// <summary>Raised after a trial's result is committed (for progress lines).</summary>
-    public event Action<TrialRecord>? TrialFinished;
-
+    /// <param name="families">The families this worker offers (null: any); a trial of another family is never leased to it.</param>
     public LeaseReply Lease(string worker, string slot, IReadOnlyCollection<string>? families = null)
     {
         if (StoreFault is not null || !Writing(() => Coordinator.Lease(worker, slot, families), out var grant))
         {
             return LeaseReply.Done;
+        }
+
+        if (grant.Kind == LeaseKind.Granted)
+        {
+            if (grant.Trial!.ParentId is not null && grant.Trial.Attempt == 1)
+            {
+                events.Report(new CandidatePromoted(SearchId, grant.Trial));
+            }
+
+            events.Report(new TrialStarted(SearchId, grant.Trial));
         }
 
         CheckFinished();
@@ -58,7 +71,8 @@ public sealed class CoordinatorSession
                 grant.Run!.Values.ToDictionary(),
                 grant.Trial.Budget,
                 grant.Seed,
-                grant.Trial.LeaseExpires!.Value - grant.Trial.Started!.Value),
+                grant.Trial.LeaseExpires!.Value - grant.Trial.Started!.Value,
+                traceParent),
             LeaseKind.Wait => LeaseReply.Waiting,
             LeaseKind.Quarantined => LeaseReply.Waiting with { Status = LeaseStatus.Quarantined, Reason = grant.Reason },
             _ => LeaseReply.Done,
@@ -86,7 +100,7 @@ public sealed class CoordinatorSession
 
             if (accepted)
             {
-                TrialFinished?.Invoke(Coordinator.Trial(report.TrialId)!);
+                events.Report(new TrialScored(SearchId, Coordinator.Trial(report.TrialId)!, Coordinator.Progress()));
             }
 
             CheckFinished();
@@ -99,6 +113,11 @@ public sealed class CoordinatorSession
         if (StoreFault is not null || !Writing(() => Coordinator.Release(trialId, attempt, reason, interrupted), out bool released))
         {
             return false;
+        }
+
+        if (released && Coordinator.Trial(trialId) is { State: TrialState.Failed } failed)
+        {
+            events.Report(new TrialFailed(SearchId, failed, Coordinator.Progress()));
         }
 
         CheckFinished();
@@ -125,12 +144,27 @@ public sealed class CoordinatorSession
             return;
         }
 
-        Writing(() =>
+        int failedBefore = Coordinator.Progress().Failed;
+        if (!Writing(() => { Coordinator.ExpireLeases(); return true; }, out _))
         {
-            Coordinator.ExpireLeases();
-            recorder.UpdateSpent(Coordinator.Progress().SpentSeconds, finished: false);
-            return true;
-        }, out _);
+            return;
+        }
+
+        var progress = Coordinator.Progress();
+        if (progress.Failed > failedBefore)
+        {
+            // A trial whose last allowed attempt expired: the newest failures are the ones this tick caused.
+            foreach (var failed in Coordinator.Trials().Where(t => t.State == TrialState.Failed).OrderByDescending(t => t.Finished ?? t.Created).Take(progress.Failed - failedBefore))
+            {
+                events.Report(new TrialFailed(SearchId, failed, progress));
+            }
+        }
+
+        if (!Writing(() => { recorder.UpdateSpent(progress.SpentSeconds, finished: false); return true; }, out _))
+        {
+            return;
+        }
+
         CheckFinished();
     }
 
@@ -148,7 +182,6 @@ public sealed class CoordinatorSession
         {
             result = default!;
             StoreFault ??= $"{e.GetType().Name}: {e.Message.Split('\n')[0].Trim()}";
-            span.End(Coordinator.Progress());
             finished.TrySetResult();
             return false;
         }
@@ -159,7 +192,6 @@ public sealed class CoordinatorSession
         var progress = Coordinator.Progress();
         if (progress.Finished)
         {
-            span.End(progress);
             finished.TrySetResult();
         }
     }

@@ -24,17 +24,16 @@ public static class CacheFolder
         File.SetUnixFileMode(folder, OwnerFolder);
     }
 
-    /// <summary>Writes a file only its owner can read.</summary>
-    public static async Task WriteAsync(string path, byte[] bytes, CancellationToken cancellation)
+    /// <summary>Creates (or empties) a file only its owner can read, open for writing.</summary>
+    public static FileStream CreateOwnerOnly(string path)
     {
-        var options = new FileStreamOptions { Mode = FileMode.Create, Access = FileAccess.Write, Share = FileShare.None };
+        var options = new FileStreamOptions { Mode = FileMode.Create, Access = FileAccess.Write, Share = FileShare.None, BufferSize = 1 };
         if (!OperatingSystem.IsWindows())
         {
             options.UnixCreateMode = OwnerFile;
         }
 
-        await using var stream = new FileStream(path, options);
-        await stream.WriteAsync(bytes, cancellation);
+        return new FileStream(path, options);
     }
 
     /// <summary>Marks a cached table as just used, so pruning keeps it longest.</summary>

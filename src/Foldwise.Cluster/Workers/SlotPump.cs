@@ -1,6 +1,7 @@
 using Foldwise.Cluster.Contracts;
+using Foldwise.Cluster.Telemetry;
+using Foldwise.Core.Events;
 using Foldwise.Core.Learning;
-using Foldwise.Learners;
 using Microsoft.Extensions.Hosting;
 using Microsoft.Extensions.Logging;
 
@@ -19,6 +20,8 @@ public sealed partial class SlotPump(
     SlotStatistics statistics,
     WorkerStop stop,
     TimeProvider time,
+    FoldwiseMetrics metrics,
+    IProgress<SearchEvent> events,
     ILoggerFactory loggers) : BackgroundService
 {
     private readonly ILogger logger = loggers.CreateLogger<SlotPump>();
@@ -45,7 +48,7 @@ public sealed partial class SlotPump(
 
         var runnerLog = loggers.CreateLogger<SlotRunner>();
         await Task.WhenAll(Enumerable.Range(0, options.Slots).Select(i =>
-            new SlotRunner(i.ToString(), offered, grains, data, learners, options, statistics, time, runnerLog).RunAsync(stoppingToken)));
+            new SlotRunner(i.ToString(), offered, grains, data, learners, options, statistics, time, metrics, events, runnerLog).RunAsync(stoppingToken)));
     }
 
     private string[] SelfTest()
@@ -55,8 +58,10 @@ public sealed partial class SlotPump(
         {
             if (LearnerSelfTest.Problem(learners.Get(family)) is { } problem)
             {
-                var missing = NativePrerequisites.Missing();
-                LogFamilyRefused(family, missing.Count > 0 ? $"{string.Join("; ", missing)} ({problem})" : problem);
+                var missing = learners.MissingLibraries();
+                string why = missing.Count > 0 ? $"{string.Join("; ", missing)} ({problem})" : problem;
+                LogFamilyRefused(family, why);
+                events.Report(new FamilyNotOffered(family, why));
             }
             else
             {

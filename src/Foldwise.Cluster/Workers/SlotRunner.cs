@@ -1,6 +1,7 @@
 using System.Diagnostics;
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Telemetry;
+using Foldwise.Core.Events;
 using Foldwise.Core.Learning;
 using Foldwise.Core.Spaces;
 using Microsoft.Extensions.Logging;
@@ -21,6 +22,8 @@ public sealed partial class SlotRunner(
     WorkerOptions options,
     SlotStatistics statistics,
     TimeProvider time,
+    FoldwiseMetrics metrics,
+    IProgress<SearchEvent> events,
     ILogger logger)
 {
     private static readonly TimeSpan MaxBackoff = TimeSpan.FromSeconds(5);
@@ -58,7 +61,9 @@ public sealed partial class SlotRunner(
                 // it worked on had finished (its coordinator is expected to go).
                 if (!unreachable && !searchFinished)
                 {
-                    LogCoordinatorUnreachable(slot, e.Message.Split('\n')[0].Trim());
+                    string reason = e.Message.Split('\n')[0].Trim();
+                    LogCoordinatorUnreachable(slot, reason);
+                    events.Report(new SlotCoordinatorUnreachable(options.Name, slot, reason));
                     unreachable = true;
                 }
 
@@ -83,7 +88,9 @@ public sealed partial class SlotRunner(
         {
             if (quarantinedIn != searchId)
             {
-                LogQuarantined(slot, searchId, lease.Reason ?? "no reason given");
+                string reason = lease.Reason ?? "no reason given";
+                LogQuarantined(slot, searchId, reason);
+                events.Report(new SlotQuarantined(options.Name, slot, searchId, reason));
                 quarantinedIn = searchId;
             }
 
@@ -105,10 +112,10 @@ public sealed partial class SlotRunner(
         using var abandon = CancellationTokenSource.CreateLinkedTokenSource(stopping);
         var renewing = RenewAsync(search, lease, abandon);
         var clock = Stopwatch.StartNew();
-        using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.TrialSpan, ActivityKind.Consumer);
-        span?.SetTag("foldwise.search", searchId).SetTag("foldwise.trial", lease.TrialId).SetTag("foldwise.attempt", lease.Attempt)
-            .SetTag("foldwise.family", lease.Family).SetTag("foldwise.budget", lease.Budget).SetTag("foldwise.worker", options.Name).SetTag("foldwise.slot", slot);
-        FoldwiseMetrics.SlotBusy();
+        using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.TrialSpan, ActivityKind.Consumer, TraceParent.Parse(lease.TraceParent));
+        span?.SetTag(FoldwiseTelemetry.SearchTag, searchId).SetTag("foldwise.trial", lease.TrialId).SetTag("foldwise.attempt", lease.Attempt)
+            .SetTag(FoldwiseTelemetry.FamilyTag, lease.Family).SetTag("foldwise.budget", lease.Budget).SetTag("foldwise.worker", options.Name).SetTag("foldwise.slot", slot);
+        metrics.SlotBusy();
         string ending = "lost";
         try
         {
@@ -129,6 +136,7 @@ public sealed partial class SlotRunner(
             ending = "scored";
             span?.SetTag("foldwise.score", outcome.Score).SetTag("foldwise.accepted", accepted);
             LogTrialDone(slot, lease.TrialId, lease.Attempt, outcome.Score, clock.Elapsed.TotalSeconds, accepted);
+            events.Report(new SlotTrialScored(options.Name, slot, lease.TrialId, lease.Attempt, outcome.Score, clock.Elapsed, accepted));
         }
         catch (OperationCanceledException) when (stopping.IsCancellationRequested)
         {
@@ -140,6 +148,7 @@ public sealed partial class SlotRunner(
         {
             // The lease was lost (renewal refused): another attempt owns the trial now.
             LogLeaseLost(slot, lease.TrialId, lease.Attempt);
+            events.Report(new SlotLeaseLost(options.Name, slot, lease.TrialId, lease.Attempt));
         }
         catch (Exception e) when (e is not OperationCanceledException)
         {
@@ -147,15 +156,16 @@ public sealed partial class SlotRunner(
             // instead of holding its lease until it expires.
             string reason = $"{e.GetType().Name}: {e.Message.Split('\n')[0].Trim()}";
             LogTrialFailed(slot, lease.TrialId, reason);
+            events.Report(new SlotTrialFailed(options.Name, slot, lease.TrialId, lease.Attempt, reason));
             ending = "failed";
             span?.SetStatus(ActivityStatusCode.Error, reason);
             await ReleaseQuietly(search, lease, reason, interrupted: false);
         }
         finally
         {
-            FoldwiseMetrics.SlotIdle();
-            FoldwiseMetrics.TrialEnded(lease.Family, ending, clock.Elapsed.TotalSeconds);
-            span?.SetTag("foldwise.outcome", ending);
+            metrics.SlotIdle();
+            metrics.TrialEnded(lease.Family, ending, clock.Elapsed.TotalSeconds);
+            span?.SetTag(FoldwiseTelemetry.OutcomeTag, ending);
             await abandon.CancelAsync();
             await renewing;
         }

@@ -7,4 +7,7 @@ public interface ILearnerCatalog
     IReadOnlyList<string> Families { get; }
 
     IFoldLearner Get(string family);
+
+    /// <summary>One line per system library this machine lacks that a family needs, naming how to install it; empty when none is missing.</summary>
+    IReadOnlyList<string> MissingLibraries() => [];
 }

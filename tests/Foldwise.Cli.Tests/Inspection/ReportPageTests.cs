@@ -1,10 +1,12 @@
 using System.Net;
 using System.Text.Json;
 using System.Text.RegularExpressions;
+using Foldwise.Testing;
 using Xunit.Abstractions;
 
 namespace Foldwise.Cli.Tests.Inspection;
 
+[Trait(Lane.Key, Lane.Slow)]
 public sealed partial class ReportPageTests(ITestOutputHelper output) : IDisposable
 {
     private readonly InspectedStore store = new(finished: true);
@@ -37,8 +39,20 @@ public sealed partial class ReportPageTests(ITestOutputHelper output) : IDisposa
         Assert.Equal(new Dictionary<string, int> { ["fasttree"] = 1, ["lightgbm"] = 2 }, charts["blend-weights"]);
         Assert.Equal(new Dictionary<string, int> { ["predicted-vs-actual"] = 12, ["residuals"] = 12 }, charts["oof-fit"]);
         Assert.Equal(new Dictionary<string, int> { ["w1/0"] = 1, ["w1/1"] = 2, ["w2/0"] = 1, ["w2/1"] = 1 }, charts["timeline"]);
-        Assert.Equal(new Dictionary<string, int> { ["constant"] = 1, ["duplicate"] = 1, ["kept"] = 3, ["too few non-zero"] = 0 }, charts["screening"]);
+        Assert.Equal(new Dictionary<string, int> { ["constant"] = 1, ["duplicate"] = 1, ["kept"] = 3, ["too few non-zero"] = 0, ["all missing"] = 0, ["nearly unique text"] = 0 }, charts["screening"]);
         Assert.Equal(new Dictionary<string, int> { ["fasttree"] = 1, ["lightgbm"] = 2 }, charts["noise-floor"]);
+
+        // And it opens with the project's own views: how far candidates got, the noise floor, the blend and its diversity, its fit
+        var order = ChartSectionTag().Matches(html).Select(m => m.Groups["id"].Value).ToList();
+        Assert.Equal(["rung-reach", "noise-floor", "blend-weights", "oof-fit"], order.Take(4));
+        Assert.Contains("2 of 3 pool members from 2 of 2 families carry weight, worth 1.7 equally weighted members", html);
+
+        // And the familiar views follow under the project's questions, not as the lead and not under generic titles
+        Assert.Equal(["What the search found", "Were the definition&#39;s ranges well placed?", "How the search spent its time"], PartHeading().Matches(html).Select(m => m.Groups[1].Value));
+        Assert.True(order.IndexOf("best-over-time") > order.IndexOf("param-leaves"), "time comes after the ranges");
+        Assert.DoesNotContain("Best score over time", html);
+        Assert.DoesNotContain("Score against", html);
+        Assert.Contains("leaves within its range", html);
 
         // And one small chart per searched parameter: fasttree has no l2, so that chart shows lightgbm only
         Assert.Equal(["param-feature-fraction", "param-l2", "param-learning-rate", "param-leaves", "param-min-leaf-rows", "param-row-fraction"],
@@ -88,6 +102,9 @@ public sealed partial class ReportPageTests(ITestOutputHelper output) : IDisposa
 
     [GeneratedRegex("<section class=\"chart[^\"]*\" id=\"(?<id>[^\"]+)\" data-chart=\"[^\"]+\" data-series=\"(?<series>[^\"]*)\"")]
     private static partial Regex ChartSectionTag();
+
+    [GeneratedRegex("<h2 class=\"part\">([^<]+)</h2>")]
+    private static partial Regex PartHeading();
 
     [GeneratedRegex(@"https?://[^""'\s<>)]+")]
     private static partial Regex HttpMentions();

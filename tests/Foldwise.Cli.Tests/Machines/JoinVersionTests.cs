@@ -1,8 +1,12 @@
-using Foldwise.Cli.Running;
+using Foldwise.Cli.Output;
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Hosting;
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Cluster.Workers;
 using Foldwise.Core;
+using Foldwise.Core.Events;
+using Foldwise.Testing;
+using Foldwise.Tuning;
 
 namespace Foldwise.Cli.Tests.Machines;
 
@@ -24,19 +28,20 @@ public sealed class JoinVersionTests
     }
 
     [Fact]
+    [Trait(Lane.Key, Lane.Slow)]
     public async Task A_worker_of_another_build_stops_with_the_refusal_instead_of_working()
     {
         // Given a coordinator listening on loopback
         int port = MachineDefinition.FreePortPair();
         await using var coordinator = await EmbeddedCluster.StartAsync(
-            new ClusterRole { SiloPort = port, GatewayPort = port + 1 }, slots: 0, threads: null, CancellationToken.None);
+            new ClusterRole { SiloPort = port, GatewayPort = port + 1 }, slots: 0, threads: null, new FoldwiseTelemetryOptions(), NoEvents.Instance, CancellationToken.None);
 
         // When a worker claiming another build joins it
         using var output = new StringWriter();
         var worker = new WorkerHost(
             new ClusterRole { IsCoordinator = false, Join = new System.Net.IPEndPoint(System.Net.IPAddress.Loopback, port), SiloName = "old-build" },
             new WorkerOptions { Name = "old-build", Version = "0.0.1+000000000000" },
-            TextWriter.Synchronized(output));
+            new WorkerLines(output));
         using var timeout = new CancellationTokenSource(TimeSpan.FromSeconds(90));
         string? refusal = await worker.RunAsync(timeout.Token);
 

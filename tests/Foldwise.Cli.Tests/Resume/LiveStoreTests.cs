@@ -1,7 +1,9 @@
 using Foldwise.Cli.Tests.Processes;
+using Foldwise.Testing;
 
 namespace Foldwise.Cli.Tests.Resume;
 
+[Trait(Lane.Key, Lane.Slow)]
 [Collection(ResumeProcesses.Name)]
 public sealed class LiveStoreTests : IDisposable
 {

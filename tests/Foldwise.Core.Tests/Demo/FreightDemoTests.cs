@@ -1,5 +1,6 @@
 using Foldwise.Core.Data;
 using Foldwise.Core.Demo;
+using Foldwise.Testing;
 
 namespace Foldwise.Core.Tests.Demo;
 
@@ -21,12 +22,13 @@ public sealed class FreightDemoTests
     }
 
     [Fact]
+    [Trait(Lane.Key, Lane.Slow)]
     public void Makes_a_full_table_with_the_fields_character()
     {
         // Given the full demo
         var (train, test) = Full.Value;
 
-        // Then it is 4,500 × 5,000 at ~97% zeros (DESIGN.md, demo scenario), with a test table ten times longer
+        // Then it is 4,500 × 5,000 at ~97% zeros (the generator's full size, FreightDemo.Shape), with a test table ten times longer
         Assert.Equal((4_500, 5_000), (train.RowCount, train.FeatureCount));
         Assert.Equal(10 * train.RowCount, test.RowCount);
         Assert.InRange(train.Density, 0.025, 0.035);
