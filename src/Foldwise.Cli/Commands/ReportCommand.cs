@@ -9,10 +9,10 @@ public sealed class ReportCommand(IAnsiConsole console) : Command<ReportSettings
 {
     public override int Execute(CommandContext context, ReportSettings settings, CancellationToken cancellationToken)
     {
-        var (search, charts) = ReportBuilder.Build(settings.Store);
-        string html = ReportPage.Html(search, charts, DateTimeOffset.UtcNow);
+        var (search, parts) = ReportBuilder.Build(settings.Store);
+        string html = ReportPage.Html(search, parts, DateTimeOffset.UtcNow);
         ReportPage.WriteAtomically(settings.Out, html);
-        console.MarkupLine($"Wrote [bold]{Markup.Escape(Path.GetFullPath(settings.Out))}[/]: {charts.Count} charts, {html.Length / 1024:N0} KB, nothing loaded from the network.");
+        console.MarkupLine($"Wrote [bold]{Markup.Escape(Path.GetFullPath(settings.Out))}[/]: {parts.Sum(p => p.Charts.Count)} charts in {parts.Count(p => p.Charts.Count > 0)} parts, {html.Length / 1024:N0} KB, nothing loaded from the network.");
         return ExitCodes.Ok;
     }
 }

@@ -4,7 +4,7 @@ using ScottPlot;
 
 namespace Foldwise.Cli.Report;
 
-/// <summary>Best out-of-fold score so far per family against minutes since the search began (each finished trial is a step).</summary>
+/// <summary>When each family last improved: its best out-of-fold score so far against minutes since the search began (each finished trial is a step).</summary>
 public static class BestOverTimeChart
 {
     public const string Id = "best-over-time";
@@ -49,8 +49,8 @@ public static class BestOverTimeChart
         plot.ShowLegend(Alignment.UpperRight);
         return new ChartSection(
             Id,
-            "Best score over time, per family",
-            "Where a family's line goes flat the search stopped finding better candidates for it: more hours would buy little; a line still falling says the budget ended too soon.",
+            "When each family last improved",
+            "Each step down is a finished trial that beat its family's best so far. A family whose last step came early had stopped finding better candidates, so more hours would buy it little; steps until the end say the budget ran out first.",
             ChartSvg.Render(plot, Id),
             series.ToImmutable());
     }

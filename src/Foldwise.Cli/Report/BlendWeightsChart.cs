@@ -4,7 +4,11 @@ using ScottPlot;
 
 namespace Foldwise.Cli.Report;
 
-/// <summary>The blend's weights: one horizontal bar per pool member, heaviest on top, coloured by family.</summary>
+/// <summary>
+/// The blend and its diversity: one horizontal bar per pool member, heaviest on top, coloured by family; the reading
+/// gives how many members and families carry weight and the effective number of members, 1 / Σw² (equal to the
+/// member count when weights are equal, 1 when one member carries everything).
+/// </summary>
 public static class BlendWeightsChart
 {
     public const string Id = "blend-weights";
@@ -40,11 +44,13 @@ public static class BlendWeightsChart
             }
 
             string m = search.Metric.Name;
+            var weighted = blend.Members.Where(x => x.Weight > 0).ToList();
+            double effective = 1 / weighted.Sum(x => x.Weight * x.Weight);
             reading = string.Create(CultureInfo.InvariantCulture,
-                $"A member with weight 0 was in the pool but adds nothing the others lack. The blend's nested estimate is {blend.NestedScore:F5} {m} (in-sample {blend.InSampleScore:F5}, which flatters itself) against {blend.BestSingleScore:F5} for the best single trial {blend.BestSingleTrialId}: the blend is worth keeping only if that gap is larger than the noise floor below.");
+                $"{weighted.Count} of {blend.Members.Length} pool members from {weighted.Select(x => x.Family).Distinct().Count()} of {families.Count} families carry weight, worth {effective:F1} equally weighted members; a member with weight 0 adds nothing the others lack. The blend's nested estimate is {blend.NestedScore:F5} {m} (in-sample {blend.InSampleScore:F5}, which flatters itself) against {blend.BestSingleScore:F5} for the best single trial {blend.BestSingleTrialId}: the blend is worth keeping only if that gap is larger than the noise floor above.");
         }
 
-        return new ChartSection(Id, "Blend weights", reading, ChartSvg.Render(plot, Id), series.ToImmutable());
+        return new ChartSection(Id, "The blend: its members and how diverse they are", reading, ChartSvg.Render(plot, Id), series.ToImmutable());
     }
 
     private static string Score(Dictionary<int, double?> scores, int id) =>

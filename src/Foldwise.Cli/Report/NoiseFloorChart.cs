@@ -49,6 +49,6 @@ public static class NoiseFloorChart
         plot.XLabel($"OOF {search.Metric.Name} (pooled)");
         plot.YLabel("standard deviation across folds");
         plot.ShowLegend(Alignment.UpperRight);
-        return new ChartSection(Id, "Noise floor: fold-to-fold spread", reading, ChartSvg.Render(plot, Id), series.ToImmutable());
+        return new ChartSection(Id, "Noise floor: how far apart two scores must be", reading, ChartSvg.Render(plot, Id), series.ToImmutable());
     }
 }

@@ -28,7 +28,7 @@ public static class OutOfFoldChart
 
         return new ChartSection(
             Id,
-            "Out-of-fold predicted against actual (blend)",
+            "The blend on rows it never trained on",
             "Points on the dashed line are predicted exactly; a residual cloud that tilts or fans out shows where the model is biased (typically it pulls extreme targets towards the middle), which the single score hides.",
             $"<div class=\"pair\">{body}</div>",
             series.ToImmutable());

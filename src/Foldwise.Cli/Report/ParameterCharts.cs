@@ -7,10 +7,10 @@ using ScottPlot;
 namespace Foldwise.Cli.Report;
 
 /// <summary>
-/// Score against each searched parameter, one small chart per parameter, coloured by family. Each candidate
-/// appears once, at its first evaluation (a new candidate, not a promotion), so points share a budget and
-/// compare fairly. Parameters are ordered by how strongly their rank follows the score's; at most
-/// <see cref="MaxCharts"/> are drawn.
+/// Whether each searched parameter's range was well placed: one small chart per parameter, score against the
+/// parameter's value over its range, coloured by family. Each candidate appears once, at its first evaluation (a new
+/// candidate, not a promotion), so points share a budget and compare fairly. Parameters keep the definition's
+/// order; at most <see cref="MaxCharts"/> are drawn.
 /// </summary>
 public static class ParameterCharts
 {
@@ -23,15 +23,13 @@ public static class ParameterCharts
         var names = search.Definition.Families
             .SelectMany(f => f.Space.Ranges.Where(r => !r.IsFixed).Select(r => r.Name))
             .Distinct()
-            .Select(n => (Name: n, Strength: Strength(firsts.Where(t => t.Parameters.Values.ContainsKey(n)).ToList(), n)))
-            .OrderByDescending(p => p.Strength)
-            .ThenBy(p => p.Name, StringComparer.Ordinal)
             .Take(MaxCharts);
-        return [.. names.Select(p => Chart(search, families, firsts, p.Name, p.Strength))];
+        return [.. names.Select(n => Chart(search, families, firsts, n))];
     }
 
-    private static ChartSection Chart(StoredSearch search, List<string> families, List<TrialRecord> firsts, string name, double strength)
+    private static ChartSection Chart(StoredSearch search, List<string> families, List<TrialRecord> firsts, string name)
     {
+        var scored = firsts.Where(t => t.Parameters.Values.ContainsKey(name)).ToList();
         string id = "param-" + new string([.. name.Select(c => char.IsAsciiLetterOrDigit(c) ? c : '-')]);
         var plot = new Plot();
         var series = ImmutableSortedDictionary.CreateBuilder<string, int>();
@@ -65,11 +63,35 @@ public static class ParameterCharts
         plot.YLabel(search.Metric.Name);
         return new ChartSection(
             id,
-            $"Score against {name}",
-            $"Rank correlation with the score {strength.ToString("F2", CultureInfo.InvariantCulture)} (0 = no pattern, 1 = the score follows this parameter closely); a clear slope or valley says where in its range this parameter pays.",
+            $"{name} within its range",
+            Reading(shown, scored, name),
             ChartSvg.Render(plot, id, small: true),
             series.ToImmutable(),
             Small: true);
+    }
+
+    private static string Reading(ParameterRange? range, List<TrialRecord> scored, string name)
+    {
+        string strength = Strength(scored, name).ToString("F2", CultureInfo.InvariantCulture);
+        string follows = $"Rank correlation with the score {strength} (0 = no pattern, 1 = the score follows {name} closely).";
+        if (range is null || scored.Count == 0)
+        {
+            return follows + " No candidate has a score yet.";
+        }
+
+        var best = scored.MinBy(t => t.Score!.Value)!;
+        double value = best.Parameters[name];
+        if (range.Kind == ParameterKind.OneOf)
+        {
+            return $"{follows} The best candidate so far took {range.Display(value)}.";
+        }
+
+        double share = (Position(range, value) - Position(range, range.Low)) / (Position(range, range.High) - Position(range, range.Low));
+        string where = share <= 0.1 ? "near the low end: lower values may do better still"
+            : share >= 0.9 ? "near the high end: higher values may do better still"
+            : "inside it, away from both ends";
+        return string.Create(CultureInfo.InvariantCulture,
+            $"{follows} The best candidate so far took {range.Display(value)}, {share:P0} of the way through the range {range.Display(range.Low)} to {range.Display(range.High)}: {where}.");
     }
 
     private static double Position(ParameterRange range, double value) =>

@@ -3,26 +3,37 @@ using Foldwise.Storage;
 
 namespace Foldwise.Cli.Report;
 
-/// <summary>Reads a store once and builds every chart of the report, in page order.</summary>
+/// <summary>
+/// Reads a store once and builds the report's parts in page order: first what the search found (how far candidates
+/// got, the noise floor, the blend and its diversity, the blend's fit), then whether the definition's ranges were well
+/// placed, then how the search spent its time and which columns it saw.
+/// </summary>
 public static class ReportBuilder
 {
-    public static (StoredSearch Search, IReadOnlyList<ChartSection> Charts) Build(string storeFileOrFolder)
+    public static (StoredSearch Search, IReadOnlyList<ReportPart> Parts) Build(string storeFileOrFolder)
     {
         using var store = SearchStore.OpenReadOnly(Path.GetFullPath(StoreFile.Resolve(storeFileOrFolder)));
         var search = StoredSearch.Load(store);
         double[]? blended = BlendedOutOfFold(store, search.Blend);
-        var charts = new List<ChartSection>
-        {
-            BestOverTimeChart.Build(search),
-            RungReachChart.Build(search),
-        };
-        charts.AddRange(ParameterCharts.Build(search));
-        charts.Add(BlendWeightsChart.Build(search));
-        charts.Add(OutOfFoldChart.Build(search, blended));
-        charts.Add(TimelineChart.Build(search));
-        charts.Add(ScreeningSummary.Build(search));
-        charts.Add(NoiseFloorChart.Build(search));
-        return (search, charts);
+        return (search,
+        [
+            new ReportPart(
+                "found",
+                "What the search found",
+                "How far candidates got, how large a difference the folds can resolve, and what the blend made of the best trials.",
+                [RungReachChart.Build(search), NoiseFloorChart.Build(search), BlendWeightsChart.Build(search), OutOfFoldChart.Build(search, blended)]),
+            new ReportPart(
+                "ranges",
+                "Were the definition's ranges well placed?",
+                "Each candidate once, at its first rung, coloured by family (" + ReportPage.Swatches(search) + "), one chart per parameter in the definition's order. " +
+                "Where the best scores crowd against one end of a range, better values may lie beyond it: widen the range there.",
+                ParameterCharts.Build(search)),
+            new ReportPart(
+                "time",
+                "How the search spent its time",
+                "Whether more hours would have bought better candidates, where each slot's hours went, and which columns never reached a learner.",
+                [BestOverTimeChart.Build(search), TimelineChart.Build(search), ScreeningSummary.Build(search)]),
+        ]);
     }
 
     /// <summary>Σ weight × member OOF vector over the members with a weight; null without a blend.</summary>

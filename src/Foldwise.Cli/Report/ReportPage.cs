@@ -2,21 +2,23 @@ using System.Globalization;
 using System.Net;
 using System.Text;
 using System.Text.Json;
+using Foldwise.Core.Definition;
 using Foldwise.Core.Search;
 
 namespace Foldwise.Cli.Report;
 
 /// <summary>
 /// Assembles the report: one HTML file with its style and every chart inline (SVG), loading nothing from the
-/// network, so it opens anywhere and can be attached to a review. Each chart is a <c>section.chart</c> with an id
-/// and a <c>data-series</c> JSON object (series name → point count).
+/// network, so it opens anywhere and can be attached to a review. Each part is a <c>section.part</c> with its
+/// heading and question; each chart a <c>section.chart</c> with an id and a <c>data-series</c> JSON object
+/// (series name → point count).
 /// </summary>
 public static class ReportPage
 {
-    public static string Html(StoredSearch search, IReadOnlyList<ChartSection> charts, DateTimeOffset written)
+    public static string Html(StoredSearch search, IReadOnlyList<ReportPart> parts, DateTimeOffset written)
     {
         ArgumentNullException.ThrowIfNull(search);
-        ArgumentNullException.ThrowIfNull(charts);
+        ArgumentNullException.ThrowIfNull(parts);
         var page = new StringBuilder();
         string name = WebUtility.HtmlEncode(search.Definition.Name);
         page.Append(CultureInfo.InvariantCulture, $"""
@@ -29,30 +31,26 @@ public static class ReportPage
             <header><h1>Search <q>{name}</q></h1><p class="facts">{Facts(search, written)}</p></header>
             <main>
             """);
-        bool inGrid = false;
-        foreach (var chart in charts)
+        foreach (var part in parts.Where(p => p.Charts.Count > 0))
         {
-            if (chart.Small != inGrid)
+            page.Append(CultureInfo.InvariantCulture, $"""
+                <section class="part" id="part-{part.Id}"><h2 class="part">{WebUtility.HtmlEncode(part.Heading)}</h2>
+                <p class="question">{part.QuestionHtml}</p>
+                {(part.IsGrid ? "<div class=\"grid\">" : "")}
+                """);
+            foreach (var chart in part.Charts)
             {
-                page.Append(chart.Small
-                    ? "<section class=\"grid-intro\"><h2>Score against each parameter</h2><p class=\"reading\">Each candidate's first evaluation, coloured by family (" + Swatches(search) + "); most telling parameter first.</p></section><div class=\"grid\">"
-                    : "</div>");
-                inGrid = chart.Small;
+                string series = WebUtility.HtmlEncode(JsonSerializer.Serialize(chart.Series));
+                page.Append(CultureInfo.InvariantCulture, $"""
+                    <section class="chart{(chart.Small ? " small" : "")}" id="{chart.Id}" data-chart="{chart.Id}" data-series="{series}">
+                    <h3>{WebUtility.HtmlEncode(chart.Title)}</h3>
+                    <p class="reading">{WebUtility.HtmlEncode(chart.Reading)}</p>
+                    <figure>{chart.Body}</figure>
+                    </section>
+                    """);
             }
 
-            string series = WebUtility.HtmlEncode(JsonSerializer.Serialize(chart.Series));
-            page.Append(CultureInfo.InvariantCulture, $"""
-                <section class="chart{(chart.Small ? " small" : "")}" id="{chart.Id}" data-chart="{chart.Id}" data-series="{series}">
-                <h2>{WebUtility.HtmlEncode(chart.Title)}</h2>
-                <p class="reading">{WebUtility.HtmlEncode(chart.Reading)}</p>
-                <figure>{chart.Body}</figure>
-                </section>
-                """);
-        }
-
-        if (inGrid)
-        {
-            page.Append("</div>");
+            page.Append(part.IsGrid ? "</div></section>" : "</section>");
         }
 
         page.Append("</main>").Append(ReportStyle.Footer).Append("</body></html>\n");
@@ -76,8 +74,10 @@ public static class ReportPage
         }
     }
 
-    private static string Swatches(StoredSearch search)
+    /// <summary>Each family's colour swatch and name, as HTML, to name the colours of charts that carry no legend.</summary>
+    public static string Swatches(StoredSearch search)
     {
+        ArgumentNullException.ThrowIfNull(search);
         var families = search.Definition.Families.Select(f => f.Family).ToList();
         return string.Join(", ", families.Select(f =>
             $"<span class=\"swatch\" style=\"background:{FamilyColors.HexFor(families, f)}\"></span>{WebUtility.HtmlEncode(f)}"));
@@ -86,11 +86,13 @@ public static class ReportPage
     private static string Facts(StoredSearch search, DateTimeOffset written)
     {
         var t = search.Trials;
+        var schedule = search.Definition.Schedule;
         int done = t.Count(x => x.State == TrialState.Done);
         string best = t.Where(x => x.Score is not null).Select(x => x.Score!.Value).DefaultIfEmpty(double.NaN).Min().ToString("F5", CultureInfo.InvariantCulture);
         string blend = search.Blend is { } b ? string.Create(CultureInfo.InvariantCulture, $"; blend nested estimate {b.NestedScore:F5}") : "; no blend yet";
         return WebUtility.HtmlEncode(string.Create(CultureInfo.InvariantCulture,
-            $"{t.Count} trials ({done} done, {t.Count(x => x.State == TrialState.Failed)} failed) of {string.Join(" and ", search.Definition.Families.Select(f => f.Family))}, " +
+            $"{t.Count} trials ({done} done, {t.Count(x => x.State == TrialState.Failed)} failed) of {string.Join(" and ", search.Definition.Families.Select(f => f.Family))} " +
+            $"by {DefinitionWords.Of(schedule.Kind)} with {DefinitionWords.Of(schedule.Proposer)}, {schedule.FirstRung} to {schedule.FullBudget} rounds, " +
             $"{search.Definition.Folds}-fold {search.Metric.Name}, best single trial {best}{blend}; " +
             $"{(search.Header.Finished ? "finished" : "not finished")} after {TimeSpan.FromSeconds(Math.Round(search.Header.SpentSeconds))}. Written {written:yyyy-MM-dd HH:mm} UTC from {search.StorePath}."));
     }

@@ -52,7 +52,7 @@ public static class ScreeningSummary
             $"<table class=\"names\"><thead><tr><th>dropped column</th><th>why</th></tr></thead><tbody>{string.Concat(rows)}</tbody></table>{more}";
         return new ChartSection(
             Id,
-            "Screening: columns kept and dropped",
+            "Columns kept and dropped before any learner saw them",
             "Columns dropped here never reached a learner: constant and duplicate columns carry nothing new, nearly-empty ones too little to split on; a large drop count is expected on wide sparse tables, a surprising name in the list is worth a question to whoever built the table.",
             ChartSvg.Render(plot, Id, ChartSvg.Width, 240) + table,
             series.ToImmutable());

@@ -44,8 +44,8 @@ public static class TimelineChart
         plot.ShowLegend(Alignment.UpperRight);
         return new ChartSection(
             Id,
-            "Timeline of trials per machine and slot",
-            "Gaps in a lane are time a slot sat idle (waiting for promotions or for the coordinator); long bars are the costly full-budget trials, so this is where the hours went.",
+            "Where each slot's hours went",
+            "One lane per machine and slot, one bar per trial. Gaps are time a slot sat idle (waiting for promotions or for the coordinator); long bars are the costly full-budget trials.",
             ChartSvg.Render(plot, Id, ChartSvg.Width, Math.Max(200, 90 + (50 * lanes.Count))),
             series.ToImmutable());
     }

@@ -40,6 +40,18 @@ public sealed partial class ReportPageTests(ITestOutputHelper output) : IDisposa
         Assert.Equal(new Dictionary<string, int> { ["constant"] = 1, ["duplicate"] = 1, ["kept"] = 3, ["too few non-zero"] = 0 }, charts["screening"]);
         Assert.Equal(new Dictionary<string, int> { ["fasttree"] = 1, ["lightgbm"] = 2 }, charts["noise-floor"]);
 
+        // And it opens with the project's own views: how far candidates got, the noise floor, the blend and its diversity, its fit
+        var order = ChartSectionTag().Matches(html).Select(m => m.Groups["id"].Value).ToList();
+        Assert.Equal(["rung-reach", "noise-floor", "blend-weights", "oof-fit"], order.Take(4));
+        Assert.Contains("2 of 3 pool members from 2 of 2 families carry weight, worth 1.7 equally weighted members", html);
+
+        // And the familiar views follow under the project's questions, not as the lead and not under generic titles
+        Assert.Equal(["What the search found", "Were the definition&#39;s ranges well placed?", "How the search spent its time"], PartHeading().Matches(html).Select(m => m.Groups[1].Value));
+        Assert.True(order.IndexOf("best-over-time") > order.IndexOf("param-leaves"), "time comes after the ranges");
+        Assert.DoesNotContain("Best score over time", html);
+        Assert.DoesNotContain("Score against", html);
+        Assert.Contains("leaves within its range", html);
+
         // And one small chart per searched parameter: fasttree has no l2, so that chart shows lightgbm only
         Assert.Equal(["param-feature-fraction", "param-l2", "param-learning-rate", "param-leaves", "param-min-leaf-rows", "param-row-fraction"],
             charts.Keys.Where(k => k.StartsWith("param-", StringComparison.Ordinal)).Order(StringComparer.Ordinal));
@@ -88,6 +100,9 @@ public sealed partial class ReportPageTests(ITestOutputHelper output) : IDisposa
 
     [GeneratedRegex("<section class=\"chart[^\"]*\" id=\"(?<id>[^\"]+)\" data-chart=\"[^\"]+\" data-series=\"(?<series>[^\"]*)\"")]
     private static partial Regex ChartSectionTag();
+
+    [GeneratedRegex("<h2 class=\"part\">([^<]+)</h2>")]
+    private static partial Regex PartHeading();
 
     [GeneratedRegex(@"https?://[^""'\s<>)]+")]
     private static partial Regex HttpMentions();
