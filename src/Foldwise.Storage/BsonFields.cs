@@ -7,15 +7,12 @@ namespace Foldwise.Storage;
 
 /// <summary>
 /// Conversions between domain values and BSON fields, shared by the document mappers.
-/// Numeric vectors are raw little-endian bytes (about 20× faster than a BSON array of doubles);
-/// times are round-trip ("O") text so the offset and the full tick precision survive.
+/// Numeric vectors are raw little-endian bytes (about 20× faster than a BSON array of doubles; these read
+/// format 1's inline vectors, <see cref="ChunkReader"/> the chunked ones); times are round-trip ("O") text
+/// so the offset and the full tick precision survive.
 /// </summary>
 internal static class BsonFields
 {
-    public static byte[] Bytes(ReadOnlySpan<double> values) => MemoryMarshal.AsBytes(EnsureLittleEndian(values)).ToArray();
-
-    public static byte[] Bytes(ReadOnlySpan<int> values) => MemoryMarshal.AsBytes(EnsureLittleEndian(values)).ToArray();
-
     public static double[] Doubles(BsonDocument doc, string field, string owner) =>
         MemoryMarshal.Cast<byte, double>(Blob(doc, field, owner, sizeof(double))).ToArray();
 
@@ -107,6 +104,6 @@ internal static class BsonFields
     }
 
     // The byte layout is little-endian by definition; a big-endian host would misread every vector.
-    private static ReadOnlySpan<T> EnsureLittleEndian<T>(ReadOnlySpan<T> values) =>
+    public static ReadOnlySpan<T> EnsureLittleEndian<T>(ReadOnlySpan<T> values) =>
         BitConverter.IsLittleEndian ? values : throw new StoreException("The search store's vectors are little-endian; this host is big-endian.");
 }

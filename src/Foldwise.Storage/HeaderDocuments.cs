@@ -6,9 +6,10 @@ using static Foldwise.Storage.BsonFields;
 namespace Foldwise.Storage;
 
 /// <summary>
-/// Maps <see cref="SearchHeader"/> to two documents in <c>search</c>: <c>header</c>, written once
-/// (it carries every row id, so it can be a megabyte), and <c>progress</c>, the spent time and the
-/// finished flag, small enough to rewrite every few seconds.
+/// Maps <see cref="SearchHeader"/> to two documents in <c>search</c>: <c>header</c>, written once, whose
+/// per-row vectors (row ids, target, fold of each row) are chunks it refers to, and <c>progress</c>, the spent
+/// time and the finished flag, small enough to rewrite every few seconds. Format 1 kept the vectors inline;
+/// they still read.
 /// </summary>
 internal static class HeaderDocuments
 {
@@ -17,7 +18,8 @@ internal static class HeaderDocuments
     public const string ProgressId = "progress";
     private const string Owner = "the search header";
 
-    public static BsonDocument ToHeader(SearchHeader h) => new()
+    /// <summary>Writes the vectors' chunks and returns the header document referring to them; call in a transaction.</summary>
+    public static BsonDocument ToHeader(LiteDatabase db, SearchHeader h) => new()
     {
         ["_id"] = HeaderId,
         ["searchId"] = h.SearchId,
@@ -26,13 +28,13 @@ internal static class HeaderDocuments
         {
             ["foldCount"] = h.Folds.FoldCount,
             ["seed"] = h.Folds.Seed,
-            ["foldOfRow"] = Bytes(h.Folds.FoldOfRow.IsDefault ? [] : h.Folds.FoldOfRow.AsSpan()),
+            ["foldOfRow"] = ChunkWriter.Ints(db, "header.foldOfRow", h.Folds.FoldOfRow.IsDefault ? [] : h.Folds.FoldOfRow.AsSpan()),
         },
         ["trainHash"] = h.TrainHash,
         ["testHash"] = h.TestHash,
-        ["trainIds"] = Array(h.TrainIds),
-        ["testIds"] = Array(h.TestIds),
-        ["trainTarget"] = Bytes(h.TrainTarget.IsDefault ? [] : h.TrainTarget.AsSpan()),
+        ["trainIds"] = ChunkWriter.Texts(db, "header.trainIds", h.TrainIds.IsDefault ? [] : h.TrainIds),
+        ["testIds"] = ChunkWriter.Texts(db, "header.testIds", h.TestIds.IsDefault ? [] : h.TestIds),
+        ["trainTarget"] = ChunkWriter.Doubles(db, "header.trainTarget", h.TrainTarget.IsDefault ? [] : h.TrainTarget.AsSpan()),
         ["created"] = Time(h.Created),
     };
 
@@ -43,7 +45,8 @@ internal static class HeaderDocuments
         ["finished"] = finished,
     };
 
-    public static SearchHeader FromDocuments(BsonDocument header, BsonDocument? progress)
+    /// <summary>Rebuilds the header; <paramref name="fetch"/> reads one chunk by id.</summary>
+    public static SearchHeader FromDocuments(BsonDocument header, BsonDocument? progress, Func<string, byte[]?> fetch)
     {
         var folds = Required(header, "folds", Owner, BsonType.Document).AsDocument;
         return new SearchHeader
@@ -53,12 +56,12 @@ internal static class HeaderDocuments
             Folds = new FoldPlan(
                 Int(folds, "foldCount", Owner),
                 Int(folds, "seed", Owner),
-                [.. Ints(folds, "foldOfRow", Owner)]),
+                [.. ChunkReader.Ints(folds, "foldOfRow", fetch, Owner)]),
             TrainHash = String(header, "trainHash", Owner),
             TestHash = String(header, "testHash", Owner),
-            TrainIds = Strings(header, "trainIds", Owner),
-            TestIds = Strings(header, "testIds", Owner),
-            TrainTarget = [.. Doubles(header, "trainTarget", Owner)],
+            TrainIds = ChunkReader.Texts(header, "trainIds", fetch, Owner),
+            TestIds = ChunkReader.Texts(header, "testIds", fetch, Owner),
+            TrainTarget = [.. ChunkReader.Doubles(header, "trainTarget", fetch, Owner)],
             Created = RequiredTime(header, "created", Owner),
             SpentSeconds = progress is null ? 0 : Double(progress, "spentSeconds", Owner),
             Finished = progress is not null && Bool(progress, "finished", Owner),

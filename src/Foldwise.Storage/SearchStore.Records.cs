@@ -15,23 +15,13 @@ public sealed partial class SearchStore
     internal const int TrialPage = 256;
 
     /// <summary>Stores the search header (replacing any earlier one), with its spent time and finished flag.</summary>
-    public void SaveHeader(SearchHeader header) => Write(db =>
+    public void SaveHeader(SearchHeader header) => Write(db => InTransaction(db, () =>
     {
-        // One transaction, so a reader never sees a header without its progress or the other way round.
-        db.BeginTrans();
-        try
-        {
-            var search = db.GetCollection(HeaderDocuments.Collection);
-            search.Upsert(HeaderDocuments.ToHeader(header));
-            search.Upsert(HeaderDocuments.ToProgress(header.SpentSeconds, header.Finished));
-            db.Commit();
-        }
-        catch
-        {
-            db.Rollback();
-            throw;
-        }
-    });
+        // One transaction, so a reader never sees a header without its chunks or progress, or the other way round.
+        var search = db.GetCollection(HeaderDocuments.Collection);
+        search.Upsert(HeaderDocuments.ToHeader(db, header));
+        search.Upsert(HeaderDocuments.ToProgress(header.SpentSeconds, header.Finished));
+    }));
 
     /// <summary>The search header, or null before <see cref="SaveHeader"/>.</summary>
     public SearchHeader? LoadHeader()
@@ -41,7 +31,7 @@ public sealed partial class SearchStore
             var search = db.GetCollection(HeaderDocuments.Collection);
             return (search.FindById(HeaderDocuments.HeaderId), search.FindById(HeaderDocuments.ProgressId));
         });
-        return header is null ? null : HeaderDocuments.FromDocuments(header, progress);
+        return header is null ? null : HeaderDocuments.FromDocuments(header, progress, FetchChunk);
     }
 
     /// <summary>Rewrites only the small progress record, not the header with its row ids.</summary>
@@ -86,18 +76,20 @@ public sealed partial class SearchStore
         return doc is null ? null : TrialDocuments.FromDocument(doc);
     }
 
-    /// <summary>Inserts or replaces a trial's pooled out-of-fold and test predictions (raw doubles, bit-exact).</summary>
+    /// <summary>
+    /// Inserts or replaces a trial's pooled out-of-fold and test predictions (raw doubles, bit-exact), in chunks
+    /// of at most a mebibyte, in one transaction: a reader sees all of them or none.
+    /// </summary>
     public void SaveVectors(int trialId, double[] outOfFold, double[] test)
     {
         ArgumentNullException.ThrowIfNull(outOfFold);
         ArgumentNullException.ThrowIfNull(test);
-        var doc = new BsonDocument
+        Write(db => InTransaction(db, () => db.GetCollection(VectorCollection).Upsert(new BsonDocument
         {
             ["_id"] = trialId,
-            ["outOfFold"] = Bytes(outOfFold),
-            ["test"] = Bytes(test),
-        };
-        Write(db => db.GetCollection(VectorCollection).Upsert(doc));
+            ["outOfFold"] = ChunkWriter.Doubles(db, $"trial.{trialId}.outOfFold", outOfFold),
+            ["test"] = ChunkWriter.Doubles(db, $"trial.{trialId}.test", test),
+        })));
     }
 
     /// <summary>A trial's prediction vectors, or null when none were saved.</summary>
@@ -110,7 +102,7 @@ public sealed partial class SearchStore
         }
 
         string owner = $"vectors of trial {trialId}";
-        return (Doubles(doc, "outOfFold", owner), Doubles(doc, "test", owner));
+        return (ChunkReader.Doubles(doc, "outOfFold", FetchChunk, owner), ChunkReader.Doubles(doc, "test", FetchChunk, owner));
     }
 
     /// <summary>Stores the screening report, replacing any earlier one.</summary>
@@ -134,4 +126,23 @@ public sealed partial class SearchStore
         var doc = Read(db => db.GetCollection(HeaderDocuments.Collection).FindById(BlendDocuments.Id));
         return doc is null ? null : BlendDocuments.FromDocument(doc);
     }
+
+    private static void InTransaction(LiteDatabase db, Action action)
+    {
+        db.BeginTrans();
+        try
+        {
+            action();
+            db.Commit();
+        }
+        catch
+        {
+            db.Rollback();
+            throw;
+        }
+    }
+
+    // One chunk per call on the file, so a long vector holds the writer up for one chunk at a time.
+    private byte[]? FetchChunk(string id) =>
+        Read(db => db.GetCollection(Chunks.Collection).FindById(id)?["data"] is { IsBinary: true } data ? data.AsBinary : null);
 }

@@ -116,6 +116,11 @@ public sealed partial class SearchStore : ISearchRecorder, IDisposable
         {
             db = Connect(full, readOnly);
             string writtenBy = StoreFormat.Check(db, full);
+            if (!readOnly)
+            {
+                StoreFormat.Upgrade(db);
+            }
+
             return new SearchStore(full, db, writerLock, writtenBy);
         }
         catch (Exception ex) when (ex is not StoreException)

@@ -12,8 +12,12 @@ internal static class StoreFormat
 {
     public const string Name = "foldwise-search";
 
-    /// <summary>The layout this build writes and the newest it reads.</summary>
-    public const int Version = 1;
+    /// <summary>
+    /// The layout this build writes and the newest it reads. 1: each per-row vector inline in one document
+    /// (a million row ids passed LiteDB's 16 MB document cap). 2: per-row vectors in chunks of collection
+    /// <c>chunks</c>; format 1's inline vectors still read, so opening a format-1 store to write only raises its version.
+    /// </summary>
+    public const int Version = 2;
 
     public const string MetaCollection = "meta";
 
@@ -80,6 +84,17 @@ internal static class StoreFormat
         }
 
         return doc["writer"].AsString ?? "unknown";
+    }
+
+    /// <summary>Raises an older store's version to <see cref="Version"/> before this build writes its layout into it.</summary>
+    public static void Upgrade(LiteDatabase db)
+    {
+        var doc = db.GetCollection(MetaCollection).FindById(DocumentId);
+        if (doc["version"].AsInt32 < Version)
+        {
+            doc["version"] = Version;
+            db.GetCollection(MetaCollection).Update(doc);
+        }
     }
 
     private static StoreException NotAStore(string path, string why) =>
