@@ -3,7 +3,7 @@ using Foldwise.Core.Spaces;
 
 namespace Foldwise.Learners;
 
-/// <summary>The learner families a worker can run, by name; <see cref="BuiltIn"/> holds LightGBM and FastTree.</summary>
+/// <summary>The learner families a worker can run, by name; <see cref="BuiltIn"/> holds every built-in family.</summary>
 public sealed class LearnerCatalog : ILearnerCatalog
 {
     private readonly Dictionary<string, IFoldLearner> byFamily;
@@ -14,7 +14,7 @@ public sealed class LearnerCatalog : ILearnerCatalog
         Families = [.. byFamily.Keys];
     }
 
-    public static LearnerCatalog BuiltIn { get; } = new([new LightGbmLearner(), new FastTreeLearner()]);
+    public static LearnerCatalog BuiltIn { get; } = new([new LightGbmLearner(), new FastTreeLearner(), new ForestLearner(), new GamLearner(), new LinearLearner()]);
 
     public IReadOnlyList<string> Families { get; }
 

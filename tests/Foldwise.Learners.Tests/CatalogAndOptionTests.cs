@@ -15,9 +15,9 @@ public sealed class CatalogAndOptionTests
     [Fact]
     public void Names_the_known_families_when_asked_for_an_unknown_one()
     {
-        var error = Assert.Throws<ArgumentException>(() => LearnerCatalog.BuiltIn.Get("forest"));
+        var error = Assert.Throws<ArgumentException>(() => LearnerCatalog.BuiltIn.Get("nearest"));
 
-        Assert.Contains("'forest'", error.Message);
+        Assert.Contains("'nearest'", error.Message);
         Assert.Contains(FamilyNames.LightGbm, error.Message);
     }
 
@@ -26,6 +26,40 @@ public sealed class CatalogAndOptionTests
     {
         Assert.Equal(DefaultSpaces.LightGbm.Ranges.Select(r => r.Name).Order(), LightGbmLearner.Table.Names.Order());
         Assert.Equal(DefaultSpaces.FastTree.Ranges.Select(r => r.Name).Order(), FastTreeLearner.Table.Names.Order());
+        Assert.Equal(DefaultSpaces.Forest.Ranges.Select(r => r.Name).Order(), ForestLearner.Table.Names.Order());
+        Assert.Equal(DefaultSpaces.Gam.Ranges.Select(r => r.Name).Order(), GamLearner.Table.Names.Order());
+        Assert.Equal(DefaultSpaces.Linear.Ranges.Select(r => r.Name).Order(), LinearLearner.Table.Names.Order());
+    }
+
+    [Fact]
+    public void Sets_forest_options_with_a_fresh_row_sample_for_every_tree()
+    {
+        var job = TinyTables.Job(TinyTables.Data(), FamilyNames.Forest, TinyTables.Parameters(FamilyNames.Forest, rowFraction: 0.6), seed: 9, threads: 2, budget: 70);
+
+        var options = ForestLearner.Options(job);
+
+        Assert.Equal((70, 1, 0.6, 8, 5, 2, 9), (options.NumberOfTrees, options.BaggingSize, options.BaggingExampleFraction, options.NumberOfLeaves, options.MinimumExampleCountPerLeaf, options.NumberOfThreads, options.Seed));
+    }
+
+    [Fact]
+    public void Sets_gam_options_from_the_job_without_pruning()
+    {
+        var job = TinyTables.Job(TinyTables.Data(), FamilyNames.Gam, seed: 9, threads: 2, budget: 300);
+
+        var options = GamLearner.Options(job);
+
+        Assert.Equal((300, 0.1, 5, 64, 2, 9), (options.NumberOfIterations, options.LearningRate, options.MinimumExampleCountPerLeaf, options.MaximumBinCountPerFeature, options.NumberOfThreads, options.Seed));
+        Assert.False(options.EnablePruning);
+    }
+
+    [Fact]
+    public void Sets_linear_options_with_one_thread_and_no_l1_whatever_the_slot_has()
+    {
+        var job = TinyTables.Job(TinyTables.Data(), FamilyNames.Linear, threads: 4, budget: 12);
+
+        var options = LinearLearner.Options(job);
+
+        Assert.Equal((12, 1, 0f, 1e-3f), (options.MaximumNumberOfIterations, options.NumberOfThreads, options.L1Regularization, options.L2Regularization));
     }
 
     [Fact]

@@ -51,23 +51,29 @@ internal static class TinyTables
     public static TrialData Data(int rows = 200, int testRows = 100, int folds = 3) =>
         TrialData.From(Table(rows, seed: 11, withTarget: true), Table(testRows, seed: 12, withTarget: false), RoundRobin(rows, folds), Metric.Rmsle);
 
+    /// <summary>Values for every parameter of the family's default space; row_fraction as asked where the family has it.</summary>
     public static ParameterSet Parameters(string family, double rowFraction = 1.0)
     {
-        var values = new Dictionary<string, double>
+        var chosen = new Dictionary<string, double>
         {
             ["learning_rate"] = 0.1,
             ["leaves"] = 8,
             ["min_leaf_rows"] = 5,
             ["feature_fraction"] = 1.0,
             ["row_fraction"] = rowFraction,
+            ["l2"] = 1.0,
+            ["bins"] = 64,
         };
-        if (family == FamilyNames.LightGbm)
+        if (family == FamilyNames.Linear)
         {
-            values["l2"] = 1.0;
+            chosen["l2"] = 1e-3;
         }
 
-        return ParameterSet.Of(values);
+        return ParameterSet.Of(DefaultSpaces.For(family).Ranges.Select(r => KeyValuePair.Create(r.Name, chosen[r.Name])));
     }
+
+    /// <summary>The families whose space samples rows, so that their seed shows in the fit.</summary>
+    public static IEnumerable<string> Subsampling => FamilyNames.All.Where(f => DefaultSpaces.For(f).Find("row_fraction") is not null);
 
     public static FoldJob Job(TrialData data, string family, ParameterSet? parameters = null, int seed = 7, int threads = 1, int budget = 60) =>
         new(data, 0, data.Folds.TrainRows(0), data.Folds.ValidationRows(0), parameters ?? Parameters(family), budget, seed, threads);

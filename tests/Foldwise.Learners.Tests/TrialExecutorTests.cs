@@ -8,6 +8,9 @@ public sealed class TrialExecutorTests
     [Theory]
     [InlineData(FamilyNames.LightGbm)]
     [InlineData(FamilyNames.FastTree)]
+    [InlineData(FamilyNames.Forest)]
+    [InlineData(FamilyNames.Gam)]
+    [InlineData(FamilyNames.Linear)]
     public void Runs_a_three_fold_trial_end_to_end(string family)
     {
         // Given a hand-made 3-fold plan over 200 rows and a 100-row test table
@@ -26,6 +29,9 @@ public sealed class TrialExecutorTests
         Assert.True(double.IsFinite(outcome.Score));
         Assert.All(outcome.OutOfFold, p => Assert.NotEqual(0, p));
         double spread = Math.Sqrt(data.Target.Average(t => Math.Pow(t - data.Target.Average(), 2)));
-        Assert.True(outcome.Score < 0.6 * spread, $"OOF {outcome.Score:F4} vs target spread {spread:F4}");
+        // The table's signal holds an interaction and a count effect on the raw scale, which the linear family's
+        // log1p of skewed columns bends, so it is held to a looser bound.
+        double bound = family == FamilyNames.Linear ? 0.7 : 0.6;
+        Assert.True(outcome.Score < bound * spread, $"OOF {outcome.Score:F4} vs target spread {spread:F4}");
     }
 }

@@ -14,7 +14,7 @@ public static class DemoDefinition
         Name = quick ? "freight-demo-quick" : "freight-demo",
         Data = new DataSource("train.csv", "test.csv", IdColumn, TargetColumn),
         Seed = seed,
-        Families = [.. FamilyNames.All.Select(f => new FamilySearch(f, DefaultSpaces.For(f)))],
+        Families = [.. FamilyNames.Default.Select(f => new FamilySearch(f, DefaultSpaces.For(f)))],
         Schedule = quick
             ? new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, FirstRung: 20, FullBudget: 180, Eta: 3)
             : new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, FirstRung: 25, FullBudget: 400, Eta: 3),

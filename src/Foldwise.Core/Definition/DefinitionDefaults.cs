@@ -19,9 +19,13 @@ public static class DefinitionDefaults
     /// <summary>The name of a search started from flags alone.</summary>
     public const string Name = "search";
 
-    /// <summary>Every built-in family with its default space, in <see cref="FamilyNames.All"/> order.</summary>
+    /// <summary>Every built-in family with its default space, in <see cref="FamilyNames.All"/> order: what a definition may name.</summary>
     public static ImmutableArray<FamilySearch> BuiltInFamilies { get; } =
         [.. FamilyNames.All.Select(f => new FamilySearch(f, DefaultSpaces.For(f)))];
+
+    /// <summary>The families searched when a definition names none (<see cref="FamilyNames.Default"/>).</summary>
+    public static ImmutableArray<FamilySearch> DefaultFamilies { get; } =
+        [.. BuiltInFamilies.Where(f => FamilyNames.Default.Contains(f.Family))];
 
     /// <summary>
     /// The definition behind <c>foldwise run --train --test --id --target [--trials] [--hours]</c>. Relative paths
@@ -49,7 +53,7 @@ public static class DefinitionDefaults
         {
             Name = Name,
             Data = data,
-            Families = BuiltInFamilies,
+            Families = DefaultFamilies,
             Budget = Budget(null, trials, hours),
         };
 

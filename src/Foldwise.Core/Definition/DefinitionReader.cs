@@ -1,6 +1,7 @@
 using System.Text;
 using Foldwise.Core.Data;
 using Foldwise.Core.Screening;
+using Foldwise.Core.Spaces;
 
 namespace Foldwise.Core.Definition;
 
@@ -61,7 +62,7 @@ public static class DefinitionReader
             Data = Data(check, check.Require(root, "data").Value, Path.GetFullPath(baseDirectory)),
             Families = root.Get("families") is { } families
                 ? new FamiliesReader(check, builtIn).Read(families.Value)
-                : [.. builtIn],
+                : [.. builtIn.Where(f => FamilyNames.Default.Contains(f.Family))],
             Budget = root.Get("budget") is { } budget ? Budget(check, budget.Value) : new SearchBudget(DefinitionDefaults.Trials, null),
         };
 

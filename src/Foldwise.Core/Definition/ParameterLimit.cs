@@ -23,6 +23,9 @@ internal sealed record ParameterLimit(double Min, bool MinOpen, double Max, bool
 
         // lambda_l2 >= 0 — LightGBM docs/Parameters.rst (from memory).
         ["l2"] = new(0, false, double.MaxValue, false, "a penalty weight"),
+
+        // GAM bins per feature: at least 2 — ML.NET GamTrainerBase option checks (from memory).
+        ["bins"] = new(2, false, 65535, false, "bins per feature"),
     };
 
     /// <summary>The limit for a parameter name, or null when the name has none.</summary>

@@ -5,6 +5,16 @@ public static class FamilyNames
 {
     public const string LightGbm = "lightgbm";
     public const string FastTree = "fasttree";
+    public const string Forest = "forest";
+    public const string Gam = "gam";
+    public const string Linear = "linear";
 
-    public static IReadOnlyList<string> All { get; } = [LightGbm, FastTree];
+    /// <summary>Every family a definition may name.</summary>
+    public static IReadOnlyList<string> All { get; } = [LightGbm, FastTree, Forest, Gam, Linear];
+
+    /// <summary>
+    /// The families a search without <c>families</c> runs. Forest, GAM and linear join once each family has a budget
+    /// range of its own: under the shared rounds range a forest trial costs many boosted ones.
+    /// </summary>
+    public static IReadOnlyList<string> Default { get; } = [LightGbm, FastTree];
 }

@@ -15,7 +15,7 @@ public sealed class DefinitionDefaultsTests
         // Then it is a complete definition with the defaults
         Assert.Equal("search", d.Name);
         Assert.Equal(new DataSource("/work/here/in/train.csv", "/abs/test.csv", "shipper_id", "q1_spend"), d.Data);
-        Assert.Equal(FamilyNames.All, d.Families.Select(f => f.Family));
+        Assert.Equal(FamilyNames.Default, d.Families.Select(f => f.Family));
         Assert.True(d.Families.All(f => DefinitionComparer.SameSpace(DefaultSpaces.For(f.Family), f.Space)));
         Assert.Equal(new ScheduleOptions(), d.Schedule);
         Assert.Equal(new SearchBudget(40, null), d.Budget);

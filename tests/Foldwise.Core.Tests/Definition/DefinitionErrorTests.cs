@@ -15,7 +15,7 @@ public sealed class DefinitionErrorTests
         { "\"folds\": 5", "\"fold\": 5", "unknown key 'fold'; did you mean 'folds'?", "\"fold\"" },
         { "\"first_rung\": 25", "\"first_rungs\": 25", "unknown key 'schedule.first_rungs'; did you mean 'first_rung'?", "\"first_rungs\"" },
         { "\"pool\": 3", "\"pool\": 3, \"weights\": 1", "unknown key 'blend.weights' (known keys here: mode, pool)", "\"weights\"" },
-        { "\"lightgbm\": {", "\"lightgmb\": {", "unknown family 'families.lightgmb'; did you mean 'lightgbm'? (built-in families: lightgbm, fasttree)", "\"lightgmb\"" },
+        { "\"lightgbm\": {", "\"lightgmb\": {", "unknown family 'families.lightgmb'; did you mean 'lightgbm'? (built-in families: lightgbm, fasttree, forest, gam, linear)", "\"lightgmb\"" },
         { "\"leaves\": {", "\"leafs\": {", "unknown parameter 'families.lightgbm.leafs'; did you mean 'leaves'? (lightgbm's parameters: learning_rate, leaves, min_leaf_rows, feature_fraction, row_fraction, l2)", "\"leafs\"" },
         { "\"fasttree\": {}", "\"fasttree\": { \"l2\": 1 }", "unknown parameter 'families.fasttree.l2'", "\"l2\"" },
         { "{ \"whole\": [8, 128] }", "{ \"uniform\": [8, 128] }", "unknown key 'families.lightgbm.leaves.uniform'", "\"uniform\"" },
@@ -148,7 +148,7 @@ public sealed class DefinitionErrorTests
         var e = Assert.Throws<InputException>(() => DefinitionReader.Parse(json, "s.json", "/defs"));
 
         // Then the error lists the families to choose from
-        Assert.Equal("'families' names no family; add one or more of lightgbm, fasttree", e.Problem);
+        Assert.Equal("'families' names no family; add one or more of lightgbm, fasttree, forest, gam, linear", e.Problem);
         Assert.Equal((2L, 15), (e.Line, e.Column));
     }
 

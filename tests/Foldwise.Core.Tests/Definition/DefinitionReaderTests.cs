@@ -90,7 +90,7 @@ public sealed class DefinitionReaderTests
         Assert.Equal(new ScheduleOptions(), d.Schedule);
         Assert.Equal(new BlendOptions(), d.Blend);
         Assert.Equal(new SearchBudget(DefinitionDefaults.Trials, null), d.Budget);
-        Assert.Equal(FamilyNames.All, d.Families.Select(f => f.Family));
+        Assert.Equal(FamilyNames.Default, d.Families.Select(f => f.Family));
         Assert.True(d.Families.All(f => DefinitionComparer.SameSpace(DefaultSpaces.For(f.Family), f.Space)));
     }
 
