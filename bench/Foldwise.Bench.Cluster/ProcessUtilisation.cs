@@ -65,7 +65,6 @@ internal static class ProcessUtilisation
             info.ArgumentList.Add(a);
         }
 
-        info.Environment["OMP_WAIT_POLICY"] = "passive";
         if (args[0] != "history")
         {
             info.RedirectStandardOutput = true;

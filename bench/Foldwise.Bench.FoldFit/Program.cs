@@ -10,6 +10,16 @@ using Foldwise.Learners;
 
 // Measures one 5-fold LightGBM trial on the Full freight demo through the real TrialExecutor path,
 // and optionally writes the same data and folds for the python peer script.
+if (args.Length > 0 && args[0] == "--pair-child")
+{
+    return PairBench.Child(args);
+}
+
+if (args.Contains("--pair"))
+{
+    return PairBench.Run(args);
+}
+
 var options = BenchOptions.Parse(args);
 var size = options.Size == "quick" ? DemoSize.Quick : DemoSize.Full;
 var clock = Stopwatch.StartNew();
@@ -25,7 +35,7 @@ if (options.WriteDirectory is { } directory)
 
 clock.Restart();
 var data = TrialData.From(train, test, folds, Metric.Rmsle);
-Console.WriteLine($"rows built in {clock.Elapsed.TotalSeconds:F1} s; OMP_WAIT_POLICY={Environment.GetEnvironmentVariable("OMP_WAIT_POLICY") ?? "(unset)"}");
+Console.WriteLine($"rows built in {clock.Elapsed.TotalSeconds:F1} s");
 
 var parameters = new Dictionary<string, double>
 {
@@ -71,6 +81,8 @@ if (options.FastTree)
     double score = data.Metric.Score([.. job.ValidationRows.Select(r => data.Target[r])], prediction.Validation);
     Console.WriteLine($"fasttree fold 0, {options.Rounds} trees, {options.Threads} threads: {clock.Elapsed.TotalSeconds:F1} s, fold RMSLE {score:F4}");
 }
+
+return 0;
 
 static void PrintTarget(FeatureTable train)
 {

@@ -39,7 +39,7 @@ File.WriteAllText(Path.Combine(outDir, "search.json"), $$"""
   "folds": 5,
   "seed": 3,
   "families": { "lightgbm": {} },
-  "schedule": { "kind": "full", "proposer": "random", "min_rounds": {{rounds}}, "max_rounds": {{rounds}}, "eta": 3 },
+  "schedule": { "kind": "full", "proposer": "random", "first_rung": {{rounds}}, "full_budget": {{rounds}}, "eta": 3 },
   "budget": { "trials": {{trials}} },
   "blend": { "mode": "simplex", "pool": {{trials}} }
 }

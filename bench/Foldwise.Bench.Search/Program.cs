@@ -1,3 +1,4 @@
+using Foldwise.Core.Search;
 // ASHA+TPE against random search at full budget, on the invented freight demo, driven through the real
 // coordinator and schedules with one slot (no Orleans: decisions and fits only). Reports, per seed, the
 // fraction of compute (boosting rounds × training rows, summed over trials) that ASHA+TPE needed to reach
@@ -38,7 +39,7 @@ if (options.Part != "report")
     foreach (int seed in options.SeedList)
     {
         var metric = Metric.Rmsle;
-        var folds = StratifiedFoldPlanner.Create([.. train.Target.Select(metric.Forward)], 5, seed);
+        var folds = StratifiedFoldPlanner.Create([.. train.Target.Select(metric.Forward)], 5, new SearchSeeds(seed).FoldPlan);
         var data = TrialData.From(train, test, folds, metric) with { Test = testSlice };
         string randomPath = Path.Combine(options.Out, options.RandomFile(seed));
         var random = Trace.ReadIfComplete(randomPath, options.RandomTrials);

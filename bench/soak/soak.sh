@@ -18,7 +18,7 @@ if [[ ! -f "$dll" ]]; then
 fi
 py=/usr/bin/python3
 fw() { dotnet "$dll" "$@"; }
-export OMP_WAIT_POLICY=passive DOTNET_NOLOGO=1
+export DOTNET_NOLOGO=1
 
 work=$(mktemp -d /tmp/foldwise-soak.XXXXXX)
 trap 'rm -rf "$work"' EXIT

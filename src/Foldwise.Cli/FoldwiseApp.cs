@@ -1,4 +1,5 @@
 using Foldwise.Cli.Commands;
+using Foldwise.Core;
 using Spectre.Console.Cli;
 
 namespace Foldwise.Cli;
@@ -9,7 +10,9 @@ public static class FoldwiseApp
     public static void Configure(IConfigurator config)
     {
         config.SetApplicationName("foldwise");
-        config.SetExceptionHandler(ErrorReport.Handle);
+        config.SetApplicationVersion(BuildVersion.Text);
+        config.UseStrictParsing();
+        config.SetExceptionHandler((exception, resolver) => ErrorReport.Handle(exception, resolver, config.Settings.Console));
         config.AddCommand<RunCommand>("run")
             .WithDescription("Run a search from a definition file (or flags): cross-validated trials, then the blend and a prediction file.")
             .WithExample("run", "configs/demo.json", "--out", "runs/demo");

@@ -2,11 +2,6 @@ using Foldwise.Cli;
 using Spectre.Console;
 using Spectre.Console.Cli;
 
-if (PassiveOpenMp.NeedsRelaunch(args))
-{
-    return await PassiveOpenMp.RelaunchAsync(args);
-}
-
 if (Console.IsOutputRedirected)
 {
     // Piped to a file or another program: tables get room instead of an assumed 80 columns.

@@ -9,31 +9,42 @@ internal static class CellParser
     private const NumberStyles Styles = NumberStyles.Float;
     private const int QuotedTextLimit = 40;
 
-    /// <summary>A feature cell; "0" (by far the most common cell) is recognised without parsing.</summary>
-    public static float Feature(ReadOnlySpan<char> cell, string file, long line, int ordinal, string column)
+    /// <summary>
+    /// A numeric feature cell: true with its value (NaN for a missing cell), or false when the cell holds text.
+    /// "0" (by far the most common cell) is recognised without parsing.
+    /// </summary>
+    public static bool TryFeature(ReadOnlySpan<char> cell, TableRules rules, string file, long line, int ordinal, string column, out float value)
     {
         if (cell.Length == 1 && cell[0] == '0')
         {
-            return 0f;
+            value = 0f;
+            return true;
         }
 
-        if (!float.TryParse(cell, Styles, CultureInfo.InvariantCulture, out float value))
+        if (float.TryParse(cell, Styles, CultureInfo.InvariantCulture, out value))
         {
-            throw NotANumber(cell, file, line, ordinal, column);
+            // Overflowing float's range parses as an infinity, which the same check catches; "NaN" parses too.
+            if (float.IsFinite(value))
+            {
+                return true;
+            }
+
+            return rules.IsMissing(cell)
+                ? true
+                : throw new InputException(file, $"column '{column}' holds {Quote(cell)}, which is not a finite 32-bit number", line, ordinal + 1);
         }
 
-        // Overflowing float's range parses as an infinity, which the same check catches.
-        if (!float.IsFinite(value))
-        {
-            throw new InputException(
-                file, $"column '{column}' holds {Quote(cell)}, which is not a finite 32-bit number", line, ordinal + 1);
-        }
-
-        return value;
+        value = float.NaN;
+        return cell.IsWhiteSpace() || rules.IsMissing(cell);
     }
 
-    public static double Target(ReadOnlySpan<char> cell, string file, long line, int ordinal, string column)
+    public static double Target(ReadOnlySpan<char> cell, TableRules rules, string file, long line, int ordinal, string column)
     {
+        if (cell.IsWhiteSpace() || rules.IsMissing(cell))
+        {
+            throw new InputException(file, $"the target '{column}' is missing; every training row needs one", line, ordinal + 1);
+        }
+
         if (!double.TryParse(cell, Styles, CultureInfo.InvariantCulture, out double value))
         {
             throw NotANumber(cell, file, line, ordinal, column);
@@ -43,9 +54,7 @@ internal static class CellParser
     }
 
     private static InputException NotANumber(ReadOnlySpan<char> cell, string file, long line, int ordinal, string column) =>
-        cell.IsWhiteSpace()
-            ? new InputException(file, $"column '{column}' has an empty cell; write 0 for a zero", line, ordinal + 1)
-            : new InputException(file, $"column '{column}' holds the text {Quote(cell)} where a number is expected", line, ordinal + 1);
+        new(file, $"column '{column}' holds the text {Quote(cell)} where a number is expected", line, ordinal + 1);
 
     internal static string Quote(ReadOnlySpan<char> cell) =>
         cell.Length <= QuotedTextLimit ? $"\"{cell}\"" : $"\"{cell[..QuotedTextLimit]}…\"";

@@ -2,7 +2,7 @@ using Foldwise.Core.Data;
 
 namespace Foldwise.Csv;
 
-/// <summary>Which field of a row is the id, which the target, and which fields are features (in file order).</summary>
+/// <summary>Which field of a row is the id, which the target, and which fields are features (in file order; ignored columns are not).</summary>
 internal sealed class HeaderLayout
 {
     private HeaderLayout(int fieldCount, int idOrdinal, int targetOrdinal, int[] featureOrdinals, string[] featureNames)
@@ -25,7 +25,7 @@ internal sealed class HeaderLayout
 
     public string[] FeatureNames { get; }
 
-    public static HeaderLayout From(string file, IReadOnlyList<string> names, string idColumn, string? targetColumn, bool targetRequired)
+    public static HeaderLayout From(string file, IReadOnlyList<string> names, string idColumn, string? targetColumn, bool targetRequired, TableRules rules)
     {
         var seen = new Dictionary<string, int>(names.Count, StringComparer.Ordinal);
         for (int i = 0; i < names.Count; i++)
@@ -58,7 +58,28 @@ internal sealed class HeaderLayout
             target = -1;
         }
 
-        var ordinals = Enumerable.Range(0, names.Count).Where(i => i != id && i != target).ToArray();
+        if (targetRequired)
+        {
+            // The training table's header is where the definition's column lists must match.
+            foreach (var (key, listed) in new[] { ("data.categories", rules.Categories), ("data.ignore", rules.Ignored) })
+            {
+                foreach (string name in listed)
+                {
+                    if (!seen.TryGetValue(name, out int at))
+                    {
+                        throw new InputException(file, $"'{key}' names '{name}', which the header lacks", 1);
+                    }
+
+                    if (at == id || at == target)
+                    {
+                        throw new InputException(file, $"'{key}' names '{name}', which is the id or target column", 1, at + 1);
+                    }
+                }
+            }
+        }
+
+        var ignored = rules.Ignored.ToHashSet(StringComparer.Ordinal);
+        var ordinals = Enumerable.Range(0, names.Count).Where(i => i != id && i != target && !ignored.Contains(names[i])).ToArray();
         return new HeaderLayout(names.Count, id, target, ordinals, [.. ordinals.Select(i => names[i])]);
     }
 }

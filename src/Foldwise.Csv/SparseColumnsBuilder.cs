@@ -41,6 +41,18 @@ internal sealed class SparseColumnsBuilder
         counts[column] = n + 1;
     }
 
+    public ReadOnlySpan<int> Rows(int column) => rows[column].AsSpan(0, counts[column]);
+
+    public ReadOnlySpan<float> Values(int column) => values[column].AsSpan(0, counts[column]);
+
+    /// <summary>Empties a column that turned out to hold text, releasing its buffers.</summary>
+    public void Clear(int column)
+    {
+        rows[column] = [];
+        values[column] = [];
+        counts[column] = 0;
+    }
+
     /// <summary>Trims every column to its size, releasing each growth buffer as soon as it is copied.</summary>
     public ImmutableArray<SparseColumn> Build()
     {

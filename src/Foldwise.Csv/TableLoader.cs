@@ -6,13 +6,16 @@ using Sylvan.Data.Csv;
 
 namespace Foldwise.Csv;
 
-/// <summary>One pass over a CSV file: header checks, then row by row into sparse columns.</summary>
+/// <summary>
+/// One pass over a CSV file: header checks, then row by row into sparse numeric columns and category columns.
+/// A training column starts numeric and becomes a category column at its first present cell that is not a number.
+/// </summary>
 internal static class TableLoader
 {
     // A 7,000-column row is ~15–60 K characters; the buffer grows up to this before a row counts as broken.
     private const int MaxRowChars = 1 << 25;
 
-    public static FeatureTable Load(string path, string idColumn, string? targetColumn, TargetUse use, Metric? metric)
+    public static FeatureTable Load(string path, string idColumn, string? targetColumn, TargetUse use, Metric? metric, TableRules rules, TrainingColumns? training)
     {
         ArgumentException.ThrowIfNullOrEmpty(path);
         ArgumentException.ThrowIfNullOrEmpty(idColumn);
@@ -31,8 +34,8 @@ internal static class TableLoader
                 throw Empty(path);
             }
 
-            var layout = HeaderLayout.From(path, names, idColumn, targetColumn, use == TargetUse.Required);
-            return ReadRows(path, csv, layout, use == TargetUse.Required ? metric : null, targetColumn);
+            var layout = HeaderLayout.From(path, names, idColumn, targetColumn, use == TargetUse.Required, rules);
+            return ReadRows(path, csv, layout, use == TargetUse.Required ? metric : null, targetColumn, rules, training);
         }
         catch (CsvMissingHeadersException)
         {
@@ -48,13 +51,23 @@ internal static class TableLoader
         }
     }
 
-    private static FeatureTable ReadRows(string path, CsvDataReader csv, HeaderLayout layout, Metric? metric, string? targetColumn)
+    private static FeatureTable ReadRows(
+        string path, CsvDataReader csv, HeaderLayout layout, Metric? metric, string? targetColumn, TableRules rules, TrainingColumns? training)
     {
         var ids = ImmutableArray.CreateBuilder<string>();
         var target = ImmutableArray.CreateBuilder<double>();
         var lineOfId = new Dictionary<string, long>(StringComparer.Ordinal);
         var columns = new SparseColumnsBuilder(layout.FeatureOrdinals.Length);
         var ordinals = layout.FeatureOrdinals;
+        var names = layout.FeatureNames;
+        var levels = new LevelColumnBuilder?[ordinals.Length];
+        var gaps = new GapLines(ordinals.Length);
+        var declared = training?.Categories ?? rules.Categories.ToHashSet(StringComparer.Ordinal);
+        for (int f = 0; f < ordinals.Length; f++)
+        {
+            levels[f] = declared.Contains(names[f]) ? new LevelColumnBuilder() : null;
+        }
+
         while (csv.Read())
         {
             // Sylvan numbers data records from 1; the header is line 1 of the file.
@@ -70,19 +83,48 @@ internal static class TableLoader
             }
 
             int row = ids.Count;
-            ids.Add(ReadId(path, csv, layout.IdOrdinal, line, lineOfId));
+            ids.Add(ReadId(path, csv, layout.IdOrdinal, line, lineOfId, rules));
             if (metric is not null)
             {
-                target.Add(ReadTarget(path, csv, layout.TargetOrdinal, line, targetColumn!, metric));
+                target.Add(ReadTarget(path, csv, layout.TargetOrdinal, line, targetColumn!, metric, rules));
             }
 
             for (int f = 0; f < ordinals.Length; f++)
             {
-                float value = CellParser.Feature(csv.GetFieldSpan(ordinals[f]), path, line, ordinals[f], layout.FeatureNames[f]);
-                if (value != 0f)
+                var cell = csv.GetFieldSpan(ordinals[f]);
+                if (levels[f] is { } text)
                 {
-                    columns.Add(f, row, value);
+                    text.Add(cell, rules, line);
+                    continue;
                 }
+
+                if (CellParser.TryFeature(cell, rules, path, line, ordinals[f], names[f], out float value))
+                {
+                    if (value != 0f)
+                    {
+                        columns.Add(f, row, value);
+                        if (float.IsNaN(value))
+                        {
+                            gaps.Note(f, cell, line);
+                        }
+                    }
+
+                    continue;
+                }
+
+                if (training is not null && training.Numeric.Contains(names[f]))
+                {
+                    throw new InputException(
+                        path, $"column '{names[f]}' holds only numbers in {training.Path} but the text {CellParser.Quote(cell)} here", line, ordinals[f] + 1);
+                }
+
+                // The first text cell: the column is a category column, its earlier numbers become levels.
+                text = new LevelColumnBuilder();
+                text.AddNumbers(row, columns.Rows(f), columns.Values(f));
+                text.NoteEarlierGaps(gaps.FirstEmptyLine[f], gaps.FirstWordLine[f], gaps.FirstWord[f]);
+                columns.Clear(f);
+                text.Add(cell, rules, line);
+                levels[f] = text;
             }
         }
 
@@ -91,16 +133,59 @@ internal static class TableLoader
             throw new InputException(path, "the file has a header but no data rows");
         }
 
-        return new FeatureTable(path, ids.ToImmutable(), [.. layout.FeatureNames], columns.Build(), target.ToImmutable());
+        return Assemble(path, layout, ids.ToImmutable(), target.ToImmutable(), columns, levels, rules, training);
     }
 
-    private static string ReadId(string path, CsvDataReader csv, int ordinal, long line, Dictionary<string, long> lineOfId)
+    private static FeatureTable Assemble(
+        string path, HeaderLayout layout, ImmutableArray<string> ids, ImmutableArray<double> target,
+        SparseColumnsBuilder columns, LevelColumnBuilder?[] levels, TableRules rules, TrainingColumns? training)
     {
-        string id = csv.GetString(ordinal);
-        if (id.Length == 0)
+        var all = columns.Build();
+        var numericNames = ImmutableArray.CreateBuilder<string>();
+        var numeric = ImmutableArray.CreateBuilder<SparseColumn>();
+        var categoryNames = ImmutableArray.CreateBuilder<string>();
+        var categories = ImmutableArray.CreateBuilder<CategoryColumn>();
+        for (int f = 0; f < levels.Length; f++)
         {
-            throw new InputException(path, "the id is empty", line, ordinal + 1);
+            string name = layout.FeatureNames[f];
+            if (levels[f] is not { } text)
+            {
+                numericNames.Add(name);
+                numeric.Add(all[f]);
+                continue;
+            }
+
+            int column = layout.FeatureOrdinals[f] + 1;
+            if (!rules.MissingWordsStated && text.FirstEmptyLine > 0 && text.FirstWordLine > 0)
+            {
+                throw new InputException(
+                    path,
+                    $"category column '{name}' has blank cells (line {text.FirstEmptyLine}) and {CellParser.Quote(text.FirstWord)}, a default missing word that may be a level here; set 'data.missing'",
+                    Math.Max(text.FirstEmptyLine, text.FirstWordLine),
+                    column);
+            }
+
+            if (training is not null && training.TextCategories.Contains(name) && !text.SawText && text.PresentCount > 0)
+            {
+                throw new InputException(path, $"column '{name}' holds text in {training.Path} but only numbers here", 1, column);
+            }
+
+            categoryNames.Add(name);
+            categories.Add(text.Build());
         }
+
+        return new FeatureTable(path, ids, numericNames.ToImmutable(), numeric.ToImmutable(), target, categoryNames.ToImmutable(), categories.ToImmutable());
+    }
+
+    private static string ReadId(string path, CsvDataReader csv, int ordinal, long line, Dictionary<string, long> lineOfId, TableRules rules)
+    {
+        var cell = csv.GetFieldSpan(ordinal);
+        if (cell.IsWhiteSpace() || rules.IsMissing(cell))
+        {
+            throw new InputException(path, $"the id is missing ({CellParser.Quote(cell)}); every row needs its own id", line, ordinal + 1);
+        }
+
+        string id = cell.ToString();
 
         if (!lineOfId.TryAdd(id, line))
         {
@@ -110,9 +195,9 @@ internal static class TableLoader
         return id;
     }
 
-    private static double ReadTarget(string path, CsvDataReader csv, int ordinal, long line, string column, Metric metric)
+    private static double ReadTarget(string path, CsvDataReader csv, int ordinal, long line, string column, Metric metric, TableRules rules)
     {
-        double y = CellParser.Target(csv.GetFieldSpan(ordinal), path, line, ordinal, column);
+        double y = CellParser.Target(csv.GetFieldSpan(ordinal), rules, path, line, ordinal, column);
         return metric.TargetProblem(y) is { } problem
             ? throw new InputException(path, $"column '{column}': {problem}", line, ordinal + 1)
             : y;

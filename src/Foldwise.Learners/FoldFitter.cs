@@ -6,43 +6,48 @@ using Microsoft.ML.Data;
 namespace Foldwise.Learners;
 
 /// <summary>
-/// The fit path both families share: check the job, train in a context seeded from it, then score the
+/// The fit path of the ML.NET families (FastTree, and ML.NET's LightGBM trainer kept as a reference): check the job, train in a context seeded from it, then score the
 /// held-out rows and the whole test table in batch (one cursor each, no per-row engine).
 /// Cancellation is checked before and after training; a fit itself runs to its end.
 /// </summary>
 internal static class FoldFitter
 {
     /// <summary>
-    /// One fit at a time per process. ML.NET already serialises LightGBM training (two fits started together in one
-    /// process took 22.5 s against 22.1 s one after the other, measured 2026-12-01), and concurrent fits
-    /// of the two families in one test process crashed the process natively (seen 2026-12-02); a slot that wants its
-    /// own cores in parallel runs in a process of its own (<c>foldwise worker</c>).
+    /// One ML.NET fit at a time per process: ML.NET serialises its own LightGBM training (two fits started together in one
+    /// process took 22.5 s against 22.1 s one after the other, measured 2026-12-01), and concurrent fits of its
+    /// LightGBM and FastTree trainers in one test process crashed the process natively (seen 2026-12-02). The native
+    /// LightGBM learner takes no part in this lock, so its fits run beside these.
     /// </summary>
     private static readonly Lock OneFitAtATime = new();
 
-    public static FoldPrediction Fit(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation)
+    /// <param name="imputes">True for a family that cannot take NaN: it reads the fold's median-imputed inputs.</param>
+    public static FoldPrediction Fit(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation, bool imputes = false)
     {
         Check(family, job);
         cancellation.ThrowIfCancellationRequested();
         var ml = new MLContext(job.Seed);
         var data = job.Data;
+        var inputs = imputes ? job.Features.Imputed(job.TrainRows) : job.Features;
 
         // Trees fit the target less its training mean: FastTree boosts from zero, so on a log1p target (mean ~8)
         // a low-budget rung would otherwise be scored on how far it got from zero, not on what it learned.
-        double offset = job.TrainRows.Average(r => data.Target[r]);
+        double offset = TrainingMean(job);
         var centred = Array.ConvertAll(data.Target, y => y - offset);
-        var trainView = SparseViews.Rows(ml, data.Train, job.TrainRows, centred);
+        var trainView = SparseViews.Rows(ml, inputs.Train, job.TrainRows, centred);
 
         // ML.NET 5's public API offers no way to interrupt a fit, so cancellation is honoured around it.
         lock (OneFitAtATime)
         {
             var model = train(ml, trainView);
             cancellation.ThrowIfCancellationRequested();
-            var validation = Score(model, SparseViews.Rows(ml, data.Train, job.ValidationRows, labels: null), job.ValidationRows.Length, offset);
-            var test = Score(model, SparseViews.Test(data), data.Test.RowCount, offset);
+            var validation = Score(model, SparseViews.Rows(ml, inputs.Train, job.ValidationRows, labels: null), job.ValidationRows.Length, offset);
+            var test = Score(model, SparseViews.Test(inputs.Test), inputs.Test.RowCount, offset);
             return new FoldPrediction(validation, test);
         }
     }
+
+    /// <summary>The training rows' mean target: every tree learner here fits the target less it.</summary>
+    internal static double TrainingMean(FoldJob job) => job.TrainRows.Average(r => job.Data.Target[r]);
 
     /// <summary>Refuses a job before any training: the coordinator's values are checked, never trusted.</summary>
     internal static void Check(string family, FoldJob job)
@@ -66,6 +71,11 @@ internal static class FoldFitter
         if (job.Data.Test.ColumnCount != job.Data.Train.ColumnCount)
         {
             problems.Add($"the test table has {job.Data.Test.ColumnCount} features but the training table {job.Data.Train.ColumnCount}");
+        }
+
+        if (job.Inputs is { } inputs && inputs.Train.RowCount != job.Data.Train.RowCount)
+        {
+            problems.Add($"the fold's inputs have {inputs.Train.RowCount} training rows but the table {job.Data.Train.RowCount}");
         }
 
         if (problems.Count > 0)

@@ -8,7 +8,7 @@ namespace Foldwise.Learners;
 /// <summary>
 /// ML.NET's FastForest regression (a random forest), budget = trees. Every tree fits its own seeded sample of
 /// <c>row_fraction</c> of the rows; the prediction is the trees' mean.
-/// Refuses missing cells: ML.NET trains them as 0 but scores them otherwise (MissingCellTests).
+/// Reads the fold's median-imputed inputs: ML.NET trains a NaN cell as 0 but scores it otherwise (MissingCellTests).
 /// </summary>
 public sealed class ForestLearner : IFoldLearner
 {
@@ -25,8 +25,8 @@ public sealed class ForestLearner : IFoldLearner
 
     public FoldPrediction Fit(FoldJob job, CancellationToken cancellation)
     {
-        MissingCells.Refuse(Family, job);
-        return FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.FastForest(Options(job)).Fit(train), cancellation);
+        // FastForest trains a NaN cell as 0 but scores it above every split (MissingCellTests): it reads imputed inputs.
+        return FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.FastForest(Options(job)).Fit(train), cancellation, imputes: true);
     }
 
     internal static FastForestRegressionTrainer.Options Options(FoldJob job)

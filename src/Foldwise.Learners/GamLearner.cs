@@ -8,7 +8,7 @@ namespace Foldwise.Learners;
 /// <summary>
 /// ML.NET's generalized additive model regression, budget = boosting iterations: the prediction is a sum of one
 /// step function per feature, each boosted from single-feature trees.
-/// Refuses missing cells: ML.NET trains them as 0 but scores them otherwise (MissingCellTests).
+/// Reads the fold's median-imputed inputs: ML.NET trains a NaN cell as 0 but scores it otherwise (MissingCellTests).
 /// </summary>
 public sealed class GamLearner : IFoldLearner
 {
@@ -24,8 +24,8 @@ public sealed class GamLearner : IFoldLearner
 
     public FoldPrediction Fit(FoldJob job, CancellationToken cancellation)
     {
-        MissingCells.Refuse(Family, job);
-        return FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.Gam(Options(job)).Fit(train), cancellation);
+        // GAM trains a NaN cell as 0 but scores it in its lowest bin (MissingCellTests): it reads imputed inputs.
+        return FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.Gam(Options(job)).Fit(train), cancellation, imputes: true);
     }
 
     internal static GamRegressionTrainer.Options Options(FoldJob job)

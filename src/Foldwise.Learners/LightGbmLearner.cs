@@ -1,54 +1,22 @@
 using Foldwise.Core.Learning;
 using Foldwise.Core.Spaces;
-using Microsoft.ML;
-using Microsoft.ML.Trainers.LightGbm;
+using Foldwise.Learners.Native;
 
 namespace Foldwise.Learners;
 
 /// <summary>
-/// ML.NET's LightGBM regression, budget = boosting rounds. Deterministic for a seed; quiet; row
-/// subsampling every round when row_fraction &lt; 1. ML.NET trains one LightGBM model per process at a time.
+/// LightGBM regression through LightGBM's own C API, budget = boosting rounds. Deterministic for a seed; row
+/// subsampling every round when row_fraction &lt; 1. Fits share no lock, so one process runs one fit per slot at once;
+/// every fit of a process should use the same thread count (LightGBM keeps it in a process-wide setting).
+/// <see cref="LightGbmFoldModel"/> offers what a fit alone does not: per-round held-out scores and continued training.
 /// </summary>
 public sealed class LightGbmLearner : IFoldLearner
 {
-    internal static readonly OptionTable<LightGbmRegressionTrainer.Options> Table = new(
-        new Dictionary<string, Action<LightGbmRegressionTrainer.Options, double>>
-        {
-            ["learning_rate"] = (o, v) => o.LearningRate = v,
-            ["leaves"] = (o, v) => o.NumberOfLeaves = (int)v,
-            ["min_leaf_rows"] = (o, v) => o.MinimumExampleCountPerLeaf = (int)v,
-            ["feature_fraction"] = (o, v) => Booster(o).FeatureFraction = v,
-            ["row_fraction"] = (o, v) =>
-            {
-                Booster(o).SubsampleFraction = v;
-                Booster(o).SubsampleFrequency = v < 1 ? 1 : 0;
-            },
-            ["l2"] = (o, v) => Booster(o).L2Regularization = v,
-        });
-
     public string Family => FamilyNames.LightGbm;
 
-    public FoldPrediction Fit(FoldJob job, CancellationToken cancellation) =>
-        FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.LightGbm(Options(job)).Fit(train), cancellation);
-
-    internal static LightGbmRegressionTrainer.Options Options(FoldJob job)
+    public FoldPrediction Fit(FoldJob job, CancellationToken cancellation)
     {
-        var options = new LightGbmRegressionTrainer.Options
-        {
-            LabelColumnName = nameof(SparseFeatureRow.Label),
-            FeatureColumnName = nameof(SparseFeatureRow.Features),
-            NumberOfIterations = job.Budget,
-            NumberOfThreads = job.Threads,
-            Seed = job.Seed,
-            Deterministic = true,
-            Silent = true,
-            Verbose = false,
-            EvaluationMetric = LightGbmRegressionTrainer.Options.EvaluateMetricType.None,
-            Booster = new GradientBooster.Options(),
-        };
-        Table.Apply(job.Parameters, options);
-        return options;
+        using var model = LightGbmFoldModel.Train(job, scoreEachRound: false, cancellation);
+        return model.Predict();
     }
-
-    private static GradientBooster.Options Booster(LightGbmRegressionTrainer.Options options) => (GradientBooster.Options)options.Booster;
 }

@@ -1,7 +1,6 @@
 using System.Collections.Immutable;
 using System.Runtime.CompilerServices;
 using Foldwise.Core.Data;
-using Foldwise.Core.Learning;
 using Microsoft.ML;
 using Microsoft.ML.Data;
 
@@ -9,18 +8,18 @@ namespace Foldwise.Learners;
 
 /// <summary>
 /// Lazy IDataViews over <see cref="SparseRowMatrix"/> rows in sparse form. Rows are produced on each pass
-/// rather than copied, so a view costs nothing until read; the test view is kept per <see cref="TrialData"/>
-/// so every fold of every trial on that data scores the same object.
+/// rather than copied, so a view costs nothing until read; the test view is kept per test matrix, so every fold
+/// of every trial on a table without category columns scores the same object.
 /// </summary>
 internal static class SparseViews
 {
     // Only used as the host of cached views; training and scoring run in each fit's own context.
     private static readonly MLContext Loader = new(seed: 0);
 
-    private static readonly ConditionalWeakTable<TrialData, IDataView> TestViews = [];
+    private static readonly ConditionalWeakTable<SparseRowMatrix, IDataView> TestViews = [];
 
-    public static IDataView Test(TrialData data) =>
-        TestViews.GetValue(data, d => Create(Loader, d.Test, AllRows(d.Test.RowCount), labels: null));
+    public static IDataView Test(SparseRowMatrix test) =>
+        TestViews.GetValue(test, t => Create(Loader, t, AllRows(t.RowCount), labels: null));
 
     public static IDataView Rows(MLContext ml, SparseRowMatrix matrix, ImmutableArray<int> rows, double[]? labels) =>
         Create(ml, matrix, rows, labels);

@@ -23,7 +23,7 @@ internal static class HeaderDocuments
     {
         ["_id"] = HeaderId,
         ["searchId"] = h.SearchId,
-        ["definitionJson"] = h.DefinitionJson,
+        ["definition"] = DefinitionDocuments.ToDocument(h.Definition),
         ["folds"] = new BsonDocument
         {
             ["foldCount"] = h.Folds.FoldCount,
@@ -45,6 +45,12 @@ internal static class HeaderDocuments
         ["finished"] = finished,
     };
 
+    /// <summary>Format 3 keeps the definition as a document of its own; formats 1 and 2 kept the definition file's text.</summary>
+    private static Core.Definition.SearchDefinition DefinitionOf(BsonDocument header) =>
+        header["definition"].IsDocument
+            ? DefinitionDocuments.FromDocument(header["definition"].AsDocument)
+            : EarlierDefinitionText.Read(String(header, "definitionJson", Owner));
+
     /// <summary>Rebuilds the header; <paramref name="fetch"/> reads one chunk by id.</summary>
     public static SearchHeader FromDocuments(BsonDocument header, BsonDocument? progress, Func<string, byte[]?> fetch)
     {
@@ -52,7 +58,7 @@ internal static class HeaderDocuments
         return new SearchHeader
         {
             SearchId = String(header, "searchId", Owner),
-            DefinitionJson = String(header, "definitionJson", Owner),
+            Definition = DefinitionOf(header),
             Folds = new FoldPlan(
                 Int(folds, "foldCount", Owner),
                 Int(folds, "seed", Owner),

@@ -15,9 +15,11 @@ internal static class StoreFormat
     /// <summary>
     /// The layout this build writes and the newest it reads. 1: each per-row vector inline in one document
     /// (a million row ids passed LiteDB's 16 MB document cap). 2: per-row vectors in chunks of collection
-    /// <c>chunks</c>; format 1's inline vectors still read, so opening a format-1 store to write only raises its version.
+    /// <c>chunks</c>; format 1's inline vectors still read. 3: the definition kept as a document in the store's
+    /// own form (<see cref="DefinitionDocuments"/>), no longer the definition file's text. Every earlier layout still
+    /// reads, so opening an earlier store to write only raises its version.
     /// </summary>
-    public const int Version = 2;
+    public const int Version = 3;
 
     public const string MetaCollection = "meta";
 

@@ -23,7 +23,7 @@ internal sealed class WriterLock : IDisposable
         }
         catch (IOException ex) when (ex is not FileNotFoundException and not DirectoryNotFoundException)
         {
-            throw new StoreException(
+            throw new StoreBusyException(
                 $"Another process is writing {storePath} (it holds {lockPath}). " +
                 "Only one coordinator may run a search; stop it first, or use a read-only command.", ex);
         }

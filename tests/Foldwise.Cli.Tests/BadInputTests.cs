@@ -50,11 +50,12 @@ public sealed class BadInputTests : IDisposable
     }
 
     [Fact]
-    public void Text_in_a_numeric_column_gives_its_line_and_column()
+    public void A_training_text_column_that_holds_only_numbers_in_the_test_table_names_both_files()
     {
+        // "lots" makes f1 a category column in training; the test table's f1 holds only numbers
         workspace.Write("train.csv", "id,f1,y\na,1,2\nb,lots,2\n");
 
-        AssertRefused(workspace.WriteDefinition(), "train.csv:3:2");
+        AssertRefused(workspace.WriteDefinition(), "test.csv", "column 'f1' holds text in", "train.csv");
     }
 
     [Fact]
@@ -95,6 +96,40 @@ public sealed class BadInputTests : IDisposable
         string definition = workspace.WriteDefinition(extra: ",\n  \"blend_mode\": \"simplex\"");
 
         AssertRefused(definition, "search.json:9:3", "blend_mode");
+    }
+
+    [Fact]
+    public void A_missing_target_cell_gives_its_line_and_column()
+    {
+        workspace.Write("train.csv", "id,f1,y\na,1,2\nb,2,NA\nc,3,4\nd,1,2\ne,2,3\nf,3,4\n");
+
+        AssertRefused(workspace.WriteDefinition(), "train.csv:3:3", "the target 'y' is missing");
+    }
+
+    [Fact]
+    public void A_missing_id_cell_gives_its_line_and_column()
+    {
+        workspace.Write("train.csv", "id,f1,y\na,1,2\n,2,3\nc,3,4\nd,1,2\ne,2,3\nf,3,4\n");
+
+        AssertRefused(workspace.WriteDefinition(), "train.csv:3:1", "the id is missing");
+    }
+
+    [Fact]
+    public void A_column_numeric_in_training_and_text_in_the_test_table_names_both_files()
+    {
+        workspace.Write("test.csv", "id,f5,f4,f3,f2,f1\nb0,1,1,1,1,1\nb1,1,1,1,x,1\n");
+
+        AssertRefused(workspace.WriteDefinition(), "test.csv:3:5", "column 'f2' holds only numbers in", "train.csv");
+    }
+
+    [Fact]
+    public void A_default_missing_word_that_may_be_a_level_is_refused_naming_the_column()
+    {
+        var rows = string.Concat(Enumerable.Range(0, 12).Select(r => $"a{r},{r % 3},{(r % 4) switch { 0 => "NA", 1 => "", _ => "EU" }},{r + 1}\n"));
+        workspace.Write("train.csv", "id,f1,region,y\n" + rows);
+        workspace.Write("test.csv", "id,f1,region\nb0,1,EU\n");
+
+        AssertRefused(workspace.WriteDefinition(), "train.csv:3:3", "category column 'region'", "data.missing");
     }
 
     private void AssertRefused(string definition, params string[] mustName)

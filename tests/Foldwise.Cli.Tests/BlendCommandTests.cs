@@ -1,13 +1,16 @@
 using System.Globalization;
 using System.Text.Json;
 using Foldwise.Cli.Report;
-using Foldwise.Cli.Running;
 using Foldwise.Core.Definition;
+using Foldwise.Core.Events;
 using Foldwise.Storage;
+using Foldwise.Testing;
+using Foldwise.Tuning;
 using Spectre.Console.Testing;
 
 namespace Foldwise.Cli.Tests;
 
+[Trait(Lane.Key, Lane.Slow)]
 public sealed class BlendCommandTests(FinishedSearch search) : IClassFixture<FinishedSearch>
 {
     [Theory]
@@ -42,7 +45,7 @@ public sealed class BlendCommandTests(FinishedSearch search) : IClassFixture<Fin
     {
         var blend = CliHarness.Run("blend", search.Store, "--mode", "nonneg");
 
-        Assert.Equal(1, blend.ExitCode);
+        Assert.Equal(ExitCodes.Usage, blend.ExitCode);
         Assert.Contains("--mode 'nonneg' is not one of simplex, non_negative, greedy ('nonneg' is a retired name; did you mean non_negative?)", blend.Output);
     }
 
@@ -103,7 +106,7 @@ public sealed class BlendCommandTests(FinishedSearch search) : IClassFixture<Fin
         {
             var (header, definition) = StoredSearch.HeaderOf(store);
             Assert.Throws<OperationCanceledException>(() => BlendStep.Run(
-                store, header, definition, search.Workspace.Out, new TestConsole(), new BlendOptions(BlendMode.Greedy, 2), new CancellationToken(canceled: true)));
+                store, header, definition, search.Workspace.Out, NoEvents.Instance, new BlendOptions(BlendMode.Greedy, 2), abandon: new CancellationToken(canceled: true)));
 
             // Then the store still holds the earlier blend, and the file is byte for byte the earlier one
             Assert.Equal(BlendMode.Simplex, store.LoadBlend()!.Mode);

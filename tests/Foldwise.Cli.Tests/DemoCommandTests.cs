@@ -1,9 +1,11 @@
 using Foldwise.Core.Definition;
 using Foldwise.Core.Metrics;
 using Foldwise.Csv;
+using Foldwise.Testing;
 
 namespace Foldwise.Cli.Tests;
 
+[Trait(Lane.Key, Lane.Slow)]
 public sealed class DemoCommandTests : IDisposable
 {
     private readonly Workspace workspace = new();

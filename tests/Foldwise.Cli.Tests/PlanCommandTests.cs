@@ -61,7 +61,7 @@ public sealed class PlanCommandTests
     {
         var plan = CliHarness.Run("plan", "--eta", "1");
 
-        Assert.Equal(1, plan.ExitCode);
+        Assert.Equal(ExitCodes.Usage, plan.ExitCode);
         Assert.Contains("--eta must be at least 2", plan.Output);
     }
 
@@ -72,7 +72,7 @@ public sealed class PlanCommandTests
     {
         var plan = CliHarness.Run("plan", retired, value, "--eta", "9");
 
-        Assert.Equal(1, plan.ExitCode);
+        Assert.Equal(ExitCodes.Usage, plan.ExitCode);
         Assert.Contains($"{retired} is a retired name; did you mean {replacement}?", plan.Output);
     }
 

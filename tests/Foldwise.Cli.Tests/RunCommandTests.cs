@@ -1,13 +1,66 @@
 using System.Globalization;
 using System.Text.Json;
+using Foldwise.Testing;
 
 namespace Foldwise.Cli.Tests;
 
+[Trait(Lane.Key, Lane.Slow)]
 public sealed class RunCommandTests : IDisposable
 {
     private readonly Workspace workspace = new();
 
     public void Dispose() => workspace.Dispose();
+
+    [Fact]
+    public void Runs_a_table_with_a_text_column_and_gaps_and_says_what_it_did_with_each()
+    {
+        // Given a training table with a text column (some cells blank) and a numeric column with NA cells,
+        // and a test table with a level training never saw
+        var random = new Random(3);
+        var train = new System.Text.StringBuilder("id,region,f1,y\n");
+        string[] regions = ["north", "south", "east", "west"];
+        for (int r = 0; r < 80; r++)
+        {
+            int level = random.Next(4);
+            string region = r % 10 == 0 ? "" : regions[level];
+            string f1 = r % 8 == 0 ? "NA" : random.Next(0, 5).ToString(CultureInfo.InvariantCulture);
+            train.Append(CultureInfo.InvariantCulture, $"t{r},{region},{f1},{Math.Exp(1 + level):F3}\n");
+        }
+
+        workspace.Write("train.csv", train.ToString());
+        workspace.Write("test.csv", "id,f1,region\nb0,1,north\nb1,NA,islands\nb2,2,\n");
+        string definition = workspace.WriteDefinition(trials: 4);
+
+        // When the search runs
+        var run = CliHarness.Run("run", definition, "--out", workspace.Out);
+
+        // Then the summary names the category column's levels and encoding, the test table's new level, and the gaps
+        Assert.True(run.ExitCode == 0, run.Output);
+        Assert.Contains("category region: 4 levels, 4 seen often enough to keep", run.Output, StringComparison.Ordinal);
+        Assert.Contains("one indicator column per kept level, 10.0% missing (a level of its own)", run.Output, StringComparison.Ordinal);
+        Assert.Contains("the test table has 1 new levels in 1 rows", run.Output, StringComparison.Ordinal);
+        Assert.Contains("f1: 12.5% missing", run.Output, StringComparison.Ordinal);
+        Assert.Equal(4, File.ReadAllLines(Path.Combine(workspace.Out, "predictions.csv")).Length);
+    }
+
+    [Fact]
+    public void A_twelve_row_table_narrows_the_leaf_sizes_to_its_folds_and_every_trial_is_done()
+    {
+        // Given a 12-row training table and the default ranges (min_leaf_rows 5–100, 5 folds)
+        workspace.WriteTables(trainRows: 12, testRows: 4);
+
+        // When a search runs from flags alone
+        var run = CliHarness.Run(
+            "run", "--train", workspace.PathOf("train.csv"), "--test", workspace.PathOf("test.csv"), "--id", "id", "--target", "y",
+            "--trials", "4", "--out", workspace.Out);
+
+        // Then it says the range was narrowed, and no trial fails
+        Assert.True(run.ExitCode == 0, run.Output);
+        Assert.Contains("lightgbm min_leaf_rows 5–100 narrowed to 2–2: the smallest fold trains on 9 rows", run.Output);
+        var trials = Resume.StoredTrial.Read(workspace.Out);
+        Assert.Equal(4, trials.Count);
+        Assert.All(trials, t => Assert.Equal("done", t.State));
+    }
 
     [Fact]
     public void Runs_a_search_to_a_prediction_file_and_history_shows_both_families()

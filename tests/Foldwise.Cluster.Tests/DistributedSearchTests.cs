@@ -8,11 +8,13 @@ using Foldwise.Core.Definition;
 using Foldwise.Core.Folds;
 using Foldwise.Core.Search;
 using Foldwise.Core.Spaces;
+using Foldwise.Testing;
 using Foldwise.Testing.Fakes;
 using Microsoft.Extensions.DependencyInjection;
 
 namespace Foldwise.Cluster.Tests;
 
+[Trait(Lane.Key, Lane.Slow)]
 [Collection(TwoSiloCollection.Name)]
 public sealed class DistributedSearchTests(TwoSiloCluster fixture)
 {

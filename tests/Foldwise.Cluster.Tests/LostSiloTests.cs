@@ -1,12 +1,14 @@
 using Foldwise.Cluster.Coordination;
 using Foldwise.Cluster.Workers;
 using Foldwise.Core.Search;
+using Foldwise.Testing;
 using Foldwise.Testing.Fakes;
 using Microsoft.Extensions.DependencyInjection;
 
 namespace Foldwise.Cluster.Tests;
 
 /// <summary>Each test builds its own two-silo cluster, because it kills or inspects silos.</summary>
+[Trait(Lane.Key, Lane.Slow)]
 public sealed class LostSiloTests
 {
     [Fact]

@@ -1,9 +1,10 @@
 using System.Collections.Immutable;
-using System.Security.Cryptography;
+using System.Diagnostics;
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Coordination;
 using Foldwise.Core.Data;
 using Foldwise.Core.Definition;
+using Foldwise.Core.Events;
 using Foldwise.Core.Folds;
 using Foldwise.Core.Search;
 using Foldwise.Core.Spaces;
@@ -18,15 +19,11 @@ internal static class SearchSessions
     public static (FeatureTable Train, FeatureTable Test) Tables(int trainRows = 30, int testRows = 10) => (Table("train", trainRows, withTarget: true), Table("test", testRows, withTarget: false));
 
     public static CoordinatorSession Start(
-        TwoSiloCluster cluster, string name, (FeatureTable Train, FeatureTable Test) tables, int trials, MemoryRecorder recorder, CoordinatorOptions? leases = null)
+        TwoSiloCluster cluster, string name, (FeatureTable Train, FeatureTable Test) tables, int trials, MemoryRecorder recorder, CoordinatorOptions? leases = null, IProgress<SearchEvent>? events = null, ActivityContext search = default)
     {
-        var trainBytes = TableCodec.Encode(tables.Train);
-        var testBytes = TableCodec.Encode(tables.Test);
-        string trainHash = Convert.ToHexStringLower(SHA256.HashData(trainBytes));
-        string testHash = Convert.ToHexStringLower(SHA256.HashData(testBytes));
         var shelf = cluster.Coordinator.GetRequiredService<DatasetShelf>();
-        shelf.Put(trainHash, trainBytes);
-        shelf.Put(testHash, testBytes);
+        string trainHash = Shelve(shelf, tables.Train);
+        string testHash = Shelve(shelf, tables.Test);
         var folds = new FoldPlan(3, 1, [.. Enumerable.Range(0, tables.Train.RowCount).Select(r => r % 3)]);
         var definition = new SearchDefinition
         {
@@ -37,9 +34,26 @@ internal static class SearchSessions
         };
         var coordinator = new SearchCoordinator(definition, new CountingSchedule(), recorder, TimeProvider.System, leases);
         var manifest = new SearchManifest($"{name}-{Guid.NewGuid():N}", trainHash, testHash, 3, 1, [.. folds.FoldOfRow], "Rmsle");
-        var session = new CoordinatorSession(manifest, coordinator, recorder);
+        var session = new CoordinatorSession(manifest, coordinator, recorder, events, search);
         cluster.Coordinator.GetRequiredService<SessionRegistry>().Add(session);
         return session;
+    }
+
+    /// <summary>
+    /// Encodes a table into a file of its own in the temp folder and serves it from the shelf; a file per call, so
+    /// a search starting on the same tables never rewrites a file the shelf is serving.
+    /// </summary>
+    private static string Shelve(DatasetShelf shelf, FeatureTable table)
+    {
+        string hash = TableHash.Of(table);
+        string path = Path.Combine(Path.GetTempPath(), "foldwise-cluster-tests-" + Guid.NewGuid().ToString("N") + ".fwt");
+        using (var file = File.Create(path))
+        {
+            TableCodec.Encode(table, file);
+        }
+
+        shelf.Put(hash, path);
+        return hash;
     }
 
     /// <summary>

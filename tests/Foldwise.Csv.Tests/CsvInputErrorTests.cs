@@ -83,27 +83,79 @@ public sealed class CsvInputErrorTests
     }
 
     [Fact]
-    public void Quotes_text_found_in_a_numeric_column_and_names_the_column()
+    public void Names_both_files_when_a_numeric_training_column_holds_text_in_the_test_table()
     {
-        using var csv = new TempCsv("id,y,a,b\nr1,1,2,3\nr2,1,2,n/a\n");
+        // Given a column of numbers in training and a text cell in the same column of the test table
+        using var train = new TempCsv("id,y,a,b\nr1,1,2,3\nr2,1,2,4\n");
+        using var test = new TempCsv("id,b,a\nt1,3,2\nt2,x,2\n", "test.csv");
+        var table = Train(train);
 
-        var e = Assert.Throws<InputException>(() => Train(csv));
+        // When the test table is read for it
+        var e = Assert.Throws<InputException>(() => CsvTableReader.ReadTest(test.Path, "id", "y", TableRules.Default, table));
 
-        AssertAt(e, csv.Path, 3, 4, "column 'b' holds the text \"n/a\" where a number is expected");
+        // Then one line names both files, the test line and the column
+        AssertAt(e, test.Path, 3, 2, $"column 'b' holds only numbers in {train.Path} but the text \"x\" here");
     }
 
     [Fact]
-    public void Reports_an_empty_numeric_cell_and_says_to_write_zero()
+    public void Names_both_files_when_a_text_training_column_holds_only_numbers_in_the_test_table()
     {
-        using var csv = new TempCsv("id,y,a,b\nr1,1,,3\n");
+        using var train = new TempCsv("id,y,a,b\nr1,1,2,red\nr2,1,2,blue\n");
+        using var test = new TempCsv("id,b,a\nt1,3,2\nt2,4,2\n", "test.csv");
+        var table = Train(train);
+
+        var e = Assert.Throws<InputException>(() => CsvTableReader.ReadTest(test.Path, "id", "y", TableRules.Default, table));
+
+        AssertAt(e, test.Path, 1, 2, $"column 'b' holds text in {train.Path} but only numbers here");
+    }
+
+    [Fact]
+    public void Refuses_a_default_missing_word_beside_empty_cells_in_a_category_column()
+    {
+        // Given a text column where "NA" may be a level (North America) and blanks are the gaps
+        using var csv = new TempCsv("id,y,region\nr1,1,NA\nr2,1,EU\nr3,1,\n");
 
         var e = Assert.Throws<InputException>(() => Train(csv));
 
-        AssertAt(e, csv.Path, 2, 3, "column 'a' has an empty cell; write 0");
+        AssertAt(e, csv.Path, 4, 3, "category column 'region' has blank cells (line 4) and \"NA\", a default missing word that may be a level here; set 'data.missing'");
+    }
+
+    [Fact]
+    public void Takes_both_as_missing_when_the_definition_lists_its_missing_words()
+    {
+        using var csv = new TempCsv("id,y,region\nr1,1,NA\nr2,1,EU\nr3,1,\n");
+        var rules = TableRules.Default with { MissingWords = ["NA"], MissingWordsStated = true };
+
+        var table = CsvTableReader.ReadTraining(csv.Path, "id", "y", Metric.Rmsle, rules);
+
+        Assert.Equal([-1, 0, -1], table.Categories[0].Codes.ToArray());
     }
 
     [Theory]
-    [InlineData("NaN")]
+    [InlineData("")]
+    [InlineData("NA")]
+    [InlineData("null")]
+    public void Reports_a_missing_target(string cell)
+    {
+        using var csv = new TempCsv($"id,y,a\nr1,1,2\nr2,{cell},2\n");
+
+        var e = Assert.Throws<InputException>(() => Train(csv));
+
+        AssertAt(e, csv.Path, 3, 2, "the target 'y' is missing; every training row needs one");
+    }
+
+    [Fact]
+    public void Names_a_declared_category_column_the_header_lacks()
+    {
+        using var csv = new TempCsv("id,y,a\nr1,1,2\n");
+        var rules = TableRules.Default with { Categories = ["postcode"] };
+
+        var e = Assert.Throws<InputException>(() => CsvTableReader.ReadTraining(csv.Path, "id", "y", Metric.Rmsle, rules));
+
+        AssertAt(e, csv.Path, 1, null, "'data.categories' names 'postcode', which the header lacks");
+    }
+
+    [Theory]
     [InlineData("Infinity")]
     [InlineData("-Infinity")]
     [InlineData("1e39")]
@@ -117,8 +169,8 @@ public sealed class CsvInputErrorTests
     }
 
     [Theory]
-    [InlineData("NaN")]
     [InlineData("Infinity")]
+    [InlineData("-Infinity")]
     public void Reports_a_target_that_is_not_a_finite_number(string cell)
     {
         using var csv = new TempCsv($"id,a,y\nr1,2,1\nr2,2,{cell}\n");
@@ -179,14 +231,16 @@ public sealed class CsvInputErrorTests
         AssertAt(e, csv.Path, 1, 4, "header column 4 has no name");
     }
 
-    [Fact]
-    public void Reports_an_empty_id()
+    [Theory]
+    [InlineData("")]
+    [InlineData("N/A")]
+    public void Reports_a_missing_id(string cell)
     {
-        using var csv = new TempCsv("id,y,a\nr1,1,2\n,1,2\n");
+        using var csv = new TempCsv($"id,y,a\nr1,1,2\n{cell},1,2\n");
 
         var e = Assert.Throws<InputException>(() => Train(csv));
 
-        AssertAt(e, csv.Path, 3, 1, "the id is empty");
+        AssertAt(e, csv.Path, 3, 1, "the id is missing");
     }
 
     [Fact]

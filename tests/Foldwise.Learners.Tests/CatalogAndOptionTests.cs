@@ -24,7 +24,7 @@ public sealed class CatalogAndOptionTests
     [Fact]
     public void Maps_exactly_the_parameters_of_each_default_space()
     {
-        Assert.Equal(DefaultSpaces.LightGbm.Ranges.Select(r => r.Name).Order(), LightGbmLearner.Table.Names.Order());
+        Assert.Equal(DefaultSpaces.LightGbm.Ranges.Select(r => r.Name).Order(), Native.LightGbmParameters.Table.Names.Order());
         Assert.Equal(DefaultSpaces.FastTree.Ranges.Select(r => r.Name).Order(), FastTreeLearner.Table.Names.Order());
         Assert.Equal(DefaultSpaces.Forest.Ranges.Select(r => r.Name).Order(), ForestLearner.Table.Names.Order());
         Assert.Equal(DefaultSpaces.Gam.Ranges.Select(r => r.Name).Order(), GamLearner.Table.Names.Order());
@@ -69,7 +69,7 @@ public sealed class CatalogAndOptionTests
         var job = TinyTables.Job(TinyTables.Data(), FamilyNames.LightGbm, TinyTables.Parameters(FamilyNames.LightGbm, rowFraction: 0.8), seed: 42, threads: 2, budget: 33);
 
         // When its options are built
-        var options = LightGbmLearner.Options(job);
+        var options = MlNetLightGbmLearner.Options(job);
 
         // Then every mapped value and the fixed choices are in place
         var booster = Assert.IsType<GradientBooster.Options>(options.Booster);
@@ -82,7 +82,7 @@ public sealed class CatalogAndOptionTests
     [Fact]
     public void Turns_subsampling_off_when_every_row_is_used()
     {
-        var lightGbm = LightGbmLearner.Options(TinyTables.Job(TinyTables.Data(), FamilyNames.LightGbm));
+        var lightGbm = MlNetLightGbmLearner.Options(TinyTables.Job(TinyTables.Data(), FamilyNames.LightGbm));
         var fastTree = FastTreeLearner.Options(TinyTables.Job(TinyTables.Data(), FamilyNames.FastTree));
 
         Assert.Equal(0, ((GradientBooster.Options)lightGbm.Booster).SubsampleFrequency);
@@ -100,11 +100,11 @@ public sealed class CatalogAndOptionTests
     }
 
     [Fact]
-    public void Builds_the_test_view_once_per_trial_data()
+    public void Builds_the_test_view_once_per_test_matrix()
     {
         var data = TinyTables.Data();
 
-        Assert.Same(SparseViews.Test(data), SparseViews.Test(data));
-        Assert.NotSame(SparseViews.Test(data), SparseViews.Test(TinyTables.Data()));
+        Assert.Same(SparseViews.Test(data.Test), SparseViews.Test(data.Test));
+        Assert.NotSame(SparseViews.Test(data.Test), SparseViews.Test(TinyTables.Data().Test));
     }
 }

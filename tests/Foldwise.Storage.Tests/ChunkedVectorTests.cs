@@ -1,5 +1,7 @@
+using Foldwise.Core.Definition;
 using Foldwise.Core.Folds;
 using Foldwise.Core.Search;
+using Foldwise.Core.Spaces;
 using Foldwise.Storage.Writer;
 using LiteDB;
 
@@ -17,7 +19,13 @@ public sealed class ChunkedVectorTests : IDisposable
     private static SearchHeader TallHeader(int rows) => new()
     {
         SearchId = "tall",
-        DefinitionJson = "{}",
+        Definition = new SearchDefinition
+        {
+            Name = "tall",
+            Data = new DataSource("/runs/tall/train.csv", "/runs/tall/test.csv", "id", "y"),
+            Families = [new FamilySearch("lightgbm", DefaultSpaces.For("lightgbm"))],
+            Budget = new SearchBudget(Trials: 10, Hours: null),
+        },
         Folds = new FoldPlan(5, 3, [.. Enumerable.Range(0, rows).Select(r => r % 5)]),
         TrainHash = "a",
         TestHash = "b",

@@ -106,7 +106,7 @@ public sealed class OpeningTests : IDisposable
     {
         var first = SearchStore.Create(_dir.StorePath);
 
-        var error = Assert.Throws<StoreException>(() => SearchStore.Open(_dir.StorePath));
+        var error = Assert.Throws<StoreBusyException>(() => SearchStore.Open(_dir.StorePath));
         Assert.Contains("Another process is writing", error.Message);
         using (var reader = SearchStore.OpenReadOnly(_dir.StorePath))
         {

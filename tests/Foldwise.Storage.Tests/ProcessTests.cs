@@ -1,4 +1,5 @@
 using Foldwise.Storage.Writer;
+using Foldwise.Testing;
 
 namespace Foldwise.Storage.Tests;
 
@@ -6,6 +7,7 @@ namespace Foldwise.Storage.Tests;
 /// The coordinator's situation for real: another process writes the store while this one reads it,
 /// and a writer killed mid-loop loses nothing it had acknowledged.
 /// </summary>
+[Trait(Lane.Key, Lane.Slow)]
 public sealed class ProcessTests : IDisposable
 {
     private static readonly TimeSpan Patience = TimeSpan.FromSeconds(60);

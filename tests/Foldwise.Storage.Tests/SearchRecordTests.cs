@@ -1,8 +1,10 @@
 using Foldwise.Core.Blending;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Folds;
+using Foldwise.Core.Metrics;
 using Foldwise.Core.Screening;
 using Foldwise.Core.Search;
+using Foldwise.Core.Spaces;
 using Foldwise.Storage.Writer;
 
 namespace Foldwise.Storage.Tests;
@@ -13,10 +15,29 @@ public sealed class SearchRecordTests : IDisposable
 
     public void Dispose() => _dir.Dispose();
 
+    /// <summary>A definition with no option at its default, a fixed value of each kind, a choice, and text beyond ASCII.</summary>
+    private static readonly SearchDefinition EveryOptionSet = new()
+    {
+        Name = "fracht é ✓",
+        Data = new DataSource("/data/zug é/train.csv", "/data/test.csv", "shipper id", "spend, q1"),
+        Metric = MetricKind.Mae,
+        Folds = 7,
+        Seed = -3,
+        Screening = new ScreeningOptions(MinNonZero: 9),
+        Families =
+        [
+            new FamilySearch("fasttree", new ParameterSpace([ParameterRange.Whole("leaves", 31, 31), ParameterRange.Log("learning_rate", 1e-05, 0.3)])),
+            new FamilySearch("lightgbm", new ParameterSpace([ParameterRange.Fixed("l2", 0.1), ParameterRange.Linear("row_fraction", 0.5, 1), ParameterRange.OneOf("style", "a", "b \"c\"")])),
+        ],
+        Schedule = new ScheduleOptions(ScheduleKind.Hyperband, ProposerKind.Random, FirstRung: 7, FullBudget: 300, Eta: 4, RateScaling: 0.25, Brackets: 2),
+        Budget = new SearchBudget(Trials: null, Hours: 2.5),
+        Blend = new BlendOptions(BlendMode.NonNegative, Pool: 5),
+    };
+
     private static SearchHeader Header(int rows) => new()
     {
         SearchId = "freight-q1",
-        DefinitionJson = "{\"target\":\"spend\",\"metric\":\"rmsle\",\"note\":\"é ✓\"}",
+        Definition = EveryOptionSet,
         Folds = new FoldPlan(5, 42, [.. Enumerable.Range(0, rows).Select(r => (r * 7) % 5)]),
         TrainHash = "sha256:0a1b",
         TestHash = "sha256:ffee",
@@ -32,7 +53,7 @@ public sealed class SearchRecordTests : IDisposable
     {
         Assert.NotNull(actual);
         Assert.Equal(expected.SearchId, actual.SearchId);
-        Assert.Equal(expected.DefinitionJson, actual.DefinitionJson);
+        Assert.Equal(expected.Definition, actual.Definition, DefinitionComparer.Instance);
         Assert.Equal(expected.Folds.FoldCount, actual.Folds.FoldCount);
         Assert.Equal(expected.Folds.Seed, actual.Folds.Seed);
         Assert.Equal(expected.Folds.FoldOfRow.ToArray(), actual.Folds.FoldOfRow.ToArray());

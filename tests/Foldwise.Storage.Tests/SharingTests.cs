@@ -1,8 +1,10 @@
 using Foldwise.Storage.Writer;
+using Foldwise.Testing;
 
 namespace Foldwise.Storage.Tests;
 
 /// <summary>A writer and readers on one file within one process; <see cref="ProcessTests"/> does it across processes.</summary>
+[Trait(Lane.Key, Lane.Slow)]
 public sealed class SharingTests : IDisposable
 {
     private readonly TempDirectory _dir = new();

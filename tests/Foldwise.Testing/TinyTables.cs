@@ -56,4 +56,30 @@ public static class TinyTables
             .ToList();
         return FromColumns(columns, target, source, rows.Length);
     }
+
+    /// <summary>The table with one more category column; a null cell is missing, levels are numbered in order of first appearance.</summary>
+    public static FeatureTable WithCategory(FeatureTable table, string name, params string?[] cells)
+    {
+        ArgumentNullException.ThrowIfNull(table);
+        var levels = new List<string>();
+        var codes = cells.Select(cell =>
+        {
+            if (cell is null)
+            {
+                return CategoryColumn.Missing;
+            }
+
+            int at = levels.IndexOf(cell);
+            if (at < 0)
+            {
+                levels.Add(cell);
+                at = levels.Count - 1;
+            }
+
+            return at;
+        }).ToArray();
+        return new FeatureTable(
+            table.Source, table.Ids, table.FeatureNames, table.Columns, table.Target,
+            table.CategoryNames.Add(name), table.Categories.Add(new CategoryColumn([.. levels], [.. codes])));
+    }
 }

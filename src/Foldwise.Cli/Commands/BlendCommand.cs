@@ -2,6 +2,7 @@ using System.Text.Json;
 using System.Text.Json.Nodes;
 using Foldwise.Cli.Output;
 using Foldwise.Cli.Running;
+using Foldwise.Tuning;
 using Foldwise.Cli.Report;
 using Foldwise.Core.Definition;
 using Foldwise.Storage;
@@ -22,8 +23,8 @@ public sealed class BlendCommand(IAnsiConsole console) : Command<BlendSettings>
         using var store = SearchStore.Open(path);
         var (header, definition) = StoredSearch.HeaderOf(store);
         var options = new BlendOptions(settings.ParsedMode ?? definition.Blend.Mode, settings.Pool ?? definition.Blend.Pool);
-        var quiet = settings.Json ? new QuietConsole().Console : console;
-        var blend = BlendStep.Run(store, header, definition, Path.GetDirectoryName(Path.GetFullPath(path))!, quiet, options, cancellationToken);
+        IProgress<Core.Events.SearchEvent> events = settings.Json ? Core.Events.NoEvents.Instance : new ProgressView(console);
+        var blend = BlendStep.Run(store, header, definition, Path.GetDirectoryName(Path.GetFullPath(path))!, events, options, abandon: cancellationToken);
         if (settings.Json)
         {
             var root = new JsonObject

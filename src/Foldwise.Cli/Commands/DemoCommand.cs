@@ -26,6 +26,6 @@ public sealed class DemoCommand(IAnsiConsole console) : AsyncCommand<DemoSetting
         }
 
         var definition = DefinitionReader.Read(definitionPath);
-        return await new SearchRun(console) { Role = settings.ToRole(), Leases = settings.ToCoordinatorOptions() }.RunNewAsync(definition, settings.Out, settings.Slots, settings.Threads, cancellationToken);
+        return await SearchCommand.ExecuteAsync(console, settings, (search, stopping) => search.RunNewAsync(definition, settings.Out, settings.Slots, settings.Threads, stopping, cancellationToken));
     }
 }

@@ -11,5 +11,5 @@ namespace Foldwise.Cli.Commands;
 public sealed class ResumeCommand(IAnsiConsole console) : AsyncCommand<ResumeSettings>
 {
     public override Task<int> ExecuteAsync(CommandContext context, ResumeSettings settings, CancellationToken cancellationToken) =>
-        new SearchRun(console) { Role = settings.ToRole(), Leases = settings.ToCoordinatorOptions() }.ResumeAsync(settings.Store, settings.Slots, settings.Threads, settings.Blend, cancellationToken);
+        SearchCommand.ExecuteAsync(console, settings, (search, stopping) => search.ResumeAsync(settings.Store, settings.Slots, settings.Threads, settings.Blend, stopping, cancellationToken));
 }

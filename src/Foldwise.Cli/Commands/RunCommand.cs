@@ -13,6 +13,6 @@ public sealed class RunCommand(IAnsiConsole console) : AsyncCommand<RunSettings>
         var definition = settings.Definition is { } file
             ? DefinitionDefaults.Override(DefinitionReader.Read(file), settings.Trials, settings.Hours)
             : DefinitionDefaults.FromFlags(settings.Train!, settings.Test!, settings.Id!, settings.Target!, settings.Trials, settings.Hours);
-        return await new SearchRun(console) { Role = settings.ToRole(), Leases = settings.ToCoordinatorOptions() }.RunNewAsync(definition, settings.Out, settings.Slots, settings.Threads, cancellationToken);
+        return await SearchCommand.ExecuteAsync(console, settings, (search, stopping) => search.RunNewAsync(definition, settings.Out, settings.Slots, settings.Threads, stopping, cancellationToken));
     }
 }

@@ -2,6 +2,7 @@ using System.ComponentModel;
 using System.Net;
 using Foldwise.Cli.Running;
 using Foldwise.Cluster.Hosting;
+using Foldwise.Cluster.Workers;
 using Foldwise.Core.Search;
 using Spectre.Console;
 using Spectre.Console.Cli;
@@ -10,16 +11,16 @@ namespace Foldwise.Cli.Commands;
 
 /// <summary>
 /// Options shared by every command that hosts a coordinator: its local slots and how other machines reach it.
-/// Defaults: one local slot, free loopback ports (a cluster of one), no certificate.
+/// Defaults: one local slot per core, free loopback ports (a cluster of one), no certificate.
 /// </summary>
 public class SearchHostSettings : CommandSettings
 {
     [CommandOption("--slots <N>")]
-    [Description("Local slots training trials. Default 1: ML.NET trains one LightGBM model per process at a time, so one slot with every core keeps the machine busiest. 0 = this machine only coordinates.")]
-    public int Slots { get; init; } = 1;
+    [Description("Local slots training trials. Default: one per core, each fit single-threaded (on tables of a few thousand rows fits side by side beat one wide fit). 0 = this machine only coordinates.")]
+    public int Slots { get; init; } = WorkerOptions.DefaultSlots;
 
     [CommandOption("--threads <N>")]
-    [Description("Threads per slot. Default: the machine's cores divided among the slots.")]
+    [Description("Threads per slot. Default: the machine's cores divided among the slots (1 with the default slots).")]
     public int? Threads { get; init; }
 
     [CommandOption("--port <P>")]
@@ -42,6 +43,10 @@ public class SearchHostSettings : CommandSettings
     [Description("Passphrase of --cert. Default: the FOLDWISE_CERT_PASSPHRASE environment variable.")]
     public string? Passphrase { get; init; }
 
+    [CommandOption("--verbose")]
+    [Description("Log information messages of the cluster to stderr too, not only warnings and errors.")]
+    public bool Verbose { get; init; }
+
     [CommandOption("--lease-seconds <S>", IsHidden = true)]
     [Description("Advanced: seconds a trial's lease lasts without renewal. Default 90.")]
     public double? LeaseSeconds { get; init; }
@@ -57,6 +62,7 @@ public class SearchHostSettings : CommandSettings
             Advertise = advertise,
             SiloName = $"coordinator@{Environment.MachineName}",
             Certificate = ClusterTrust.Load(Cert, Passphrase),
+            Verbose = Verbose,
         };
     }
 

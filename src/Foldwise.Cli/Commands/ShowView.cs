@@ -2,6 +2,7 @@ using System.Globalization;
 using Foldwise.Cli.Output;
 using Foldwise.Cli.Report;
 using Foldwise.Core.Schedules;
+using Foldwise.Core.Screening;
 using Foldwise.Core.Search;
 using Spectre.Console;
 
@@ -61,6 +62,23 @@ public static class ShowView
 
         console.Write(facts);
         RenderParameters(console, search, t);
+        RenderInputs(console, search);
+    }
+
+    /// <summary>What every fold did with the table's category columns and gaps (the same for every trial of the search).</summary>
+    private static void RenderInputs(IAnsiConsole console, StoredSearch search)
+    {
+        var lines = search.Screening is { } report ? ColumnNotes.Lines(report).ToList() : [];
+        if (lines.Count == 0)
+        {
+            return;
+        }
+
+        console.MarkupLine("[bold]Inputs[/] (encoded inside each fold from its training rows):");
+        foreach (string line in lines)
+        {
+            console.MarkupLine("  " + Markup.Escape(line));
+        }
     }
 
     private static void RenderParameters(IAnsiConsole console, StoredSearch search, TrialRecord t)

@@ -1,16 +1,19 @@
 using System.Net;
 using System.Runtime.InteropServices;
+using Foldwise.Cli.Output;
 using Foldwise.Cli.Running;
+using Foldwise.Tuning;
 using Foldwise.Cluster.Hosting;
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Cluster.Workers;
 using Foldwise.Core.Data;
-using Spectre.Console;
+using Foldwise.Core.Events;
 using Spectre.Console.Cli;
 
 namespace Foldwise.Cli.Commands;
 
 /// <summary><c>foldwise worker</c>: offers this machine's slots to a coordinator until Ctrl-C or SIGTERM; rejoins by itself.</summary>
-public sealed class WorkerCommand(IAnsiConsole console) : AsyncCommand<WorkerSettings>
+public sealed class WorkerCommand : AsyncCommand<WorkerSettings>
 {
     public override async Task<int> ExecuteAsync(CommandContext context, WorkerSettings settings, CancellationToken cancellationToken)
     {
@@ -35,16 +38,17 @@ public sealed class WorkerCommand(IAnsiConsole console) : AsyncCommand<WorkerSet
             Advertise = settings.Advertise is { } advertise ? IPAddress.Parse(advertise) : LocalAddress.Facing(join),
             SiloName = options.Name,
             Certificate = ClusterTrust.Load(settings.Cert, settings.Passphrase),
+            Verbose = settings.Verbose,
         };
 
         using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancellationToken);
         using var sigterm = PosixSignalRegistration.Create(PosixSignal.SIGTERM, s => { s.Cancel = true; stop.Cancel(); });
         using var sigint = PosixSignalRegistration.Create(PosixSignal.SIGINT, s => { s.Cancel = true; stop.Cancel(); });
-        console.MarkupLine($"Worker [bold]{Markup.Escape(options.Name)}[/] joining {Markup.Escape(join.ToString())} from {role.Advertise}" +
-                           (role.Certificate is null ? " (no certificate)" : " (mutual TLS)") + "; Ctrl-C to leave");
         string[] commandLine = [.. context.Arguments];
-        await new WorkerHost(role, options, Console.Out)
+        IProgress<SearchEvent> events = settings.Json ? new EventJsonLines(Console.Out) : new WorkerLines(Console.Out);
+        await new WorkerHost(role, options, events)
         {
+            Telemetry = FoldwiseTelemetryOptions.FromEnvironment(),
             StartOver = attempts => FreshProcess.Restart(commandLine, attempts),
             EarlierAttempts = int.TryParse(Environment.GetEnvironmentVariable(FreshProcess.AttemptVariable), out int earlier) ? earlier : 0,
         }.RunAsync(stop.Token);

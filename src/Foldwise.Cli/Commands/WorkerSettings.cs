@@ -1,12 +1,13 @@
 using System.ComponentModel;
 using System.Net;
+using Foldwise.Cluster.Workers;
 using Spectre.Console;
 using Spectre.Console.Cli;
 
 namespace Foldwise.Cli.Commands;
 
 /// <summary>
-/// Options of <c>foldwise worker</c>. Defaults: <c>1</c> slot using every core, a free silo port, the address
+/// Options of <c>foldwise worker</c>. Defaults: one single-threaded slot per core, a free silo port, the address
 /// facing the coordinator, the host name as the worker's name.
 /// </summary>
 public sealed class WorkerSettings : CommandSettings
@@ -16,11 +17,11 @@ public sealed class WorkerSettings : CommandSettings
     public string Join { get; init; } = "";
 
     [CommandOption("--slots <N>")]
-    [Description("Slots training trials. Default 1 with all cores: ML.NET trains one LightGBM model at a time per process, so a second slot in the same process would only wait behind the first. Run a second worker process instead if you want two.")]
-    public int Slots { get; init; } = 1;
+    [Description("Slots training trials. Default: one per core, each fit single-threaded (on tables of a few thousand rows fits side by side beat one wide fit).")]
+    public int Slots { get; init; } = WorkerOptions.DefaultSlots;
 
     [CommandOption("--threads <N>")]
-    [Description("Threads per slot. Default: the machine's cores divided among the slots.")]
+    [Description("Threads per slot. Default: the machine's cores divided among the slots (1 with the default slots).")]
     public int? Threads { get; init; }
 
     [CommandOption("--port <P>")]
@@ -46,6 +47,14 @@ public sealed class WorkerSettings : CommandSettings
     [CommandOption("--passphrase <TEXT>")]
     [Description("Passphrase of --cert. Default: the FOLDWISE_CERT_PASSPHRASE environment variable.")]
     public string? Passphrase { get; init; }
+
+    [CommandOption("--json")]
+    [Description("Print each event (joined, trial scored, lease lost, …) as one JSON object per line instead of sentences.")]
+    public bool Json { get; init; }
+
+    [CommandOption("--verbose")]
+    [Description("Log information messages of the cluster to stderr too, not only warnings and errors.")]
+    public bool Verbose { get; init; }
 
     public override ValidationResult Validate()
     {

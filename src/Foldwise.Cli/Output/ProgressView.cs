@@ -1,97 +1,141 @@
-using Foldwise.Cluster.Coordination;
 using Foldwise.Core.Definition;
+using Foldwise.Core.Events;
+using Foldwise.Core.Metrics;
 using Foldwise.Core.Search;
+using Foldwise.Core.Spaces;
 using Spectre.Console;
 
 namespace Foldwise.Cli.Output;
 
 /// <summary>
-/// Follows a running search: a live bar (trials done / running / best so far) on a terminal, one plain line per
-/// finished trial otherwise; a summary line at the end either way.
+/// Renders a search's events: preparation lines, then a live bar (trials done / running / best so far) on a
+/// terminal or one plain line per finished trial otherwise, a summary line when the search stops, and the blend.
 /// </summary>
-public sealed class ProgressView(IAnsiConsole console)
+public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
 {
-    private static readonly TimeSpan Refresh = TimeSpan.FromMilliseconds(400);
+    private readonly object gate = new();
+    private LiveBar? live;
+    private IReadOnlyDictionary<string, ParameterSpace> spaces = new Dictionary<string, ParameterSpace>();
 
-    public async Task FollowAsync(CoordinatorSession session, SearchDefinition definition, CancellationToken cancellation)
+    public void Report(SearchEvent value)
     {
+        lock (gate)
+        {
+            Render(value);
+        }
+    }
+
+    private void Render(SearchEvent value)
+    {
+        switch (value)
+        {
+            case TablesRead r:
+                console.MarkupLine(
+                    $"Read [bold]{Markup.Escape(Path.GetFileName(r.TrainFile))}[/] {r.TrainRows:N0} rows × {r.Features:N0} features " +
+                    $"({r.Density:P1} non-zero) and [bold]{Markup.Escape(Path.GetFileName(r.TestFile))}[/] {r.TestRows:N0} rows in {r.Took.TotalSeconds:F1} s");
+                if (r.IgnoredTestColumns.Length > 0)
+                {
+                    console.MarkupLine($"  The test table's {r.IgnoredTestColumns.Length} column(s) missing from training are ignored: " +
+                                       $"{Markup.Escape(string.Join(", ", r.IgnoredTestColumns.Take(5)))}{(r.IgnoredTestColumns.Length > 5 ? ", …" : "")}");
+                }
+
+                break;
+            case LeafSizesNarrowed l:
+                foreach (string change in l.Changes)
+                {
+                    console.MarkupLine($"  {Markup.Escape(change)}");
+                }
+
+                break;
+            case ColumnsScreened s:
+                console.MarkupLine(
+                    $"Screening kept {s.Report.Kept.Length:N0} of {s.Report.ColumnsRead:N0} columns: dropped {s.Report.Count(Core.Screening.DropReason.Constant):N0} constant, " +
+                    $"{s.Report.Count(Core.Screening.DropReason.Duplicate):N0} duplicate, {s.Report.Count(Core.Screening.DropReason.TooFewNonZero):N0} with fewer than {s.MinNonZero} non-zero cells" +
+                    $"{DropCount(s.Report, Core.Screening.DropReason.AllMissing, "all missing")}{DropCount(s.Report, Core.Screening.DropReason.NearlyUnique, "nearly unique text")}");
+                foreach (string line in Core.Screening.ColumnNotes.Lines(s.Report))
+                {
+                    console.MarkupLine("  " + Markup.Escape(line));
+                }
+
+                break;
+            case SearchResumed r:
+                console.MarkupLine($"Resuming [bold]{Markup.Escape(r.SearchId)}[/]: {r.Done} trial(s) done, {r.ToRunAgain} to run again, " +
+                                   $"{r.SpentBefore:hh\\:mm\\:ss} spent before.");
+                break;
+            case SearchStarted s:
+                Started(s);
+                break;
+            case CoordinatorListening l:
+                // Networked: say how to join, and who comes and goes (one plain line each).
+                console.Profile.Out.Writer.WriteLine(
+                    $"Coordinator listening on {l.Address}:{l.Port}" +
+                    (l.MutualTls ? " (mutual TLS)" : " (no certificate: any machine that reaches the port can join)") +
+                    $"; workers join with: foldwise worker --join {l.Address}:{l.Port}" + (l.MutualTls ? " --cert FILE" : ""));
+                break;
+            case ClusterChanged c:
+                console.Profile.Out.Writer.WriteLine($"cluster {c.Change}");
+                break;
+            case TrialScored t:
+                Scored(t);
+                break;
+            case TrialFailed f:
+                live?.Update(f.Progress);
+                break;
+            case SearchStopped s:
+                Stopped(s.Progress);
+                break;
+            case BlendFellBack b:
+                console.MarkupLine($"[yellow]No trial reached the full {b.FullBudget} rounds; blending trials at {b.Furthest} rounds.[/]");
+                break;
+            case BlendSolved b:
+                BlendView.Render(console, b.Summary, Metric.For(b.Metric), b.Trials);
+                console.MarkupLine($"Wrote [bold]{Markup.Escape(b.PredictionFile)}[/]: {b.Predictions:N0} predictions.");
+                break;
+            default:
+                break;
+        }
+    }
+
+    private void Started(SearchStarted s)
+    {
+        var definition = s.Definition;
+        spaces = definition.Families.ToDictionary(f => f.Family, f => f.Space);
+        console.MarkupLine($"Search [bold]{Markup.Escape(s.SearchId)}[/]: {DefinitionWords.Of(definition.Schedule.Kind)} with {DefinitionWords.Of(definition.Schedule.Proposer)}, " +
+                           $"{string.Join(" + ", definition.Families.Select(f => f.Family))}, {definition.Folds}-fold, {s.LocalSlots} local slot(s)");
         if (console.Profile.Capabilities.Interactive && console.Profile.Capabilities.Ansi)
         {
-            await FollowLiveAsync(session, definition, cancellation);
+            live = new LiveBar(console, definition);
         }
-        else
+    }
+
+    private void Scored(TrialScored t)
+    {
+        if (live is not null)
         {
-            await FollowPlainAsync(session, definition, cancellation);
+            live.Update(t.Progress);
+            return;
         }
 
-        var end = session.Coordinator.Progress();
+        var trial = t.Trial;
+        var p = t.Progress;
+        // Plain lines go straight to the writer: no wrapping at a guessed width, one trial per line.
+        console.Profile.Out.Writer.WriteLine(
+            $"trial {trial.Id,4} {trial.Family,-9} rung {trial.Rung} {trial.Budget,4} rounds {trial.Score:F5} " +
+            $"{trial.Duration?.TotalSeconds,5:F1} s {trial.Worker}/{trial.Slot} | done {p.Done}{Of(p.TrialBudget)} running {p.Running} best {p.Best:F5} | " +
+            trial.Parameters.Describe(spaces.GetValueOrDefault(trial.Family)));
+    }
+
+    private void Stopped(SearchProgress end)
+    {
+        live?.Finish(end);
+        live = null;
         console.MarkupLine($"Search stopped ({Describe(end.Stopping)}): {end.Done} done, {end.Failed} failed, {end.Queued} left queued, " +
                            $"best {FormatBest(end)} after {TimeSpan.FromSeconds(end.SpentSeconds):hh\\:mm\\:ss}");
     }
 
-    private async Task FollowLiveAsync(CoordinatorSession session, SearchDefinition definition, CancellationToken cancellation)
-    {
-        await console.Progress()
-            .AutoClear(false)
-            .Columns(new TaskDescriptionColumn { Alignment = Justify.Left }, new ProgressBarColumn(), new PercentageColumn(), new ElapsedTimeColumn())
-            .StartAsync(async context =>
-            {
-                var task = context.AddTask("starting", maxValue: 1);
-                while (!session.Finished.IsCompleted)
-                {
-                    Update(task, session.Coordinator.Progress(), definition);
-                    await Task.WhenAny(session.Finished, Task.Delay(Refresh, cancellation));
-                    cancellation.ThrowIfCancellationRequested();
-                }
+    internal static string Of(int? budget) => budget is { } b ? $"/{b}" : "";
 
-                Update(task, session.Coordinator.Progress(), definition);
-                task.Value = task.MaxValue;
-            });
-    }
-
-    private async Task FollowPlainAsync(CoordinatorSession session, SearchDefinition definition, CancellationToken cancellation)
-    {
-        var spaces = definition.Families.ToDictionary(f => f.Family, f => f.Space);
-        void Line(TrialRecord trial)
-        {
-            var p = session.Coordinator.Progress();
-            // Plain lines go straight to the writer: no wrapping at a guessed width, one trial per line.
-            console.Profile.Out.Writer.WriteLine(
-                $"trial {trial.Id,4} {trial.Family,-9} rung {trial.Rung} {trial.Budget,4} rounds {trial.Score:F5} " +
-                $"{trial.Duration?.TotalSeconds,5:F1} s {trial.Worker}/{trial.Slot} | done {p.Done}{Of(p.TrialBudget)} running {p.Running} best {p.Best:F5} | " +
-                trial.Parameters.Describe(spaces.GetValueOrDefault(trial.Family)));
-        }
-
-        session.TrialFinished += Line;
-        try
-        {
-            await session.Finished.WaitAsync(cancellation);
-        }
-        finally
-        {
-            session.TrialFinished -= Line;
-        }
-    }
-
-    private static void Update(ProgressTask task, SearchProgress p, SearchDefinition definition)
-    {
-        if (p.TrialBudget is { } budget)
-        {
-            task.MaxValue = budget;
-            task.Value = p.Done + p.Failed;
-        }
-        else if (definition.Budget.Hours is { } hours)
-        {
-            task.MaxValue = hours * 3600;
-            task.Value = Math.Min(task.MaxValue, p.SpentSeconds);
-        }
-
-        task.Description = Markup.Escape($"done {p.Done}{Of(p.TrialBudget)} · running {p.Running} · failed {p.Failed} · best {FormatBest(p)}");
-    }
-
-    private static string Of(int? budget) => budget is { } b ? $"/{b}" : "";
-
-    private static string FormatBest(SearchProgress p) =>
+    internal static string FormatBest(SearchProgress p) =>
         p.BestByFamily.Count == 0 ? "–" : string.Join(", ", p.BestByFamily.OrderBy(kv => kv.Value).Select(kv => $"{kv.Value:F5} ({kv.Key})"));
 
     private static string Describe(StopReason? reason) => reason switch
@@ -102,4 +146,7 @@ public sealed class ProgressView(IAnsiConsole console)
         StopReason.Requested => "stopped by request",
         _ => "running",
     };
+
+    private static string DropCount(Core.Screening.ScreeningReport report, Core.Screening.DropReason reason, string what) =>
+        report.Count(reason) > 0 ? $", {report.Count(reason):N0} {what}" : "";
 }

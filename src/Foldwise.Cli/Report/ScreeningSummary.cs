@@ -27,6 +27,8 @@ public static class ScreeningSummary
             ("constant", report.Count(DropReason.Constant)),
             ("duplicate", report.Count(DropReason.Duplicate)),
             ("too few non-zero", report.Count(DropReason.TooFewNonZero)),
+            ("all missing", report.Count(DropReason.AllMissing)),
+            ("nearly unique text", report.Count(DropReason.NearlyUnique)),
         };
         var plot = new Plot();
         var plotted = plot.Add.Bars(outcomes.Select((o, i) => new Bar
@@ -50,6 +52,7 @@ public static class ScreeningSummary
         string more = report.Dropped.Length > NamesShown ? $"<p>… and {report.Dropped.Length - NamesShown:N0} more dropped columns (see the store's screening report).</p>" : "";
         string table = report.Dropped.Length == 0 ? "" :
             $"<table class=\"names\"><thead><tr><th>dropped column</th><th>why</th></tr></thead><tbody>{string.Concat(rows)}</tbody></table>{more}";
+        table += Inputs(report);
         return new ChartSection(
             Id,
             "Columns kept and dropped before any learner saw them",
@@ -58,10 +61,32 @@ public static class ScreeningSummary
             series.ToImmutable());
     }
 
+    /// <summary>Each kept category column (levels, encoding, gaps, new test levels) and each numeric column with gaps.</summary>
+    private static string Inputs(ScreeningReport report)
+    {
+        if (report.Categories.Length == 0 && report.Gaps.Length == 0)
+        {
+            return "";
+        }
+
+        var rows = report.Categories.Select(c =>
+                $"<tr><td>{WebUtility.HtmlEncode(c.Name)}</td><td>category: {c.Levels:N0} levels, {c.LevelsKept:N0} kept</td>" +
+                $"<td>{(c.Encoding == Core.Encodings.CategoryEncodingKind.Indicators ? "indicator per level" : "smoothed target mean (inner folds)")}</td>" +
+                $"<td>{c.MissingShare.ToString("P1", CultureInfo.InvariantCulture)}</td><td>{c.NewTestLevels:N0} in {c.NewTestRows:N0} rows</td></tr>")
+            .Concat(report.Gaps.Take(NamesShown).Select(g =>
+                $"<tr><td>{WebUtility.HtmlEncode(g.Name)}</td><td>numeric</td><td>missing kept; median + indicator for families without NaN</td>" +
+                $"<td>{g.MissingShare.ToString("P1", CultureInfo.InvariantCulture)}</td><td></td></tr>"));
+        string more = report.Gaps.Length > NamesShown ? $"<p>… and {report.Gaps.Length - NamesShown:N0} more numeric columns with gaps.</p>" : "";
+        return "<table class=\"names\"><thead><tr><th>column</th><th>kind</th><th>encoding (fitted inside each fold)</th><th>missing</th><th>new test levels</th></tr></thead>" +
+            $"<tbody>{string.Concat(rows)}</tbody></table>{more}";
+    }
+
     private static string Reason(DroppedColumn d) => d.Reason switch
     {
         DropReason.Constant => "constant",
         DropReason.Duplicate => "repeats " + WebUtility.HtmlEncode(d.SameAs ?? "an earlier column"),
+        DropReason.AllMissing => "every cell missing",
+        DropReason.NearlyUnique => "nearly every level unique (free text or an id)",
         _ => "too few non-zero cells",
     };
 }

@@ -41,7 +41,7 @@ public sealed record StoredSearch(
     {
         ArgumentNullException.ThrowIfNull(store);
         var header = store.LoadHeader() ?? throw new StoreException($"{store.FilePath} holds no search yet (no header).");
-        return (header, DefinitionReader.ParseStored(header.DefinitionJson, store.FilePath, Path.GetDirectoryName(store.FilePath)!));
+        return (header, header.Definition);
     }
 
     /// <summary>The space a family's trials were drawn from, or null for a family the definition does not name.</summary>

@@ -10,6 +10,7 @@ namespace Foldwise.Cli.Running;
 public sealed class StopSignal : IDisposable
 {
     private readonly IAnsiConsole console;
+    private readonly CancellationTokenSource stop = new();
     private readonly CancellationTokenSource abandon = new();
     private readonly PosixSignalRegistration? terminate;
     private int presses;
@@ -25,7 +26,7 @@ public sealed class StopSignal : IDisposable
         });
     }
 
-    public event Action? StopRequested;
+    public CancellationToken Stop => stop.Token;
 
     public CancellationToken Abandon => abandon.Token;
 
@@ -33,6 +34,7 @@ public sealed class StopSignal : IDisposable
     {
         Console.CancelKeyPress -= OnCancel;
         terminate?.Dispose();
+        stop.Dispose();
         abandon.Dispose();
     }
 
@@ -42,7 +44,7 @@ public sealed class StopSignal : IDisposable
         if (Interlocked.Increment(ref presses) == 1)
         {
             // Stop first, then print: a slot asking for work meanwhile must already be refused.
-            StopRequested?.Invoke();
+            stop.Cancel();
             console.MarkupLine("[yellow]Stopping: no new trials; running ones finish, then the blend runs. Ctrl-C again to abandon them.[/]");
         }
         else

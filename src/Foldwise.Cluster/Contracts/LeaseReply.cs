@@ -1,6 +1,9 @@
 namespace Foldwise.Cluster.Contracts;
 
-/// <summary>A leased trial as a slot needs it: a family name and parameter values (never code), a budget, a seed, and how often to renew.</summary>
+/// <summary>
+/// A leased trial as a slot needs it: a family name and parameter values (never code), a budget, a seed, how often to
+/// renew, and the search's trace context (W3C <c>traceparent</c>, null when the coordinator traces nothing).
+/// </summary>
 [GenerateSerializer, Immutable, Alias("Foldwise.LeaseReply")]
 public sealed record LeaseReply(
     [property: Id(0)] LeaseStatus Status,
@@ -10,7 +13,8 @@ public sealed record LeaseReply(
     [property: Id(4)] Dictionary<string, double> Parameters,
     [property: Id(5)] int Budget,
     [property: Id(6)] int Seed,
-    [property: Id(7)] TimeSpan LeaseDuration)
+    [property: Id(7)] TimeSpan LeaseDuration,
+    [property: Id(8)] string? TraceParent = null)
 {
     public static LeaseReply Waiting { get; } = new(LeaseStatus.Wait, 0, 0, "", [], 0, 0, TimeSpan.Zero);
 

@@ -1,5 +1,7 @@
+using System.Diagnostics;
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Telemetry;
+using Foldwise.Core.Events;
 using Foldwise.Core.Search;
 
 namespace Foldwise.Cluster.Coordination;
@@ -13,15 +15,18 @@ public sealed class CoordinatorSession
     private readonly ISearchRecorder recorder;
     private readonly TaskCompletionSource finished = new(TaskCreationOptions.RunContinuationsAsynchronously);
     private readonly object gate = new();
-    private readonly SearchSpan span;
+    private readonly IProgress<SearchEvent> events;
+    private readonly string? traceParent;
 
-    public CoordinatorSession(SearchManifest manifest, SearchCoordinator coordinator, ISearchRecorder recorder)
+    /// <param name="events">Receives trials started, promoted, scored and failed, on the threads that decide them. Default: none.</param>
+    /// <param name="search">The search's span: every lease carries it, so each trial's span, on whichever machine, is its child. Default: none.</param>
+    public CoordinatorSession(SearchManifest manifest, SearchCoordinator coordinator, ISearchRecorder recorder, IProgress<SearchEvent>? events = null, ActivityContext search = default)
     {
         Manifest = manifest;
         Coordinator = coordinator;
         this.recorder = recorder;
-        span = new SearchSpan(manifest.SearchId, coordinator.Definition.Name);
-        FoldwiseMetrics.Track(this);
+        this.events = events ?? NoEvents.Instance;
+        traceParent = search == default ? null : TraceParent.Of(search);
     }
 
     public string SearchId => Manifest.SearchId;
@@ -33,12 +38,19 @@ public sealed class CoordinatorSession
     /// <summary>Completes once the search has stopped creating trials and none is running.</summary>
     public Task Finished => finished.Task;
 
-    /// <summary>Raised after a trial's result is committed (for progress lines).</summary>
-    public event Action<TrialRecord>? TrialFinished;
-
     public LeaseReply Lease(string worker, string slot)
     {
         var grant = Coordinator.Lease(worker, slot);
+        if (grant.Kind == LeaseKind.Granted)
+        {
+            if (grant.Trial!.ParentId is not null && grant.Trial.Attempt == 1)
+            {
+                events.Report(new CandidatePromoted(SearchId, grant.Trial));
+            }
+
+            events.Report(new TrialStarted(SearchId, grant.Trial));
+        }
+
         CheckFinished();
         return grant.Kind switch
         {
@@ -50,7 +62,8 @@ public sealed class CoordinatorSession
                 grant.Run!.Values.ToDictionary(),
                 grant.Trial.Budget,
                 grant.Seed,
-                grant.Trial.LeaseExpires!.Value - grant.Trial.Started!.Value),
+                grant.Trial.LeaseExpires!.Value - grant.Trial.Started!.Value,
+                traceParent),
             LeaseKind.Wait => LeaseReply.Waiting,
             _ => LeaseReply.Done,
         };
@@ -72,7 +85,7 @@ public sealed class CoordinatorSession
             bool accepted = Coordinator.Complete(report.TrialId, report.Attempt, report.Score, [.. report.FoldScores]);
             if (accepted)
             {
-                TrialFinished?.Invoke(Coordinator.Trial(report.TrialId)!);
+                events.Report(new TrialScored(SearchId, Coordinator.Trial(report.TrialId)!, Coordinator.Progress()));
             }
 
             CheckFinished();
@@ -83,6 +96,11 @@ public sealed class CoordinatorSession
     public bool Release(int trialId, int attempt, string reason, bool interrupted)
     {
         bool released = Coordinator.Release(trialId, attempt, reason, interrupted);
+        if (released && Coordinator.Trial(trialId) is { State: TrialState.Failed } failed)
+        {
+            events.Report(new TrialFailed(SearchId, failed, Coordinator.Progress()));
+        }
+
         CheckFinished();
         return released;
     }
@@ -102,8 +120,18 @@ public sealed class CoordinatorSession
     /// <summary>Called about once a second: expires lost leases and records the time spent.</summary>
     public void Tick()
     {
+        int failedBefore = Coordinator.Progress().Failed;
         Coordinator.ExpireLeases();
         var progress = Coordinator.Progress();
+        if (progress.Failed > failedBefore)
+        {
+            // A trial whose last allowed attempt expired: the newest failures are the ones this tick caused.
+            foreach (var failed in Coordinator.Trials().Where(t => t.State == TrialState.Failed).OrderByDescending(t => t.Finished ?? t.Created).Take(progress.Failed - failedBefore))
+            {
+                events.Report(new TrialFailed(SearchId, failed, progress));
+            }
+        }
+
         recorder.UpdateSpent(progress.SpentSeconds, finished: false);
         CheckFinished();
     }
@@ -113,7 +141,6 @@ public sealed class CoordinatorSession
         var progress = Coordinator.Progress();
         if (progress.Finished)
         {
-            span.End(progress);
             finished.TrySetResult();
         }
     }

@@ -2,15 +2,16 @@ using System.Collections.Concurrent;
 
 namespace Foldwise.Cluster.Coordination;
 
-/// <summary>The encoded tables the coordinator serves to workers, by content hash.</summary>
+/// <summary>The encoded table files the coordinator serves to workers, by content hash.</summary>
 public sealed class DatasetShelf
 {
-    private readonly ConcurrentDictionary<string, byte[]> tables = new();
+    private readonly ConcurrentDictionary<string, ShelvedTable> tables = new();
 
-    public void Put(string hash, byte[] encoded) => tables[hash] = encoded;
+    /// <summary>Serves the table file at <paramref name="path"/> under its hash, after checking it holds that table.</summary>
+    public void Put(string hash, string path) => tables[hash] = ShelvedTable.Open(hash, path);
 
-    public byte[] Get(string hash) =>
-        tables.TryGetValue(hash, out var bytes)
-            ? bytes
+    public ShelvedTable Get(string hash) =>
+        tables.TryGetValue(hash, out var table)
+            ? table
             : throw new InvalidOperationException($"table {hash} is not served by this coordinator");
 }

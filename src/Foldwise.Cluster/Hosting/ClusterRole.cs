@@ -32,4 +32,7 @@ public sealed class ClusterRole
 
     /// <summary>The cluster certificate; when set, silos talk only over mutual TLS with peers holding it.</summary>
     public X509Certificate2? Certificate { get; init; }
+
+    /// <summary>Log information messages too, not only warnings and errors. The default is <c>false</c>.</summary>
+    public bool Verbose { get; init; }
 }

@@ -2,7 +2,9 @@ using System.Net;
 using System.Security.Cryptography.X509Certificates;
 using Foldwise.Cluster.Coordination;
 using Foldwise.Cluster.Grains;
+using Foldwise.Cluster.Telemetry;
 using Foldwise.Cluster.Workers;
+using Foldwise.Core.Events;
 using Foldwise.Core.Learning;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.DependencyInjection.Extensions;
@@ -87,20 +89,28 @@ public static class FoldwiseSiloExtensions
         services.TryAddSingleton(TimeProvider.System);
         services.AddSingleton<SessionRegistry>();
         services.AddSingleton<DatasetShelf>();
+        services.AddMetrics();
+        services.TryAddSingleton<FoldwiseMetrics>();
         services.AddHostedService<SessionTicker>();
         return services;
     }
 
-    /// <summary>The worker role: slots that pull leases, with a table cache and the built-in families.</summary>
-    public static IServiceCollection AddFoldwiseWorker(this IServiceCollection services, WorkerOptions options, ILearnerCatalog learners)
+    /// <summary>
+    /// The worker role: slots that pull leases, with a table cache and the built-in families. The slots report what
+    /// they do to <paramref name="events"/> (default: nobody).
+    /// </summary>
+    public static IServiceCollection AddFoldwiseWorker(this IServiceCollection services, WorkerOptions options, ILearnerCatalog learners, IProgress<SearchEvent>? events = null)
     {
         options.Validate();
         services.TryAddSingleton(TimeProvider.System);
+        services.AddSingleton(events ?? NoEvents.Instance);
         services.AddSingleton(options);
         services.AddSingleton(learners);
         services.AddSingleton<TableCache>();
         services.AddSingleton<TrialDataCache>();
         services.AddSingleton<SlotStatistics>();
+        services.AddMetrics();
+        services.TryAddSingleton<FoldwiseMetrics>();
         services.AddHostedService<SlotPump>();
         return services;
     }

@@ -1,5 +1,4 @@
 using System.Diagnostics;
-using System.Diagnostics.Metrics;
 
 namespace Foldwise.Cluster.Telemetry;
 
@@ -18,6 +17,11 @@ public static class FoldwiseTelemetry
     public const string FoldSpan = "foldwise.fold";
     public const string BlendSpan = "foldwise.blend";
 
+    /// <summary>Attribute names, namespaced as OpenTelemetry's naming conventions ask of a project's own attributes.</summary>
+    public const string SearchTag = "foldwise.search";
+    public const string FamilyTag = "foldwise.family";
+    public const string OutcomeTag = "foldwise.outcome";
+
     public const string TrialsDone = "foldwise.trials.done";
     public const string TrialDuration = "foldwise.trial.duration";
     public const string BusySlots = "foldwise.slots.busy";
@@ -27,7 +31,8 @@ public static class FoldwiseTelemetry
     /// <summary>Trial durations in seconds, from sub-second rungs to hour-long full-budget fits (common practice: roughly ×2–3 steps).</summary>
     public static readonly double[] DurationBuckets = [0.25, 0.5, 1, 2, 5, 10, 20, 30, 60, 120, 300, 600, 1200, 1800, 3600];
 
-    public static readonly ActivitySource Source = new(Name, typeof(FoldwiseTelemetry).Assembly.GetName().Version?.ToString());
+    public static readonly string? Version = typeof(FoldwiseTelemetry).Assembly.GetName().Version?.ToString();
 
-    public static readonly Meter Meter = new(Name, typeof(FoldwiseTelemetry).Assembly.GetName().Version?.ToString());
+    /// <summary>Spans are started on this one source; the meters are created per host (<see cref="FoldwiseMetrics"/>).</summary>
+    public static readonly ActivitySource Source = new(Name, Version);
 }

@@ -1,3 +1,5 @@
+using Foldwise.Cluster.Telemetry;
+using Foldwise.Core.Events;
 using Foldwise.Core.Learning;
 using Microsoft.Extensions.Hosting;
 using Microsoft.Extensions.Logging;
@@ -12,12 +14,14 @@ public sealed class SlotPump(
     WorkerOptions options,
     SlotStatistics statistics,
     TimeProvider time,
+    FoldwiseMetrics metrics,
+    IProgress<SearchEvent> events,
     ILoggerFactory loggers) : BackgroundService
 {
     protected override Task ExecuteAsync(CancellationToken stoppingToken)
     {
         var logger = loggers.CreateLogger<SlotRunner>();
         return Task.WhenAll(Enumerable.Range(0, options.Slots).Select(i =>
-            new SlotRunner(i.ToString(), grains, data, learners, options, statistics, time, logger).RunAsync(stoppingToken)));
+            new SlotRunner(i.ToString(), grains, data, learners, options, statistics, time, metrics, events, logger).RunAsync(stoppingToken)));
     }
 }

@@ -1,6 +1,7 @@
 using System.Diagnostics;
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Telemetry;
+using Foldwise.Core.Events;
 using Foldwise.Core.Learning;
 using Foldwise.Core.Spaces;
 using Microsoft.Extensions.Logging;
@@ -19,6 +20,8 @@ public sealed partial class SlotRunner(
     WorkerOptions options,
     SlotStatistics statistics,
     TimeProvider time,
+    FoldwiseMetrics metrics,
+    IProgress<SearchEvent> events,
     ILogger logger)
 {
     private static readonly TimeSpan MaxBackoff = TimeSpan.FromSeconds(5);
@@ -45,6 +48,7 @@ public sealed partial class SlotRunner(
             {
                 // The coordinator may be restarting or unreachable: wait and ask again.
                 LogCoordinatorUnreachable(slot, e.Message.Split('\n')[0].Trim());
+                events.Report(new SlotCoordinatorUnreachable(options.Name, slot, e.Message.Split('\n')[0].Trim()));
                 await DelayQuietly(backoff, stopping);
                 backoff = TimeSpan.FromTicks(Math.Min(MaxBackoff.Ticks, backoff.Ticks * 2));
             }
@@ -76,10 +80,10 @@ public sealed partial class SlotRunner(
         using var abandon = CancellationTokenSource.CreateLinkedTokenSource(stopping);
         var renewing = RenewAsync(search, lease, abandon);
         var clock = Stopwatch.StartNew();
-        using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.TrialSpan, ActivityKind.Consumer);
-        span?.SetTag("foldwise.search", searchId).SetTag("foldwise.trial", lease.TrialId).SetTag("foldwise.attempt", lease.Attempt)
-            .SetTag("foldwise.family", lease.Family).SetTag("foldwise.budget", lease.Budget).SetTag("foldwise.worker", options.Name).SetTag("foldwise.slot", slot);
-        FoldwiseMetrics.SlotBusy();
+        using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.TrialSpan, ActivityKind.Consumer, TraceParent.Parse(lease.TraceParent));
+        span?.SetTag(FoldwiseTelemetry.SearchTag, searchId).SetTag("foldwise.trial", lease.TrialId).SetTag("foldwise.attempt", lease.Attempt)
+            .SetTag(FoldwiseTelemetry.FamilyTag, lease.Family).SetTag("foldwise.budget", lease.Budget).SetTag("foldwise.worker", options.Name).SetTag("foldwise.slot", slot);
+        metrics.SlotBusy();
         string ending = "lost";
         try
         {
@@ -100,6 +104,7 @@ public sealed partial class SlotRunner(
             ending = "scored";
             span?.SetTag("foldwise.score", outcome.Score).SetTag("foldwise.accepted", accepted);
             LogTrialDone(slot, lease.TrialId, lease.Attempt, outcome.Score, clock.Elapsed.TotalSeconds, accepted);
+            events.Report(new SlotTrialScored(options.Name, slot, lease.TrialId, lease.Attempt, outcome.Score, clock.Elapsed, accepted));
         }
         catch (OperationCanceledException) when (stopping.IsCancellationRequested)
         {
@@ -111,19 +116,21 @@ public sealed partial class SlotRunner(
         {
             // The lease was lost (renewal refused): another attempt owns the trial now.
             LogLeaseLost(slot, lease.TrialId, lease.Attempt);
+            events.Report(new SlotLeaseLost(options.Name, slot, lease.TrialId, lease.Attempt));
         }
         catch (Exception e) when (e is ArgumentException or InvalidOperationException or IOException or OutOfMemoryException)
         {
             LogTrialFailed(slot, lease.TrialId, e.Message);
+            events.Report(new SlotTrialFailed(options.Name, slot, lease.TrialId, lease.Attempt, e.Message));
             ending = "failed";
             span?.SetStatus(ActivityStatusCode.Error, e.Message);
             await ReleaseQuietly(search, lease, $"{e.GetType().Name}: {e.Message}", interrupted: false);
         }
         finally
         {
-            FoldwiseMetrics.SlotIdle();
-            FoldwiseMetrics.TrialEnded(lease.Family, ending, clock.Elapsed.TotalSeconds);
-            span?.SetTag("foldwise.outcome", ending);
+            metrics.SlotIdle();
+            metrics.TrialEnded(lease.Family, ending, clock.Elapsed.TotalSeconds);
+            span?.SetTag(FoldwiseTelemetry.OutcomeTag, ending);
             await abandon.CancelAsync();
             await renewing;
         }

@@ -6,12 +6,12 @@ using Foldwise.Core.Data;
 namespace Foldwise.Cluster.Workers;
 
 /// <summary>
-/// Tables by content hash: in memory, then on local disk, then fetched from the coordinator in chunks.
-/// Every fetched or cached byte string is checked against its hash before it is decoded.
+/// Tables by content hash: in memory, then on local disk, then fetched from the coordinator chunk by chunk
+/// straight into the disk cache (<see cref="TableDownload"/>). Every fetched or cached file is checked against
+/// its hash before it is decoded, and decoded from the file, never held as one array of bytes.
 /// </summary>
 public sealed class TableCache(IGrainFactory grains, WorkerOptions options)
 {
-    private const int ChunkSize = 4 << 20;
     private readonly ConcurrentDictionary<string, Lazy<Task<FeatureTable>>> tables = new();
 
     /// <summary>Tables fetched over the network since start (a later search on the same table fetches nothing).</summary>
@@ -39,50 +39,41 @@ public sealed class TableCache(IGrainFactory grains, WorkerOptions options)
         string path = Path.Combine(options.CacheDirectory, hash + ".fwt");
         if (File.Exists(path))
         {
-            var cached = await File.ReadAllBytesAsync(path, cancellation);
-            if (Matches(cached, hash))
+            if (await HashOfFileAsync(path, cancellation) == hash)
             {
-                return TableCodec.Decode(cached, path);
+                return Decode(path);
             }
 
             File.Delete(path);
         }
 
-        var bytes = await FetchAsync(hash, cancellation);
         Directory.CreateDirectory(options.CacheDirectory);
         string partial = path + "." + Environment.ProcessId + ".part";
-        await File.WriteAllBytesAsync(partial, bytes, cancellation);
-        File.Move(partial, path, overwrite: true);
-        return TableCodec.Decode(bytes, path);
-    }
-
-    private async Task<byte[]> FetchAsync(string hash, CancellationToken cancellation)
-    {
-        var dataset = grains.GetGrain<IDatasetGrain>(hash);
-        long length = await dataset.LengthAsync();
-        var bytes = new byte[length];
-        for (long offset = 0; offset < length;)
+        try
         {
-            cancellation.ThrowIfCancellationRequested();
-            var chunk = await dataset.ChunkAsync(offset, ChunkSize);
-            if (chunk.Length == 0)
-            {
-                throw new IOException($"table {hash} ended early at byte {offset} of {length}");
-            }
-
-            chunk.CopyTo(bytes, offset);
-            offset += chunk.Length;
+            var dataset = grains.GetGrain<IDatasetGrain>(hash);
+            var listing = await dataset.ListingAsync();
+            await TableDownload.ToFileAsync(hash, listing, dataset.ChunkAsync, partial, cancellation);
+            File.Move(partial, path, overwrite: true);
         }
-
-        if (!Matches(bytes, hash))
+        finally
         {
-            throw new IOException($"table {hash} arrived with a different hash; refusing it");
+            File.Delete(partial);
         }
 
         Fetches++;
-        return bytes;
+        return Decode(path);
     }
 
-    private static bool Matches(byte[] bytes, string hash) =>
-        Convert.ToHexStringLower(SHA256.HashData(bytes)) == hash;
+    private static FeatureTable Decode(string path)
+    {
+        using var file = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, bufferSize: 1 << 16);
+        return TableCodec.Decode(file, path);
+    }
+
+    private static async Task<string> HashOfFileAsync(string path, CancellationToken cancellation)
+    {
+        await using var file = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, bufferSize: 1 << 16);
+        return Convert.ToHexStringLower(await SHA256.HashDataAsync(file, cancellation));
+    }
 }

@@ -4,7 +4,8 @@ namespace Foldwise.Core.Data;
 
 /// <summary>
 /// A loaded table: row ids, named float features stored column-wise and sparsely
-/// (mostly-zero tables stay small), and the target on the original scale when the table has one.
+/// (mostly-zero tables stay small; a missing cell is a stored NaN), named category columns beside them,
+/// and the target on the original scale when the table has one.
 /// </summary>
 public sealed class FeatureTable
 {
@@ -13,8 +14,17 @@ public sealed class FeatureTable
         ImmutableArray<string> ids,
         ImmutableArray<string> featureNames,
         ImmutableArray<SparseColumn> columns,
-        ImmutableArray<double> target)
+        ImmutableArray<double> target,
+        ImmutableArray<string> categoryNames = default,
+        ImmutableArray<CategoryColumn> categories = default)
     {
+        categoryNames = categoryNames.IsDefault ? [] : categoryNames;
+        categories = categories.IsDefault ? [] : categories;
+        if (categoryNames.Length != categories.Length || categories.Any(c => c.Codes.Length != ids.Length))
+        {
+            throw new ArgumentException("every category name needs exactly one column of one code per row", nameof(categories));
+        }
+
         if (featureNames.Length != columns.Length)
         {
             throw new ArgumentException("every feature needs exactly one column", nameof(columns));
@@ -30,6 +40,8 @@ public sealed class FeatureTable
         FeatureNames = featureNames;
         Columns = columns;
         Target = target.IsDefault ? [] : target;
+        CategoryNames = categoryNames;
+        Categories = categories;
     }
 
     /// <summary>Where the table came from (a file path), for error messages.</summary>
@@ -40,6 +52,11 @@ public sealed class FeatureTable
     public ImmutableArray<string> FeatureNames { get; }
 
     public ImmutableArray<SparseColumn> Columns { get; }
+
+    /// <summary>Category columns by name, beside the numeric features; encoded inside each fold.</summary>
+    public ImmutableArray<string> CategoryNames { get; }
+
+    public ImmutableArray<CategoryColumn> Categories { get; }
 
     /// <summary>The target on the original scale; empty for a table without one (a test table).</summary>
     public ImmutableArray<double> Target { get; }
@@ -60,13 +77,25 @@ public sealed class FeatureTable
         }
     }
 
-    /// <summary>The same rows with only the given columns, in the given order.</summary>
+    /// <summary>The same rows with only the given numeric columns, in the given order; category columns unchanged.</summary>
     public FeatureTable WithColumns(IReadOnlyList<int> columnIndices) => new(
         Source,
         Ids,
         [.. columnIndices.Select(i => FeatureNames[i])],
         [.. columnIndices.Select(i => Columns[i])],
-        Target);
+        Target,
+        CategoryNames,
+        Categories);
+
+    /// <summary>The same rows with only the given category columns, in the given order; numeric columns unchanged.</summary>
+    public FeatureTable WithCategories(IReadOnlyList<int> categoryIndices) => new(
+        Source,
+        Ids,
+        FeatureNames,
+        Columns,
+        Target,
+        [.. categoryIndices.Select(i => CategoryNames[i])],
+        [.. categoryIndices.Select(i => Categories[i])]);
 
     /// <summary>The features row by row, the form learners read.</summary>
     public SparseRowMatrix ToRows() => SparseRowMatrix.FromColumns(RowCount, Columns);

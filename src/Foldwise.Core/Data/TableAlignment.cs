@@ -4,7 +4,7 @@ namespace Foldwise.Core.Data;
 public static class TableAlignment
 {
     /// <summary>
-    /// The test table with exactly the training features, in training order. A training feature the test
+    /// The test table with exactly the training features and category columns, in training order. A training feature the test
     /// table lacks is an <see cref="InputException"/> naming the test file; extra test columns are dropped
     /// and listed, in test-file order.
     /// </summary>
@@ -27,8 +27,25 @@ public static class TableAlignment
                 : throw new InputException(test.Source, $"the test table has no column '{name}', which the training table has");
         }
 
+        var categoryOf = new Dictionary<string, int>(test.CategoryNames.Length, StringComparer.Ordinal);
+        for (int i = 0; i < test.CategoryNames.Length; i++)
+        {
+            categoryOf.TryAdd(test.CategoryNames[i], i);
+        }
+
+        var pickedCategories = new int[train.CategoryNames.Length];
+        for (int c = 0; c < pickedCategories.Length; c++)
+        {
+            string name = train.CategoryNames[c];
+            pickedCategories[c] = categoryOf.TryGetValue(name, out int at)
+                ? at
+                : throw new InputException(test.Source, $"the test table has no category column '{name}', which the training table has");
+        }
+
         var used = new HashSet<int>(picked);
-        var extra = Enumerable.Range(0, test.FeatureCount).Where(i => !used.Contains(i)).Select(i => test.FeatureNames[i]);
-        return new AlignedTest(test.WithColumns(picked), [.. extra]);
+        var usedCategories = new HashSet<int>(pickedCategories);
+        var extra = Enumerable.Range(0, test.FeatureCount).Where(i => !used.Contains(i)).Select(i => test.FeatureNames[i])
+            .Concat(Enumerable.Range(0, test.CategoryNames.Length).Where(i => !usedCategories.Contains(i)).Select(i => test.CategoryNames[i]));
+        return new AlignedTest(test.WithColumns(picked).WithCategories(pickedCategories), [.. extra]);
     }
 }

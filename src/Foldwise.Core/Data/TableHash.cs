@@ -8,7 +8,7 @@ namespace Foldwise.Core.Data;
 /// </summary>
 public static class TableHash
 {
-    public static string Of(FeatureTable table) => Of(TableCodec.Encode(table));
+    public static string Of(FeatureTable table) => TableCodec.Encode(table, Stream.Null);
 
     /// <summary>The hash of bytes already encoded, for callers that keep the encoding anyway.</summary>
     public static string Of(ReadOnlySpan<byte> encoded) => Convert.ToHexStringLower(SHA256.HashData(encoded));

@@ -125,9 +125,48 @@ public static class DefinitionReader
         string test = Absolute("test");
         string id = check.Text(check.Require(data, "id").Value);
         var target = check.Require(data, "target").Value;
-        return check.Text(target) == id
-            ? throw check.Fail(target, $"'data.target' must differ from 'data.id', both are \"{id}\"")
-            : new DataSource(train, test, id, target.Text!);
+        if (check.Text(target) == id)
+        {
+            throw check.Fail(target, $"'data.target' must differ from 'data.id', both are \"{id}\"");
+        }
+
+        System.Collections.Immutable.ImmutableArray<string>? missing = data.Get("missing") is { } m ? Texts(check, m.Value, allowEmpty: true) : null;
+        var categories = data.Get("categories") is { } c ? Texts(check, c.Value, allowEmpty: false) : [];
+        var ignored = data.Get("ignore") is { } i ? Texts(check, i.Value, allowEmpty: false) : [];
+        foreach (string name in categories.Intersect(ignored, StringComparer.Ordinal))
+        {
+            throw check.Fail(data.Get("ignore")!.Value, $"'data.ignore' names '{name}', which 'data.categories' lists too");
+        }
+
+        var rules = new TableRules(missing ?? TableRules.DefaultMissingWords, missing is not null, categories, ignored);
+        return new DataSource(train, test, id, target.Text!) { Rules = rules };
+    }
+
+    private static System.Collections.Immutable.ImmutableArray<string> Texts(DefinitionCheck check, DefinitionNode node, bool allowEmpty)
+    {
+        if (node.Kind != System.Text.Json.JsonValueKind.Array)
+        {
+            throw check.Fail(node, $"{DefinitionCheck.Label(node)} must be a list of texts, got {node.Describe()}");
+        }
+
+        var texts = new List<string>();
+        foreach (var item in node.Items)
+        {
+            string text = check.Text(item);
+            if (!allowEmpty && text.Length == 0)
+            {
+                throw check.Fail(item, $"{DefinitionCheck.Label(node)} holds an empty name");
+            }
+
+            if (texts.Contains(text, StringComparer.Ordinal))
+            {
+                throw check.Fail(item, $"{DefinitionCheck.Label(node)} names \"{text}\" twice");
+            }
+
+            texts.Add(text);
+        }
+
+        return [.. texts];
     }
 
     private static SearchBudget Budget(DefinitionCheck check, DefinitionNode node)

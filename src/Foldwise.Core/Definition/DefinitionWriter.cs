@@ -34,6 +34,21 @@ public static class DefinitionWriter
                 json.WriteString("test", definition.Data.Test);
                 json.WriteString("id", definition.Data.IdColumn);
                 json.WriteString("target", definition.Data.TargetColumn);
+                var rules = definition.Data.Rules;
+                if (rules.MissingWordsStated)
+                {
+                    Texts(json, "missing", rules.MissingWords);
+                }
+
+                if (rules.Categories.Length > 0)
+                {
+                    Texts(json, "categories", rules.Categories);
+                }
+
+                if (rules.Ignored.Length > 0)
+                {
+                    Texts(json, "ignore", rules.Ignored);
+                }
             });
             json.WriteString("metric", DefinitionNames.Metrics.NameOf(definition.Metric));
             json.WriteNumber("folds", definition.Folds);
@@ -110,4 +125,15 @@ public static class DefinitionWriter
 
     // "R" is the shortest text that parses back to the same double, e.g. 0.01, 1E-05; JSON accepts both forms.
     private static string Number(double value) => value.ToString("R", CultureInfo.InvariantCulture);
+
+    private static void Texts(Utf8JsonWriter json, string key, IEnumerable<string> texts)
+    {
+        json.WriteStartArray(key);
+        foreach (string text in texts)
+        {
+            json.WriteStringValue(text);
+        }
+
+        json.WriteEndArray();
+    }
 }

@@ -1,15 +1,27 @@
+using System.Collections.Immutable;
 using Foldwise.Core.Data;
+using Foldwise.Core.Encodings;
 using Foldwise.Core.Folds;
 using Foldwise.Core.Metrics;
 
 namespace Foldwise.Core.Learning;
 
 /// <summary>
-/// What every trial of a search reads: the screened training and test features row by row,
-/// the target already on the fitting scale, the fold plan and the metric. Built once per worker and search.
+/// What every trial of a search reads: the screened training and test features row by row (missing cells NaN),
+/// the target already on the fitting scale, the fold plan, the metric, and the category columns that each fold
+/// encodes on its own training rows. Built once per worker and search.
 /// </summary>
-public sealed record TrialData(SparseRowMatrix Train, double[] Target, SparseRowMatrix Test, FoldPlan Folds, Metric Metric)
+public sealed record TrialData(
+    SparseRowMatrix Train,
+    double[] Target,
+    SparseRowMatrix Test,
+    FoldPlan Folds,
+    Metric Metric,
+    ImmutableArray<TrialCategory> Categories = default)
 {
     public static TrialData From(FeatureTable train, FeatureTable test, FoldPlan folds, Metric metric) =>
-        new(train.ToRows(), [.. train.Target.Select(metric.Forward)], test.ToRows(), folds, metric);
+        new(train.ToRows(), [.. train.Target.Select(metric.Forward)], test.ToRows(), folds, metric, TrialCategories.From(train, test, EncodingOptions.Default));
+
+    /// <summary>One fold's learner inputs, encoded from that fold's training rows only.</summary>
+    public FoldInputs InputsFor(ImmutableArray<int> trainRows, int seed) => FoldEncoder.Prepare(this, trainRows, seed, EncodingOptions.Default);
 }

@@ -1,10 +1,11 @@
 using System.Collections.Immutable;
+using Foldwise.Core.Search;
 using Foldwise.Core.Spaces;
 
 namespace Foldwise.Core.Learning;
 
 /// <summary>
-/// Runs one trial: fits every fold of the plan in turn, pools the out-of-fold predictions and
+/// Runs one trial: encodes each fold's inputs from its training rows, fits every fold of the plan in turn, pools the out-of-fold predictions and
 /// averages the fold models' test predictions (DESIGN: test prediction = mean over fold models).
 /// </summary>
 public sealed class TrialExecutor(IFoldLearner learner)
@@ -24,7 +25,9 @@ public sealed class TrialExecutor(IFoldLearner learner)
         {
             cancellation.ThrowIfCancellationRequested();
             var validation = folds.ValidationRows(f);
-            var job = new FoldJob(data, f, folds.TrainRows(f), validation, parameters, budget, seed + (1000 * f), threads);
+            var trainRows = folds.TrainRows(f);
+            int foldSeed = SearchSeeds.Fold(seed, f);
+            var job = new FoldJob(data, f, trainRows, validation, parameters, budget, foldSeed, threads, data.InputsFor(trainRows, foldSeed));
             var prediction = learner.Fit(job, cancellation);
             if (prediction.Validation.Length != validation.Length || prediction.Test.Length != test.Length)
             {

@@ -76,7 +76,7 @@ internal sealed class CandidateSource
     public TrialPlan NewCandidate(int family, int budget, int bracket = 0, int rung = 0)
     {
         var history = _families[family];
-        var proposal = _proposer.Propose(history, ProposalSeeds.For(_seed, family, history.NewCandidates));
+        var proposal = _proposer.Propose(history, new SearchSeeds(_seed).Proposal(family, history.NewCandidates));
         return new TrialPlan(history.Family, proposal.Parameters, budget, rung, ParentId: null, proposal.Proposer, bracket);
     }
 }

@@ -9,6 +9,12 @@ public enum DropReason
     /// <summary>Its cells equal an earlier kept column's, cell for cell.</summary>
     Duplicate,
 
-    /// <summary>Fewer non-zero training cells than the screening minimum.</summary>
+    /// <summary>Fewer non-zero training cells than the screening minimum (missing cells do not count).</summary>
     TooFewNonZero,
+
+    /// <summary>Every training cell is missing.</summary>
+    AllMissing,
+
+    /// <summary>A category column whose levels are nearly all unique (free text or an id in disguise).</summary>
+    NearlyUnique,
 }

@@ -392,7 +392,7 @@ public sealed class SearchCoordinator
             root = up;
         }
 
-        return unchecked((definition.Seed * 100_003) + (root.Id * 7919));
+        return new SearchSeeds(definition.Seed).Trial(root.Id);
     }
 
     private double SpentSecondsLocked(DateTimeOffset now) => spentBefore + (now - sessionStart).TotalSeconds;

@@ -1,18 +1,20 @@
 using System.Collections.Immutable;
+using Foldwise.Core.Definition;
 using Foldwise.Core.Folds;
 
 namespace Foldwise.Core.Search;
 
 /// <summary>
 /// The search-level facts the store keeps so that resume, blend and export need nothing else:
-/// the definition (as its JSON text), the fold plan, the screened tables' content hashes, the row ids
+/// the definition, the fold plan, the screened tables' content hashes, the row ids
 /// of both tables, the training target on the original scale, and the wall-clock time spent so far.
 /// </summary>
 public sealed record SearchHeader
 {
     public required string SearchId { get; init; }
 
-    public required string DefinitionJson { get; init; }
+    /// <summary>The definition the search runs, paths absolute (the store keeps it in a form of its own, not the file's syntax).</summary>
+    public required SearchDefinition Definition { get; init; }
 
     public required FoldPlan Folds { get; init; }
 

@@ -18,8 +18,7 @@ public sealed class InspectedStore : IDisposable
 {
     public static readonly DateTimeOffset T0 = new(2025, 3, 4, 9, 0, 0, TimeSpan.Zero);
 
-    /// <param name="definitionJson">The definition text the store keeps; <see cref="Definition"/> when null.</param>
-    public InspectedStore(bool finished = false, string? definitionJson = null)
+    public InspectedStore(bool finished = false)
     {
         Directory.CreateDirectory(Folder);
         using var store = SearchStore.Create(Path);
@@ -27,7 +26,7 @@ public sealed class InspectedStore : IDisposable
         store.SaveHeader(new SearchHeader
         {
             SearchId = "inspect-1",
-            DefinitionJson = definitionJson ?? Definition,
+            Definition = DefinitionIn(Folder),
             Folds = new FoldPlan(3, 1, [.. Enumerable.Range(0, 12).Select(i => i % 3)]),
             TrainHash = "aa",
             TestHash = "bb",
@@ -71,17 +70,16 @@ public sealed class InspectedStore : IDisposable
         Trial(6, "fasttree", 5, TrialState.Queued, null, [], worker: null, slot: null, startMinute: null, seconds: null),
     ];
 
-    /// <summary>The definition as the store keeps it; data paths need not exist to read it back.</summary>
-    public static string Definition => """
-        {
-          "name": "inspect-test",
-          "data": { "train": "train.csv", "test": "test.csv", "id": "id", "target": "y" },
-          "folds": 3,
-          "families": { "lightgbm": {}, "fasttree": {} },
-          "schedule": { "kind": "asha", "proposer": "random", "first_rung": 5, "full_budget": 15, "eta": 3 },
-          "budget": { "trials": 10, "hours": 1 }
-        }
-        """;
+    // The definition as the store keeps it; data paths need not exist to read it back.
+    private static SearchDefinition DefinitionIn(string folder) => new()
+    {
+        Name = "inspect-test",
+        Data = new DataSource(System.IO.Path.Combine(folder, "train.csv"), System.IO.Path.Combine(folder, "test.csv"), "id", "y"),
+        Folds = 3,
+        Families = [.. FamilyNames.Default.Select(f => new FamilySearch(f, DefaultSpaces.For(f)))],
+        Schedule = new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Random, FirstRung: 5, FullBudget: 15, Eta: 3),
+        Budget = new SearchBudget(Trials: 10, Hours: 1),
+    };
 
     public void Dispose()
     {

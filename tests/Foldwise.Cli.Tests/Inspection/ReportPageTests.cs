@@ -1,10 +1,12 @@
 using System.Net;
 using System.Text.Json;
 using System.Text.RegularExpressions;
+using Foldwise.Testing;
 using Xunit.Abstractions;
 
 namespace Foldwise.Cli.Tests.Inspection;
 
+[Trait(Lane.Key, Lane.Slow)]
 public sealed partial class ReportPageTests(ITestOutputHelper output) : IDisposable
 {
     private readonly InspectedStore store = new(finished: true);
@@ -37,7 +39,7 @@ public sealed partial class ReportPageTests(ITestOutputHelper output) : IDisposa
         Assert.Equal(new Dictionary<string, int> { ["fasttree"] = 1, ["lightgbm"] = 2 }, charts["blend-weights"]);
         Assert.Equal(new Dictionary<string, int> { ["predicted-vs-actual"] = 12, ["residuals"] = 12 }, charts["oof-fit"]);
         Assert.Equal(new Dictionary<string, int> { ["w1/0"] = 1, ["w1/1"] = 2, ["w2/0"] = 1, ["w2/1"] = 1 }, charts["timeline"]);
-        Assert.Equal(new Dictionary<string, int> { ["constant"] = 1, ["duplicate"] = 1, ["kept"] = 3, ["too few non-zero"] = 0 }, charts["screening"]);
+        Assert.Equal(new Dictionary<string, int> { ["constant"] = 1, ["duplicate"] = 1, ["kept"] = 3, ["too few non-zero"] = 0, ["all missing"] = 0, ["nearly unique text"] = 0 }, charts["screening"]);
         Assert.Equal(new Dictionary<string, int> { ["fasttree"] = 1, ["lightgbm"] = 2 }, charts["noise-floor"]);
 
         // And it opens with the project's own views: how far candidates got, the noise floor, the blend and its diversity, its fit

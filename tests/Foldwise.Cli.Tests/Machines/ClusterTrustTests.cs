@@ -1,12 +1,16 @@
 using System.Diagnostics;
-using Foldwise.Cli.Running;
 using Foldwise.Cli.Tests.Processes;
 using Foldwise.Cluster.Hosting;
+using Foldwise.Cluster.Telemetry;
+using Foldwise.Core.Events;
+using Foldwise.Testing;
+using Foldwise.Tuning;
 using Xunit.Abstractions;
 
 namespace Foldwise.Cli.Tests.Machines;
 
 /// <summary>An in-process coordinator with the cluster certificate, and worker processes with and without it.</summary>
+[Trait(Lane.Key, Lane.Slow)]
 public sealed class ClusterTrustTests(ITestOutputHelper output)
 {
     [Fact]
@@ -17,11 +21,11 @@ public sealed class ClusterTrustTests(ITestOutputHelper output)
         using var certificate = ClusterCertificate.Create("test");
         var (pfx, port) = ExportAndPickPorts(workspace, certificate);
         await using var coordinator = await EmbeddedCluster.StartAsync(
-            new ClusterRole { SiloPort = port, GatewayPort = port + 1, Certificate = certificate }, slots: 0, threads: null, CancellationToken.None);
+            new ClusterRole { SiloPort = port, GatewayPort = port + 1, Certificate = certificate }, slots: 0, threads: null, new FoldwiseTelemetryOptions(), NoEvents.Instance, CancellationToken.None);
 
         // When a stranger without the certificate tries to join
-        using var stranger = FoldwiseProcess.Start("worker", "--join", $"127.0.0.1:{port}", "--name", "stranger");
-        bool strangerJoined = await stranger.WaitForLineAsync(l => l.StartsWith("Joined", StringComparison.Ordinal), TimeSpan.FromSeconds(12));
+        using var stranger = FoldwiseProcess.Start("worker", "--join", $"127.0.0.1:{port}", "--name", "stranger", "--json");
+        bool strangerJoined = await stranger.WaitForLineAsync(WorkerEvents.Is<WorkerJoined>, TimeSpan.FromSeconds(12));
 
         // Then it is refused: never a member, never joined
         Assert.False(strangerJoined, stranger.Output);
@@ -49,7 +53,7 @@ public sealed class ClusterTrustTests(ITestOutputHelper output)
         using var certificate = ClusterCertificate.Create("test");
         var (pfx, port) = ExportAndPickPorts(workspace, certificate);
         await using var coordinator = await EmbeddedCluster.StartAsync(
-            new ClusterRole { SiloPort = port, GatewayPort = port + 1, Certificate = certificate }, slots: 0, threads: null, CancellationToken.None);
+            new ClusterRole { SiloPort = port, GatewayPort = port + 1, Certificate = certificate }, slots: 0, threads: null, new FoldwiseTelemetryOptions(), NoEvents.Instance, CancellationToken.None);
 
         // When status asks its gateway with the certificate, and without it
         var trusted = CliHarness.Run("status", $"127.0.0.1:{port + 1}", "--cert", pfx, "--passphrase", "test-passphrase");

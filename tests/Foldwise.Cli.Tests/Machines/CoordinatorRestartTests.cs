@@ -1,8 +1,11 @@
 using Foldwise.Cli.Tests.Processes;
+using Foldwise.Core.Events;
+using Foldwise.Testing;
 
 namespace Foldwise.Cli.Tests.Machines;
 
 /// <summary>A worker process outlives its coordinator: the coordinator is SIGKILLed and resumed on the same port.</summary>
+[Trait(Lane.Key, Lane.Slow)]
 public sealed class CoordinatorRestartTests
 {
     [Fact]
@@ -17,8 +20,8 @@ public sealed class CoordinatorRestartTests
         Assert.True(await first.WaitForLineAsync(l => l.Contains("Coordinator listening", StringComparison.Ordinal), TimeSpan.FromSeconds(60)), first.Output);
         using var worker = FoldwiseProcess.Start(
             "worker", "--join", $"127.0.0.1:{port}", "--slots", "1", "--threads", "1", "--name", "w1",
-            "--cache", Path.Combine(workspace.Root, "cache"));
-        Assert.True(await worker.WaitForLineAsync(l => l.Contains("scored", StringComparison.Ordinal), TimeSpan.FromSeconds(60)), worker.Output + first.Output);
+            "--cache", Path.Combine(workspace.Root, "cache"), "--json");
+        Assert.True(await worker.WaitForLineAsync(WorkerEvents.Is<SlotTrialScored>, TimeSpan.FromSeconds(60)), worker.Output + first.Output);
 
         // When the coordinator is killed and resumed from its store on the same port
         first.Kill();
@@ -30,11 +33,11 @@ public sealed class CoordinatorRestartTests
         Assert.True(code == 0, second.Output + "\n--- worker\n" + worker.Output);
         Assert.False(worker.HasExited, worker.Output);
         var lines = worker.Lines.ToList();
-        int rejoined = lines.FindLastIndex(l => l.StartsWith("Joined the cluster", StringComparison.Ordinal));
-        Assert.True(lines.Count(l => l.StartsWith("Joined the cluster", StringComparison.Ordinal)) >= 2, worker.Output);
-        Assert.Contains(lines.Skip(rejoined), l => l.Contains("scored", StringComparison.Ordinal));
+        int rejoined = lines.FindLastIndex(WorkerEvents.Is<WorkerJoined>);
+        Assert.True(lines.Count(WorkerEvents.Is<WorkerJoined>) >= 2, worker.Output);
+        Assert.Contains(lines.Skip(rejoined), WorkerEvents.Is<SlotTrialScored>);
         // The command's banner again: the worker started over as a fresh process (same PID, execv), not a rebuilt silo.
-        Assert.True(lines.Count(l => l.StartsWith("Worker w1 joining", StringComparison.Ordinal)) >= 2, worker.Output);
+        Assert.True(lines.Count(WorkerEvents.Is<WorkerStarting>) >= 2, worker.Output);
 
         var trials = MachineDefinition.History(workspace.Out);
         var ids = trials.Select(t => (int)t!["id"]!).ToList();

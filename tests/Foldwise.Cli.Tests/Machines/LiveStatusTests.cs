@@ -1,18 +1,21 @@
 using Foldwise.Cli.Tests.Processes;
+using Foldwise.Testing;
 
 namespace Foldwise.Cli.Tests.Machines;
 
 /// <summary><c>status HOST:PORT</c> asks a running coordinator process through its gateway, on loopback.</summary>
+[Trait(Lane.Key, Lane.Slow)]
 public sealed class LiveStatusTests
 {
     [Fact]
     public async Task Reads_live_progress_from_a_running_coordinator_through_its_gateway()
     {
-        // Given a coordinator process running a search with one local slot
+        // Given a coordinator process running a search with one local single-threaded slot (two OpenMP threads spin
+        // while they wait, which on a busy test machine held the first trial back past the wait below)
         using var workspace = new Workspace();
         string definition = MachineDefinition.Write(workspace, trials: 30);
         int port = MachineDefinition.FreePortPair();
-        using var coordinator = FoldwiseProcess.Start("run", definition, "--out", workspace.Out, "--slots", "1", "--port", port.ToString());
+        using var coordinator = FoldwiseProcess.Start("run", definition, "--out", workspace.Out, "--slots", "1", "--threads", "1", "--port", port.ToString());
         Assert.True(await coordinator.WaitForLineAsync(l => l.StartsWith("trial ", StringComparison.Ordinal), TimeSpan.FromSeconds(90)), coordinator.Output);
 
         // When status asks its gateway (silo port + 1)

@@ -1,8 +1,11 @@
 using Foldwise.Cli.Tests.Processes;
+using Foldwise.Core.Events;
+using Foldwise.Testing;
 
 namespace Foldwise.Cli.Tests.Machines;
 
 /// <summary>A coordinator process with no slots and two worker processes on loopback; one worker is SIGKILLed mid-trial.</summary>
+[Trait(Lane.Key, Lane.Slow)]
 public sealed class LostWorkerTests
 {
     [Fact]
@@ -16,7 +19,7 @@ public sealed class LostWorkerTests
             "run", definition, "--out", workspace.Out, "--slots", "0", "--port", port.ToString(), "--lease-seconds", "3");
         Assert.True(await coordinator.WaitForLineAsync(l => l.Contains("Coordinator listening", StringComparison.Ordinal), TimeSpan.FromSeconds(60)), coordinator.Output);
         using var first = Worker(workspace, port, "w1");
-        Assert.True(await first.WaitForLineAsync(l => l.Contains("scored", StringComparison.Ordinal), TimeSpan.FromSeconds(60)), first.Output + coordinator.Output);
+        Assert.True(await first.WaitForLineAsync(WorkerEvents.Is<SlotTrialScored>, TimeSpan.FromSeconds(60)), first.Output + coordinator.Output);
 
         // When a second worker joins late, and the first is killed while it holds a lease
         using var late = Worker(workspace, port, "w2");
@@ -33,13 +36,13 @@ public sealed class LostWorkerTests
         Assert.All(trials, t => Assert.Equal("done", (string)t!["state"]!));
         Assert.Contains(trials, t => t!["lost_attempts"]!.AsArray().Any(a => ((string)a!).Contains("lease expired on w1", StringComparison.Ordinal)));
         Assert.Contains(trials, t => (string?)t!["worker"] == "w2");
-        Assert.Contains(late.Lines, l => l.Contains("scored", StringComparison.Ordinal));
+        Assert.Contains(late.Lines, WorkerEvents.Is<SlotTrialScored>);
     }
 
     private static FoldwiseProcess Worker(Workspace workspace, int port, string name) =>
         FoldwiseProcess.Start(
             "worker", "--join", $"127.0.0.1:{port}", "--slots", "1", "--threads", "1", "--name", name,
-            "--cache", Path.Combine(workspace.Root, "cache-" + name));
+            "--cache", Path.Combine(workspace.Root, "cache-" + name), "--json");
 
     private static async Task<bool> WaitUntilRunningOn(string outDir, string worker, TimeSpan timeout)
     {

@@ -46,7 +46,6 @@ public sealed class FoldwiseProcess : IDisposable
             info.ArgumentList.Add(arg);
         }
 
-        info.Environment["OMP_WAIT_POLICY"] = "passive";
         info.Environment["DOTNET_NOLOGO"] = "1";
         return new FoldwiseProcess(Process.Start(info) ?? throw new InvalidOperationException("could not start foldwise"));
     }
@@ -101,11 +100,46 @@ public sealed class FoldwiseProcess : IDisposable
         }
     }
 
+    /// <summary>SIGKILL to the launched process only, as <c>kill -9 PID</c> does: any child it started is left running.</summary>
+    public void KillLaunchedOnly()
+    {
+        if (!process.HasExited)
+        {
+            process.Kill(entireProcessTree: false);
+            process.WaitForExit();
+        }
+    }
+
+    /// <summary>Processes other than this test run whose command line mentions <paramref name="text"/> (Linux: /proc).</summary>
+    public static IReadOnlyList<int> ProcessesMentioning(string text) =>
+    [
+        .. Directory.EnumerateDirectories("/proc")
+            .Select(d => (Pid: int.TryParse(Path.GetFileName(d), out int pid) ? pid : 0, Directory: d))
+            .Where(p => p.Pid > 0 && p.Pid != Environment.ProcessId && CommandLine(p.Directory).Contains(text, StringComparison.Ordinal))
+            .Select(p => p.Pid),
+    ];
+
     public void Dispose()
     {
         Kill();
         process.Dispose();
         arrived.Dispose();
+    }
+
+    private static string CommandLine(string procDirectory)
+    {
+        try
+        {
+            return File.ReadAllText(Path.Combine(procDirectory, "cmdline")).Replace('\0', ' ');
+        }
+        catch (IOException)
+        {
+            return "";
+        }
+        catch (UnauthorizedAccessException)
+        {
+            return "";
+        }
     }
 
     private void Add(string? line)

@@ -1,5 +1,7 @@
+using Foldwise.Testing;
 namespace Foldwise.Cli.Tests.Processes;
 
+[Trait(Lane.Key, Lane.Slow)]
 public sealed class FoldwiseProcessTests
 {
     [Fact]

@@ -1,8 +1,10 @@
 using System.Diagnostics;
 using Foldwise.Cli.Tests.Processes;
+using Foldwise.Testing;
 
 namespace Foldwise.Cli.Tests.Resume;
 
+[Trait(Lane.Key, Lane.Slow)]
 [Collection(ResumeProcesses.Name)]
 public sealed class CtrlCTests : IDisposable
 {

@@ -1,7 +1,9 @@
 using Foldwise.Cli.Tests.Processes;
+using Foldwise.Testing;
 
 namespace Foldwise.Cli.Tests.Resume;
 
+[Trait(Lane.Key, Lane.Slow)]
 [Collection(ResumeProcesses.Name)]
 public sealed class LiveStoreTests : IDisposable
 {
@@ -23,8 +25,8 @@ public sealed class LiveStoreTests : IDisposable
         // When a second coordinator tries to resume the same store meanwhile
         var second = CliHarness.Run("resume", workspace.Out);
 
-        // Then it is refused with a clear error, exit 1, and the running search is untouched
-        Assert.Equal(1, second.ExitCode);
+        // Then it is refused with a clear error, exit 4 (store busy), and the running search is untouched
+        Assert.Equal(ExitCodes.StoreBusy, second.ExitCode);
         Assert.Contains("Another process is writing", second.Output);
 
         // When history reads the store over and over while the search runs

@@ -1,5 +1,7 @@
+using Foldwise.Testing;
 namespace Foldwise.Cli.Tests.Resume;
 
+[Trait(Lane.Key, Lane.Slow)]
 [Collection(ResumeProcesses.Name)]
 public sealed class ReproducibilityTests : IDisposable
 {
@@ -16,8 +18,8 @@ public sealed class ReproducibilityTests : IDisposable
         string first = workspace.PathOf("first"), second = workspace.PathOf("second");
 
         // When both run
-        var a = CliHarness.Run("run", definition, "--out", first, "--slots", "1");
-        var b = CliHarness.Run("run", definition, "--out", second, "--slots", "1");
+        var a = CliHarness.Run("run", definition, "--out", first, "--slots", "1", "--threads", "1");
+        var b = CliHarness.Run("run", definition, "--out", second, "--slots", "1", "--threads", "1");
 
         // Then their histories agree on ids, families, parameters, budgets, rungs, parents and scores, bit for bit
         Assert.True(a.ExitCode == 0, a.Output);

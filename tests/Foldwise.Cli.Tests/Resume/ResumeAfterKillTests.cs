@@ -1,8 +1,10 @@
 using System.Globalization;
 using Foldwise.Cli.Tests.Processes;
+using Foldwise.Testing;
 
 namespace Foldwise.Cli.Tests.Resume;
 
+[Trait(Lane.Key, Lane.Slow)]
 [Collection(ResumeProcesses.Name)]
 public sealed class ResumeAfterKillTests : IDisposable
 {
@@ -12,9 +14,10 @@ public sealed class ResumeAfterKillTests : IDisposable
     public void Dispose() => workspace.Dispose();
 
     [Fact]
-    public async Task A_killed_search_resumes_to_its_budget_keeping_every_finished_trial_once()
+    public async Task A_killed_search_leaves_no_process_behind_and_resumes_to_its_budget_keeping_every_finished_trial_once()
     {
-        // Given a search of 14 trials running in its own process, killed (SIGKILL) after three trials have finished
+        // Given a search of 14 trials running in its own process, its launched PID alone killed (SIGKILL) after three
+        // trials have finished
         workspace.WriteTables();
         string definition = workspace.WriteDefinition(trials: 14);
         string store = Path.Combine(workspace.Out, "search.db");
@@ -22,10 +25,12 @@ public sealed class ResumeAfterKillTests : IDisposable
         using (var run = FoldwiseProcess.Start("run", definition, "--out", workspace.Out))
         {
             Assert.True(await run.WaitForLineAsync(IsTrialLine, Patience) && await WaitForTrialLinesAsync(run, 3), run.Output);
-            run.Kill();
+            run.KillLaunchedOnly();
             printed = run.Lines.Where(IsTrialLine).Select(ParseTrialLine).ToDictionary(t => t.Id, t => t.Score);
         }
 
+        // (nothing the search started keeps running and holding its store)
+        Assert.Empty(FoldwiseProcess.ProcessesMentioning(definition));
         var beforeResume = StoredTrial.Read(store);
 
         // When the search is resumed

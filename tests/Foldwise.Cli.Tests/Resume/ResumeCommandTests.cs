@@ -1,9 +1,11 @@
-using Foldwise.Cli.Running;
 using Foldwise.Storage;
+using Foldwise.Testing;
+using Foldwise.Tuning;
 using LiteDB;
 
 namespace Foldwise.Cli.Tests.Resume;
 
+[Trait(Lane.Key, Lane.Slow)]
 [Collection(ResumeProcesses.Name)]
 public sealed class ResumeCommandTests : IDisposable
 {

@@ -1,5 +1,6 @@
 using Foldwise.Core.Data;
 using Foldwise.Core.Demo;
+using Foldwise.Testing;
 
 namespace Foldwise.Core.Tests.Demo;
 
@@ -21,6 +22,7 @@ public sealed class FreightDemoTests
     }
 
     [Fact]
+    [Trait(Lane.Key, Lane.Slow)]
     public void Makes_a_full_table_wide_sparse_and_with_a_test_table_four_times_longer()
     {
         // Given the full demo

@@ -30,7 +30,7 @@ internal static class ProposerRuns
         double best = double.PositiveInfinity;
         for (int i = 1; i <= evaluations; i++)
         {
-            var p = proposer.Propose(history, ProposalSeeds.For(seed, 0, i)).Parameters;
+            var p = proposer.Propose(history, new SearchSeeds(seed).Proposal(0, i)).Parameters;
             double y = f(p);
             best = Math.Min(best, y);
             proposed.Add(p);

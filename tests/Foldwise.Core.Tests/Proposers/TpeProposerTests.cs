@@ -92,7 +92,7 @@ public sealed class TpeProposerTests
         var proposals = new List<Proposal>();
         for (int i = 1; i <= 80; i++)
         {
-            var proposal = tpe.Propose(history, ProposalSeeds.For(1, 0, i));
+            var proposal = tpe.Propose(history, new SearchSeeds(1).Proposal(0, i));
             proposals.Add(proposal);
             history.Observe(new TrialRecord { Id = i, Family = "f", Parameters = proposal.Parameters, Budget = 1, Proposer = proposal.Proposer, Created = ProposerRuns.Epoch });
             if (i > 3)

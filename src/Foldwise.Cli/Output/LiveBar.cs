@@ -1,0 +1,64 @@
+using Foldwise.Core.Definition;
+using Foldwise.Core.Search;
+using Spectre.Console;
+
+namespace Foldwise.Cli.Output;
+
+/// <summary>
+/// The terminal's live bar while a search runs: it starts at <c>SearchStarted</c>, moves with each result and
+/// closes at the stop, before the summary line is written below it.
+/// </summary>
+internal sealed class LiveBar
+{
+    private readonly SearchDefinition definition;
+    private readonly TaskCompletionSource<ProgressTask> task = new(TaskCreationOptions.RunContinuationsAsynchronously);
+    private readonly TaskCompletionSource<SearchProgress> end = new(TaskCreationOptions.RunContinuationsAsynchronously);
+    private readonly Task running;
+
+    public LiveBar(IAnsiConsole console, SearchDefinition definition)
+    {
+        this.definition = definition;
+        running = console.Progress()
+            .AutoClear(false)
+            .Columns(new TaskDescriptionColumn { Alignment = Justify.Left }, new ProgressBarColumn(), new PercentageColumn(), new ElapsedTimeColumn())
+            .StartAsync(async context =>
+            {
+                var bar = context.AddTask("starting", maxValue: 1);
+                task.SetResult(bar);
+                var last = await end.Task;
+                Update(bar, last, definition);
+                bar.Value = bar.MaxValue;
+            });
+    }
+
+    public void Update(SearchProgress progress)
+    {
+        if (task.Task.IsCompletedSuccessfully)
+        {
+            Update(task.Task.Result, progress, definition);
+        }
+    }
+
+    /// <summary>Closes the bar and waits until it is drawn for the last time.</summary>
+    public void Finish(SearchProgress progress)
+    {
+        end.TrySetResult(progress);
+        running.GetAwaiter().GetResult();
+    }
+
+    private static void Update(ProgressTask bar, SearchProgress p, SearchDefinition definition)
+    {
+        if (p.TrialBudget is { } budget)
+        {
+            bar.MaxValue = budget;
+            bar.Value = p.Done + p.Failed;
+        }
+        else if (definition.Budget.Hours is { } hours)
+        {
+            bar.MaxValue = hours * 3600;
+            bar.Value = Math.Min(bar.MaxValue, p.SpentSeconds);
+        }
+
+        bar.Description = Markup.Escape($"done {p.Done}{ProgressView.Of(p.TrialBudget)} · running {p.Running} · failed {p.Failed} · best {ProgressView.FormatBest(p)}");
+    }
+}

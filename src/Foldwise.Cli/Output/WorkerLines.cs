@@ -1,0 +1,32 @@
+using Foldwise.Core.Events;
+
+namespace Foldwise.Cli.Output;
+
+/// <summary>A worker's screen: one plain line per event it sees (joining, each trial a slot finishes, losing the cluster).</summary>
+public sealed class WorkerLines(TextWriter output) : IProgress<SearchEvent>
+{
+    public void Report(SearchEvent value)
+    {
+        string? line = value switch
+        {
+            WorkerStarting s => $"Worker {s.Name} joining {s.Join} from {s.Advertise}" + (s.MutualTls ? " (mutual TLS)" : " (no certificate)") + "; Ctrl-C to leave",
+            WorkerJoined j => $"Joined the cluster at {j.Join} as {j.Name} with {j.Slots} slot(s), {j.Threads} thread(s) each",
+            WorkerJoinFailed f => $"Cannot join {f.Join} (attempt {f.Attempt}): {f.Reason}; retrying in {f.RetryIn.TotalSeconds:F0} s",
+            WorkerLostCluster l => $"Lost the cluster ({l.Reason}); joining again",
+            WorkerStopped => "Worker stopped",
+            SlotTrialScored s => $"Slot {s.Slot}: trial {s.TrialId} attempt {s.Attempt} scored {s.Score:F5} in {s.Took.TotalSeconds:F1} s (accepted: {s.Accepted})",
+            SlotLeaseLost l => $"Slot {l.Slot}: lost the lease of trial {l.TrialId} attempt {l.Attempt}; dropping it",
+            SlotTrialFailed f => $"Slot {f.Slot}: trial {f.TrialId} failed: {f.Reason}",
+            SlotCoordinatorUnreachable u => $"Slot {u.Slot}: coordinator unreachable ({u.Reason}); retrying",
+            _ => null,
+        };
+        if (line is not null)
+        {
+            // Slots report from their own threads: one whole line at a time.
+            lock (output)
+            {
+                output.WriteLine(line);
+            }
+        }
+    }
+}

@@ -1,0 +1,11 @@
+namespace Foldwise.Core.Encodings;
+
+/// <summary>How a category column reaches the learners.</summary>
+public enum CategoryEncodingKind
+{
+    /// <summary>One 0/1 column per kept level (sparse), plus missing and "other" where they occur.</summary>
+    Indicators,
+
+    /// <summary>One column: the smoothed mean of the fitting-scale target of the row's level, out-of-fold for training rows.</summary>
+    TargetMean,
+}

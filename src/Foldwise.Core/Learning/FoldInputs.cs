@@ -1,0 +1,63 @@
+using System.Collections.Immutable;
+using Foldwise.Core.Data;
+using Foldwise.Core.Encodings;
+
+namespace Foldwise.Core.Learning;
+
+/// <summary>
+/// One fold's features as a learner reads them, with every category column already encoded from the fold's training
+/// rows: <see cref="Train"/> holds all rows of the training table (index it with the fold's training and validation
+/// rows), <see cref="Test"/> the test table, both with the same columns. A missing numeric cell is a stored NaN;
+/// a family that cannot take NaN reads <see cref="Imputed"/> instead.
+/// </summary>
+public sealed class FoldInputs
+{
+    public FoldInputs(SparseRowMatrix train, SparseRowMatrix test)
+    {
+        ArgumentNullException.ThrowIfNull(train);
+        ArgumentNullException.ThrowIfNull(test);
+        if (train.ColumnCount != test.ColumnCount)
+        {
+            throw new ArgumentException($"the test rows have {test.ColumnCount} columns but the training rows {train.ColumnCount}", nameof(test));
+        }
+
+        Train = train;
+        Test = test;
+    }
+
+    public SparseRowMatrix Train { get; }
+
+    public SparseRowMatrix Test { get; }
+
+    public int ColumnCount => Train.ColumnCount;
+
+    /// <summary>True when some cell of either table is missing (NaN).</summary>
+    public bool HasMissing => ContainsNaN(Train.Values) || ContainsNaN(Test.Values);
+
+    /// <summary>The table's own features, for a search without category columns: no copy is made.</summary>
+    public static FoldInputs Plain(TrialData data)
+    {
+        ArgumentNullException.ThrowIfNull(data);
+        return new FoldInputs(data.Train, data.Test);
+    }
+
+    /// <summary>
+    /// The same inputs without NaN: each missing cell takes its column's median over <paramref name="trainRows"/>
+    /// (implicit zeros included), and each column with a missing cell among those rows gains a 0/1 "was missing"
+    /// column after all others. Returns this object when nothing is missing.
+    /// </summary>
+    public FoldInputs Imputed(ImmutableArray<int> trainRows) => HasMissing ? MedianImputation.Apply(this, trainRows) : this;
+
+    private static bool ContainsNaN(float[] values)
+    {
+        foreach (float v in values)
+        {
+            if (float.IsNaN(v))
+            {
+                return true;
+            }
+        }
+
+        return false;
+    }
+}

@@ -1,0 +1,73 @@
+namespace Foldwise.Learners.Native;
+
+/// <summary>A LightGBM Dataset binned from sparse rows; a validation Dataset is binned like its reference.</summary>
+internal sealed class LightGbmDataset : IDisposable
+{
+    private LightGbmDataset(DatasetHandle handle, int rowCount)
+    {
+        Handle = handle;
+        RowCount = rowCount;
+    }
+
+    public DatasetHandle Handle { get; }
+
+    public int RowCount { get; }
+
+    public static unsafe LightGbmDataset FromRows(CsrRows rows, float[]? labels, string parameters, LightGbmDataset? reference, string what)
+    {
+        if (rows.RowCount == 0)
+        {
+            throw new LightGbmException($"LightGBM refused {what}: there are no rows");
+        }
+
+        bool added = false;
+        try
+        {
+            reference?.Handle.DangerousAddRef(ref added);
+            DatasetHandle handle;
+            fixed (int* starts = rows.RowStarts)
+            fixed (int* columns = rows.Columns)
+            fixed (float* values = rows.Values)
+            {
+                NativeCall.Check(
+                    LightGbmNative.DatasetCreateFromCsr(
+                        starts, LightGbmNative.Int32, columns, values, LightGbmNative.Float32, rows.RowStarts.Length, rows.Values.Length, rows.ColumnCount,
+                        parameters, reference?.Handle.DangerousGetHandle() ?? 0, out handle),
+                    $"{what} ({rows.RowCount} rows x {rows.ColumnCount} columns) with parameters '{parameters}'");
+            }
+
+            var dataset = new LightGbmDataset(handle, rows.RowCount);
+            if (labels is not null)
+            {
+                dataset.SetLabels(labels, what);
+            }
+
+            return dataset;
+        }
+        finally
+        {
+            if (added)
+            {
+                reference!.Handle.DangerousRelease();
+            }
+        }
+    }
+
+    public void Dispose() => Handle.Dispose();
+
+    private unsafe void SetLabels(float[] labels, string what)
+    {
+        try
+        {
+            fixed (float* values = labels)
+            {
+                NativeCall.Check(LightGbmNative.DatasetSetField(Handle, "label", values, labels.Length, LightGbmNative.Float32), $"the labels of {what}");
+            }
+        }
+        catch
+        {
+            Handle.Dispose();
+            throw;
+        }
+    }
+}

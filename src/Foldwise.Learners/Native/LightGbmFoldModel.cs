@@ -1,0 +1,146 @@
+using Foldwise.Core.Learning;
+using Foldwise.Core.Spaces;
+
+namespace Foldwise.Learners.Native;
+
+/// <summary>
+/// One fold's LightGBM model through the native library: trained round by round, optionally scoring the held-out
+/// rows after every round (on the fitting scale, with the search's metric), and able to train further rounds later.
+/// Disposing it frees the booster and its Datasets.
+/// </summary>
+public sealed class LightGbmFoldModel : IDisposable
+{
+    private readonly FoldJob job;
+    private readonly NativeFoldRows inputs;
+    private readonly LightGbmBooster booster;
+    private readonly double[]? actual;
+    private readonly List<double> roundScores = [];
+
+    private LightGbmFoldModel(FoldJob job, NativeFoldRows inputs, LightGbmBooster booster, double[]? actual)
+    {
+        this.job = job;
+        this.inputs = inputs;
+        this.booster = booster;
+        this.actual = actual;
+    }
+
+    /// <summary>Rounds trained so far: the job's budget unless no leaf could be split any more.</summary>
+    public int Rounds { get; private set; }
+
+    /// <summary>The held-out rows' score after each round (index 0 = after round 1); empty unless asked for at training.</summary>
+    public IReadOnlyList<double> ValidationScores => roundScores;
+
+    /// <summary>Trains <see cref="FoldJob.Budget"/> rounds; cancellation is honoured between rounds.</summary>
+    public static LightGbmFoldModel Train(FoldJob job, bool scoreEachRound, CancellationToken cancellation)
+    {
+        FoldFitter.Check(FamilyNames.LightGbm, job);
+        cancellation.ThrowIfCancellationRequested();
+        using var gate = ThreadCountGate.Enter(job.Threads);
+        var inputs = NativeFoldRows.From(job);
+        string parameters = LightGbmParameters.For(job);
+        var train = LightGbmDataset.FromRows(inputs.Train, inputs.Labels, parameters, reference: null, $"the training rows of fold {job.Fold}");
+        LightGbmBooster booster;
+        try
+        {
+            booster = LightGbmBooster.Create(train, parameters);
+        }
+        catch
+        {
+            train.Dispose();
+            throw;
+        }
+
+        LightGbmFoldModel? model = null;
+        try
+        {
+            double[]? actual = null;
+            if (scoreEachRound)
+            {
+                booster.AddValidation(LightGbmDataset.FromRows(inputs.Validation, labels: null, parameters, train, $"the held-out rows of fold {job.Fold}"));
+                actual = [.. job.ValidationRows.Select(r => job.Data.Target[r])];
+            }
+
+            model = new LightGbmFoldModel(job, inputs, booster, actual);
+            model.Continue(job.Budget, cancellation);
+            return model;
+        }
+        catch
+        {
+            if (model is null)
+            {
+                booster.Dispose();
+            }
+            else
+            {
+                model.Dispose();
+            }
+
+            throw;
+        }
+    }
+
+    /// <summary>Trains up to <paramref name="rounds"/> more rounds on the same booster (bagging and all), as if the first fit had been longer.</summary>
+    public void Continue(int rounds, CancellationToken cancellation)
+    {
+        ArgumentOutOfRangeException.ThrowIfNegative(rounds);
+        using var gate = ThreadCountGate.Enter(job.Threads);
+        for (int i = 0; i < rounds; i++)
+        {
+            cancellation.ThrowIfCancellationRequested();
+            if (!booster.TrainOneRound())
+            {
+                break;
+            }
+
+            Rounds++;
+            if (actual is not null)
+            {
+                var scores = booster.ValidationScores(0);
+                for (int k = 0; k < scores.Length; k++)
+                {
+                    scores[k] += inputs.Offset;
+                }
+
+                roundScores.Add(job.Data.Metric.Score(actual, scores));
+            }
+        }
+    }
+
+    /// <summary>Sets the learning rate of the rounds still to come (a promoted trial may run at another rate than its short rung).</summary>
+    public void ChangeLearningRate(double rate)
+    {
+        if (!(rate is > 0 and <= 1))
+        {
+            throw new ArgumentOutOfRangeException(nameof(rate), rate, "a learning rate lies in (0, 1]");
+        }
+
+        booster.Change($"learning_rate={rate.ToString("R", System.Globalization.CultureInfo.InvariantCulture)}");
+    }
+
+    /// <summary>Predictions of the held-out rows and the test table, on the fitting scale, from the first <paramref name="rounds"/> rounds (all by default).</summary>
+    public FoldPrediction Predict(int? rounds = null)
+    {
+        if (rounds is < 1 || rounds > Rounds)
+        {
+            throw new ArgumentOutOfRangeException(nameof(rounds), rounds, $"the model has {Rounds} rounds");
+        }
+
+        int use = rounds ?? 0;
+        using var gate = ThreadCountGate.Enter(job.Threads);
+        return new FoldPrediction(
+            Shift(booster.Predict(inputs.Validation, use, job.Threads, $"the held-out rows of fold {job.Fold}")),
+            Shift(booster.Predict(inputs.Test, use, job.Threads, "the test table")));
+    }
+
+    public void Dispose() => booster.Dispose();
+
+    private double[] Shift(double[] raw)
+    {
+        for (int i = 0; i < raw.Length; i++)
+        {
+            raw[i] += inputs.Offset;
+        }
+
+        return raw;
+    }
+}

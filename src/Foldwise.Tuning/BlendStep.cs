@@ -1,0 +1,60 @@
+using System.Diagnostics;
+using Foldwise.Cluster.Telemetry;
+using Foldwise.Core.Blending;
+using Foldwise.Core.Definition;
+using Foldwise.Core.Events;
+using Foldwise.Core.Metrics;
+using Foldwise.Core.Search;
+using Foldwise.Storage;
+
+namespace Foldwise.Tuning;
+
+/// <summary>
+/// The final stage: pools the best full-budget trials of each family, solves the weights on their out-of-fold
+/// predictions, stores the blend, and writes the blended test predictions on the original scale.
+/// </summary>
+public static class BlendStep
+{
+    public const string PredictionFileName = "predictions.csv";
+
+    /// <summary>
+    /// <paramref name="abandon"/> is checked before the solve and again before anything is written, so an abandoned
+    /// blend leaves the previous prediction file and blend record as they were. Its span is a child of
+    /// <paramref name="search"/> (the search's span) when given.
+    /// </summary>
+    public static BlendSummary Run(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, IProgress<SearchEvent> events, BlendOptions? options = null, ActivityContext search = default, CancellationToken abandon = default)
+    {
+        options ??= definition.Blend;
+        using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.BlendSpan, ActivityKind.Internal, search);
+        var metric = Metric.For(definition.Metric);
+        var trials = store.LoadTrials();
+        var pool = BlendPool.Select(trials, options.Pool, definition.Schedule.FullBudget);
+        if (pool.Count == 0)
+        {
+            // No candidate reached the full budget (a very small trial budget): blend what went furthest.
+            int furthest = trials.Where(t => t.State == TrialState.Done).Max(t => t.Budget);
+            pool = BlendPool.Select(trials, options.Pool, furthest);
+            events.Report(new BlendFellBack(definition.Schedule.FullBudget, furthest));
+        }
+
+        var vectors = pool.Select(t => store.LoadVectors(t.Id) ?? throw new InvalidOperationException($"trial {t.Id} is done but its predictions are missing from the store")).ToList();
+        abandon.ThrowIfCancellationRequested();
+        var target = header.TrainTarget.Select(metric.Forward).ToArray();
+        var result = BlendStage.Run(new BlendInput(
+            options,
+            [.. pool.Select((t, i) => new BlendCandidate(t.Id, t.Family, vectors[i].OutOfFold))],
+            target,
+            header.Folds,
+            metric));
+        abandon.ThrowIfCancellationRequested();
+        var weights = pool.Select(t => result.Summary.Members.Single(m => m.TrialId == t.Id).Weight).ToList();
+        var blended = BlendStage.Combine(weights, [.. vectors.Select(v => v.Test)]);
+        string path = Path.Combine(outDir, PredictionFileName);
+        PredictionFile.Write(path, definition.Data.IdColumn, definition.Data.TargetColumn, header.TestIds, [.. blended.Select(metric.Inverse)]);
+        store.SaveBlend(result.Summary);
+        span?.SetTag("foldwise.blend.mode", DefinitionWords.Of(result.Summary.Mode)).SetTag("foldwise.blend.pool", pool.Count)
+            .SetTag("foldwise.blend.nested", result.Summary.NestedScore).SetTag("foldwise.blend.in_sample", result.Summary.InSampleScore);
+        events.Report(new BlendSolved(result.Summary, definition.Metric, [.. trials], path, header.TestIds.Length));
+        return result.Summary;
+    }
+}

@@ -1,0 +1,10 @@
+using Foldwise.Core.Blending;
+
+namespace Foldwise.Tuning;
+
+/// <summary>What a run of the search use case leaves: how it ended, where, and the blend when one was solved.</summary>
+public sealed record SearchResult(SearchEnding Ending, string SearchId, string OutDir, BlendSummary? Blend)
+{
+    /// <summary>The blended test predictions (written when <see cref="Ending"/> is <see cref="SearchEnding.Blended"/>).</summary>
+    public string PredictionFile => Path.Combine(OutDir, BlendStep.PredictionFileName);
+}
