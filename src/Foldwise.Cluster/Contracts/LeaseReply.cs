@@ -16,7 +16,8 @@ public sealed record LeaseReply(
     [property: Id(6)] int Seed,
     [property: Id(7)] TimeSpan LeaseDuration,
     [property: Id(8)] string? TraceParent = null,
-    [property: Id(9)] bool PredictsTest = true)
+    [property: Id(9)] string? Reason = null,
+    [property: Id(10)] bool PredictsTest = true)
 {
     public static LeaseReply Waiting { get; } = new(LeaseStatus.Wait, 0, 0, "", [], 0, 0, TimeSpan.Zero);
 
