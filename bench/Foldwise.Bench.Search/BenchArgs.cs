@@ -6,15 +6,17 @@ using Foldwise.Core.Spaces;
 
 internal sealed record BenchArgs(
     string Part, DemoSize Size, int[] SeedList, int RandomTrials, int AshaTrials, ScheduleKind Schedule,
-    int FirstRung, int FullBudget, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe, ProposerKind Proposer, bool Ladder, int DrawOffset, int Brackets, RoundStopping? Stopping, CsvPair? Csv)
+    int FirstRung, int FullBudget, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe, ProposerKind Proposer, bool Ladder, int DrawOffset, int Brackets, RoundStopping? Stopping, CsvPair? Csv, RoundStopping? RandomStopping)
 {
     /// <summary>The table's name in traces and headings: the demo's size, or the CSV training file's name.</summary>
     public string TableLabel => Csv is { } csv ? Path.GetFileNameWithoutExtension(csv.Train) : Size.ToString();
 
-    public string RandomFile(int seed) => $"random-{TableLabel}-{Family}-r{FullBudget}{StopLabel}-seed{seed}.tsv".ToLowerInvariant();
+    public string RandomFile(int seed) => $"random-{TableLabel}-{Family}-r{FullBudget}{Label(RandomStopping)}-seed{seed}.tsv".ToLowerInvariant();
 
     /// <summary>Part of a trace's name: empty without stopping (the older traces' names), else the stopping rule.</summary>
-    public string StopLabel => Stopping is { } s ? string.Create(CultureInfo.InvariantCulture, $"-stop{s.MinimumPatience}p{s.PatienceShare}") : "";
+    public string StopLabel => Label(Stopping);
+
+    private static string Label(RoundStopping? stopping) => stopping is { } s ? string.Create(CultureInfo.InvariantCulture, $"-stop{s.MinimumPatience}p{s.PatienceShare}") : "";
 
     /// <summary>What proposes the scheduled search's new candidates: TPE, independent or joint, or random draws (a control).</summary>
     public string ProposerLabel => Proposer == ProposerKind.Random ? "random" : $"TPE {(JointTpe ? "joint" : "independent")}, {(Ladder ? "ladder" : "top budget")}";
@@ -73,12 +75,15 @@ internal sealed record BenchArgs(
             },
             Int("--draw-offset", "1000"),
             Int("--brackets", "1"),
-            Get("--stopping", "on") switch
-            {
-                "on" => RoundStopping.Default,
-                "off" => null,
-                var other => throw new ArgumentException($"--stopping must be on or off, not '{other}'"),
-            },
-            Get("--train", "") is { Length: > 0 } train ? new CsvPair(train, Get("--test", ""), Get("--id", "id"), Get("--target", "")) : null);
+            StoppingOf(Get("--stopping", "on"), "--stopping"),
+            Get("--train", "") is { Length: > 0 } train ? new CsvPair(train, Get("--test", ""), Get("--id", "id"), Get("--target", "")) : null,
+            StoppingOf(Get("--random-stopping", Get("--stopping", "on")), "--random-stopping"));
     }
+
+    private static RoundStopping? StoppingOf(string value, string option) => value switch
+    {
+        "on" => RoundStopping.Default,
+        "off" => null,
+        _ => throw new ArgumentException($"{option} must be on or off, not '{value}'"),
+    };
 }

@@ -15,7 +15,7 @@ internal static class Comparison
         var fractions = targets.ToDictionary(t => t, _ => new List<double>());
         double[] shares = [0.125, 0.25, 0.5, 1.0];
         var gaps = shares.ToDictionary(f => f, _ => new List<double>());
-        Console.WriteLine($"{DefinitionWords.Of(options.Schedule)}{(options.Brackets > 1 ? $" in {options.Brackets} brackets" : "")} ({options.ProposerLabel}) rounds {options.FirstRung}..{options.FullBudget}, eta {options.Eta}, rate exponent {options.RateExponent}, stopping {(options.Stopping is null ? "off" : options.StopLabel.TrimStart('-'))} against random search at {options.FullBudget} rounds; {options.TableLabel} table, {options.Family}");
+        Console.WriteLine($"{DefinitionWords.Of(options.Schedule)}{(options.Brackets > 1 ? $" in {options.Brackets} brackets" : "")} ({options.ProposerLabel}) rounds {options.FirstRung}..{options.FullBudget}, eta {options.Eta}, rate exponent {options.RateExponent}, stopping {(options.Stopping is null ? "off" : options.StopLabel.TrimStart('-'))} against random search at {options.FullBudget} rounds, stopping {(options.RandomStopping is null ? "off" : "on")}; {options.TableLabel} table, {options.Family}");
         Console.WriteLine("seed  random trials  random best  random compute  asha compute to reach  fraction  asha trials so far  asha best (trials, at max)");
         foreach (int seed in options.SeedList)
         {
