@@ -7,15 +7,9 @@ using OpenTelemetry.Trace;
 
 namespace Foldwise.Tuning.Tests;
 
-/// <summary>One run of <see cref="QuickDemo"/> through the search use case (one slot of one thread, spans to memory), shared by a test class.</summary>
+/// <summary>One run of <see cref="QuickDemo"/> through the search use case (one slot of one thread, spans to memory), shared by the test classes of <see cref="QuickDemoCollection"/>.</summary>
 public sealed class QuickDemoRun : IAsyncLifetime, IDisposable
 {
-    /// <summary>
-    /// The test classes that read this run share one instance: one search, not one per class (searches of the same
-    /// name started in the same second share a search id, so their traces could not be told apart).
-    /// </summary>
-    public const string Collection = "quick demo run";
-
     private readonly TempFolder folder = new();
 
     public SyncEvents Events { get; } = new();
@@ -41,6 +35,3 @@ public sealed class QuickDemoRun : IAsyncLifetime, IDisposable
 
     public void Dispose() => folder.Dispose();
 }
-
-[CollectionDefinition(QuickDemoRun.Collection)]
-public sealed class QuickDemoRunCollection : ICollectionFixture<QuickDemoRun>;

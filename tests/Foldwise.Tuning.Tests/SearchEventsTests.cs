@@ -3,7 +3,7 @@ using Foldwise.Core.Events;
 namespace Foldwise.Tuning.Tests;
 
 /// <summary>What the use case reports while it runs, read by the command line and by anyone following a search.</summary>
-[Collection(QuickDemoRun.Collection)]
+[Collection(QuickDemoCollection.Name)]
 public sealed class SearchEventsTests(QuickDemoRun run)
 {
     [Fact]

@@ -4,7 +4,7 @@ using Foldwise.Cluster.Telemetry;
 namespace Foldwise.Tuning.Tests;
 
 /// <summary>One search is one trace: its span parents every trial (and so every fold) and the blend.</summary>
-[Collection(QuickDemoRun.Collection)]
+[Collection(QuickDemoCollection.Name)]
 public sealed class SearchTraceTests(QuickDemoRun run)
 {
     [Fact]
