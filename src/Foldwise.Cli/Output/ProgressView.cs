@@ -17,6 +17,7 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
     private readonly object gate = new();
     private LiveBar? live;
     private IReadOnlyDictionary<string, ParameterSpace> spaces = new Dictionary<string, ParameterSpace>();
+    private readonly StepLine stepLine = new(console);
 
     public void Report(SearchEvent value)
     {
@@ -28,6 +29,13 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
 
     private void Render(SearchEvent value)
     {
+        if (value is StepProgress step)
+        {
+            stepLine.Show(step);
+            return;
+        }
+
+        stepLine.Clear();
         switch (value)
         {
             case TablesRead r:
@@ -87,6 +95,9 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
             case TrialFailed f:
                 live?.Update(f.Progress);
                 break;
+            case SlotFoldFitted f:
+                FoldFitted(f);
+                break;
             case SearchStopped s:
                 Stopped(s.Progress);
                 break;
@@ -129,6 +140,18 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
             $"trial {trial.Id,4} {trial.Family,-9} rung {trial.Rung} {trial.Budget,4} rounds {trial.Score:F5} " +
             $"{trial.Duration?.TotalSeconds,5:F1} s {trial.Worker}/{trial.Slot} | done {p.Done}{Of(p.TrialBudget)} running {p.Running} best {p.Best:F5} | " +
             trial.Parameters.Describe(spaces.GetValueOrDefault(trial.Family)));
+    }
+
+    private void FoldFitted(SlotFoldFitted f)
+    {
+        if (live is not null)
+        {
+            live.FoldFitted(f);
+        }
+        else if (f.IsLong)
+        {
+            console.Profile.Out.Writer.WriteLine($"  trial {f.TrialId}: fold {f.Fold + 1} of {f.Folds} fitted after {f.Elapsed.TotalSeconds:F0} s ({f.Worker}/{f.Slot})");
+        }
     }
 
     private void Stopped(SearchProgress end)
