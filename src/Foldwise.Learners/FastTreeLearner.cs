@@ -30,7 +30,7 @@ public sealed class FastTreeLearner : IFoldLearner
     // ML.NET 5 FastTree skips training rows that hold a NaN feature and scores NaN as neither zero nor those rows
     // (MissingCellTests), so it reads the fold's median-imputed inputs with their "was missing" columns.
     public FoldPrediction Fit(FoldJob job, CancellationToken cancellation) =>
-        FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.FastTree(Options(job)).Fit(train), cancellation, imputes: true);
+        FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.FastTree(Options(job)).Fit(train), cancellation);
 
     internal static FastTreeRegressionTrainer.Options Options(FoldJob job)
     {

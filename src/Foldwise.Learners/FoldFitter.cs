@@ -20,14 +20,18 @@ internal static class FoldFitter
     /// </summary>
     private static readonly Lock OneFitAtATime = new();
 
-    /// <param name="imputes">True for a family that cannot take NaN: it reads the fold's median-imputed inputs.</param>
-    public static FoldPrediction Fit(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation, bool imputes = false)
+    /// <summary>The family's descriptor says which inputs it reads (<see cref="FamilyInput"/>); they are prepared from the fold's training rows.</summary>
+    public static FoldPrediction Fit(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation) =>
+        Fit(family, FamilyDescriptors.Get(family).Input, job, train, cancellation);
+
+    /// <param name="input">The inputs to prepare; MissingCellTests passes <see cref="FamilyInput.RawWithMissing"/> to see what a library does with NaN.</param>
+    internal static FoldPrediction Fit(string family, FamilyInput input, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation)
     {
         Check(family, job);
         cancellation.ThrowIfCancellationRequested();
         var ml = new MLContext(job.Seed);
         var data = job.Data;
-        var inputs = imputes ? job.Features.Imputed(job.TrainRows) : job.Features;
+        var inputs = job.Features.For(input, job.TrainRows);
 
         // Trees fit the target less its training mean: FastTree boosts from zero, so on a log1p target (mean ~8)
         // a low-budget rung would otherwise be scored on how far it got from zero, not on what it learned.

@@ -26,7 +26,7 @@ public sealed class ForestLearner : IFoldLearner
     public FoldPrediction Fit(FoldJob job, CancellationToken cancellation)
     {
         // FastForest trains a NaN cell as 0 but scores it above every split (MissingCellTests): it reads imputed inputs.
-        return FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.FastForest(Options(job)).Fit(train), cancellation, imputes: true);
+        return FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.FastForest(Options(job)).Fit(train), cancellation);
     }
 
     internal static FastForestRegressionTrainer.Options Options(FoldJob job)

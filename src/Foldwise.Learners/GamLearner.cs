@@ -25,7 +25,7 @@ public sealed class GamLearner : IFoldLearner
     public FoldPrediction Fit(FoldJob job, CancellationToken cancellation)
     {
         // GAM trains a NaN cell as 0 but scores it in its lowest bin (MissingCellTests): it reads imputed inputs.
-        return FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.Gam(Options(job)).Fit(train), cancellation, imputes: true);
+        return FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.Gam(Options(job)).Fit(train), cancellation);
     }
 
     internal static GamRegressionTrainer.Options Options(FoldJob job)
