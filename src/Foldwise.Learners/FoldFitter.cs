@@ -21,7 +21,29 @@ internal static class FoldFitter
     private static readonly Lock OneFitAtATime = new();
 
     /// <param name="imputes">True for a family that cannot take NaN: it reads the fold's median-imputed inputs.</param>
-    public static FoldPrediction Fit(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation, bool imputes = false)
+    public static FoldPrediction Fit(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation, bool imputes = false) =>
+        Run(family, job, train, imputes, keep: false, cancellation).Prediction;
+
+    /// <summary>As <see cref="Fit"/>, with the trained model in ML.NET's own model format as the kept bytes.</summary>
+    public static KeptFold FitAndKeep(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation, bool imputes = false) =>
+        Run(family, job, train, imputes, keep: true, cancellation);
+
+    /// <summary>
+    /// Scores every test row of <paramref name="job"/> with a model <see cref="FitAndKeep"/> kept for the same fold, on
+    /// inputs prepared as for that fit (the same imputation, the same training mean added back).
+    /// </summary>
+    public static double[] PredictKept(FoldJob job, byte[] model, bool imputes = false)
+    {
+        ArgumentNullException.ThrowIfNull(job);
+        ArgumentNullException.ThrowIfNull(model);
+        var ml = new MLContext(job.Seed);
+        var inputs = imputes ? job.Features.Imputed(job.TrainRows) : job.Features;
+        using var stream = new MemoryStream(model, writable: false);
+        var loaded = ml.Model.Load(stream, out _);
+        return Score(loaded, SparseViews.Rows(ml, inputs.Test, [.. Enumerable.Range(0, inputs.Test.RowCount)], labels: null), inputs.Test.RowCount, TrainingMean(job));
+    }
+
+    private static KeptFold Run(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, bool imputes, bool keep, CancellationToken cancellation)
     {
         Check(family, job);
         cancellation.ThrowIfCancellationRequested();
@@ -42,8 +64,15 @@ internal static class FoldFitter
             cancellation.ThrowIfCancellationRequested();
             var validation = Score(model, SparseViews.Rows(ml, inputs.Train, job.ValidationRows, labels: null), job.ValidationRows.Length, offset);
             var test = Score(model, SparseViews.Test(inputs.Test), inputs.Test.RowCount, offset);
-            return new FoldPrediction(validation, test);
+            return new KeptFold(new FoldPrediction(validation, test), keep ? Save(ml, model, trainView.Schema) : []);
         }
+    }
+
+    private static byte[] Save(MLContext ml, ITransformer model, DataViewSchema schema)
+    {
+        using var stream = new MemoryStream();
+        ml.Model.Save(model, schema, stream);
+        return stream.ToArray();
     }
 
     /// <summary>The training rows' mean target: every tree learner here fits the target less it.</summary>

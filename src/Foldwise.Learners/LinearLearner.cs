@@ -11,7 +11,7 @@ namespace Foldwise.Learners;
 /// rows, on inputs prepared from those rows only (<see cref="ColumnScaling"/>), after median imputation (SDCA predicts NaN for a NaN cell). SDCA's L1
 /// option is left at 0: its fits matched no mapping onto scikit-learn's ElasticNet penalties (seen 2026-12-05).
 /// </summary>
-public sealed class LinearLearner : IFoldLearner
+public sealed class LinearLearner : IFoldLearner, IKeepsModels
 {
     /// <summary>
     /// SDCA stops before its budget once the duality gap is this small relative to the loss. At ML.NET's regression
@@ -28,14 +28,29 @@ public sealed class LinearLearner : IFoldLearner
 
     public string Family => FamilyNames.Linear;
 
-    public FoldPrediction Fit(FoldJob job, CancellationToken cancellation)
+    public FoldPrediction Fit(FoldJob job, CancellationToken cancellation) => Fit(job, keep: false, cancellation).Prediction;
+
+    public KeptFold FitAndKeep(FoldJob job, CancellationToken cancellation) => Fit(job, keep: true, cancellation);
+
+    public double[] PredictKept(FoldJob job, byte[] model) => FoldFitter.PredictKept(Prepared(job), model);
+
+    private KeptFold Fit(FoldJob job, bool keep, CancellationToken cancellation)
     {
         FoldFitter.Check(Family, job);
-        // SDCA trains a NaN cell as 0 and predicts NaN for it (MissingCellTests): it scales the fold's imputed inputs.
+        var prepared = Prepared(job);
+        Func<MLContext, IDataView, ITransformer> train = (ml, rows) => ml.Regression.Trainers.Sdca(Options(job)).Fit(rows);
+        return keep ? FoldFitter.FitAndKeep(Family, prepared, train, cancellation) : new KeptFold(FoldFitter.Fit(Family, prepared, train, cancellation), []);
+    }
+
+    /// <summary>
+    /// The job on the fold's imputed inputs, scaled as its training rows say: SDCA trains a NaN cell as 0 and predicts
+    /// NaN for it (MissingCellTests).
+    /// </summary>
+    private static FoldJob Prepared(FoldJob job)
+    {
         var inputs = job.Features.Imputed(job.TrainRows);
         var scaling = ColumnScaling.Learn(inputs.Train, job.TrainRows);
-        var prepared = job with { Inputs = new FoldInputs(scaling.Apply(inputs.Train), scaling.Apply(inputs.Test)) };
-        return FoldFitter.Fit(Family, prepared, (ml, train) => ml.Regression.Trainers.Sdca(Options(job)).Fit(train), cancellation);
+        return job with { Inputs = new FoldInputs(scaling.Apply(inputs.Train), scaling.Apply(inputs.Test)) };
     }
 
     internal static SdcaRegressionTrainer.Options Options(FoldJob job)
