@@ -1,0 +1,142 @@
+using System.Diagnostics;
+using Foldwise.Core.Blending;
+using Foldwise.Core.Data;
+using Foldwise.Core.Definition;
+using Foldwise.Core.Events;
+using Foldwise.Core.Learning;
+using Foldwise.Core.Metrics;
+using Foldwise.Core.Search;
+using Foldwise.Learners;
+using Foldwise.Storage;
+
+namespace Foldwise.Tuning;
+
+/// <summary>
+/// Keeps the fold models of a blend's members beside the store, so new rows can be scored later. The coordinator
+/// re-fits each member from the stored tables with the trial's own parameters, budget and seeds (workers send back
+/// predictions, not models), checks the re-fit reproduces the search's test predictions, and writes one file per
+/// member (<see cref="KeptModelFiles"/>). Members kept by an earlier blend of the same search are not fitted again.
+/// </summary>
+public static class ModelKeeping
+{
+    /// <summary>
+    /// The largest relative difference (absolute below 1) allowed between a re-fitted member's test predictions and
+    /// the search's own, on the fitting scale. Larger means the re-fit is not the model the search scored.
+    /// </summary>
+    public const double Tolerance = 1e-6;
+
+    /// <summary>
+    /// Keeps the members with a positive weight and records them in the store; on any failure the store's record of
+    /// kept models is removed (it would describe another blend) and <see cref="ModelsNotKept"/> says why.
+    /// </summary>
+    public static KeptModels? Keep(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, BlendSummary blend, IProgress<SearchEvent> events, CancellationToken abandon = default)
+    {
+        ArgumentNullException.ThrowIfNull(store);
+        ArgumentNullException.ThrowIfNull(header);
+        ArgumentNullException.ThrowIfNull(blend);
+        ArgumentNullException.ThrowIfNull(events);
+        var clock = Stopwatch.StartNew();
+        try
+        {
+            var (kept, refitted) = KeepMembers(store, header, definition, outDir, blend, abandon);
+            store.SaveKept(kept);
+            RemoveUnused(outDir, kept);
+            events.Report(new ModelsKept(kept, KeptModelFiles.FolderIn(outDir), refitted, clock.Elapsed));
+            return kept;
+        }
+        catch (OperationCanceledException)
+        {
+            store.ForgetKept();
+            throw;
+        }
+        catch (Exception ex) when (ex is NotKeptException or InputException)
+        {
+            store.ForgetKept();
+            events.Report(new ModelsNotKept(ex.Message));
+            return null;
+        }
+    }
+
+    private static (KeptModels Kept, int Refitted) KeepMembers(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, BlendSummary blend, CancellationToken abandon)
+    {
+        var earlier = store.LoadKept();
+        var trials = store.LoadTrials().ToDictionary(t => t.Id);
+        var metric = Metric.For(definition.Metric);
+        TrialData? data = null;
+        var members = new List<KeptMember>();
+        int refitted = 0;
+        foreach (var member in blend.Members.Where(m => m.Weight > 0))
+        {
+            abandon.ThrowIfCancellationRequested();
+            var before = earlier?.SearchId == header.SearchId ? earlier.Members.FirstOrDefault(m => m.TrialId == member.TrialId) : null;
+            if (before is not null && KeptModelFiles.Holds(outDir, before))
+            {
+                members.Add(before with { Weight = member.Weight });
+                continue;
+            }
+
+            var learner = LearnerCatalog.BuiltIn.Get(member.Family);
+            if (learner is not IKeepsModels)
+            {
+                throw new NotKeptException($"the {member.Family} family cannot keep its models");
+            }
+
+            data ??= TrialData.From(TableFiles.Read(outDir, header.TrainHash, "training"), TableFiles.Read(outDir, header.TestHash, "test"), header.Folds, metric);
+            var fit = TrialFit.For(trials[member.TrialId], trials, definition);
+            var keeping = new KeepingLearner(learner);
+            var outcome = new TrialExecutor(keeping).Run(data, fit.Run, fit.Budget, fit.Seed, Environment.ProcessorCount, abandon);
+            var searched = store.LoadVectors(member.TrialId)?.Test ?? throw new NotKeptException($"trial {member.TrialId}'s test predictions are missing from the store");
+            double difference = LargestDifference(outcome.Test, searched);
+            if (difference > Tolerance)
+            {
+                throw new NotKeptException(
+                    $"re-fitting trial {member.TrialId} ({member.Family}) gave test predictions up to {difference:G3} (relative) from the search's own, above {Tolerance:G}; " +
+                    "its models would not be the ones the search scored, so none were kept");
+            }
+
+            var (hash, bytes) = KeptModelFiles.Write(outDir, header.SearchId, member.TrialId, member.Family, keeping.Models);
+            members.Add(new KeptMember(member.TrialId, member.Family, member.Weight, hash, bytes, keeping.Models.Count, difference));
+            refitted++;
+        }
+
+        return (new KeptModels(header.SearchId, [.. members], DateTimeOffset.UtcNow), refitted);
+    }
+
+    /// <summary>The largest difference between two vectors, relative to the search's value (absolute below 1).</summary>
+    internal static double LargestDifference(double[] refitted, double[] searched)
+    {
+        if (refitted.Length != searched.Length)
+        {
+            return double.PositiveInfinity;
+        }
+
+        double largest = 0;
+        for (int i = 0; i < refitted.Length; i++)
+        {
+            double difference = Math.Abs(refitted[i] - searched[i]) / Math.Max(1, Math.Abs(searched[i]));
+            largest = double.IsNaN(difference) ? double.PositiveInfinity : Math.Max(largest, difference);
+        }
+
+        return largest;
+    }
+
+    /// <summary>Model files of earlier blends that this record no longer names are deleted, so a folder holds one blend's models.</summary>
+    private static void RemoveUnused(string outDir, KeptModels kept)
+    {
+        if (!Directory.Exists(KeptModelFiles.FolderIn(outDir)))
+        {
+            return;
+        }
+
+        var named = kept.Members.Select(m => m.Hash + ".fwm").ToHashSet(StringComparer.Ordinal);
+        foreach (string file in Directory.EnumerateFiles(KeptModelFiles.FolderIn(outDir), "*.fwm"))
+        {
+            if (!named.Contains(Path.GetFileName(file)))
+            {
+                File.Delete(file);
+            }
+        }
+    }
+
+    private sealed class NotKeptException(string message) : Exception(message);
+}
