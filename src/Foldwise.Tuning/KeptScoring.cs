@@ -37,7 +37,11 @@ public static class KeptScoring
 
         // Every model file is checked before the (possibly large) table of new rows is read.
         var models = kept.Members.Select(m => KeptModelFiles.Read(outDir, header.SearchId, m)).ToList();
-        var train = TableFiles.Read(outDir, header.TrainHash, "training");
+        var stored = TableFiles.Read(outDir, header.TrainHash, "training");
+
+        // Named as the search's training file, so a refused column points at the file a person knows.
+        var train = new FeatureTable(
+            $"the search's training table ({Path.GetFileName(definition.Data.Train)}, screened)", stored.Ids, stored.FeatureNames, stored.Columns, stored.Target, stored.CategoryNames, stored.Categories);
         var raw = CsvTableReader.ReadTest(rowsPath, definition.Data.IdColumn, definition.Data.TargetColumn, definition.Data.Rules, train);
         var rows = TableAlignment.AlignTest(train, raw).Table;
         var read = clock.Elapsed;
