@@ -65,7 +65,7 @@ if (options.Trial)
 
 if (options.Trial)
 {
-    // One fold at 1 round: roughly the fixed cost of a fold (LightGBM's dataset, scoring 900 + 45,000 rows).
+    // One fold at 1 round: roughly the fixed cost of a fold (LightGBM's dataset, scoring 600 + 12,000 rows).
     var one = new FoldJob(data, 0, folds.TrainRows(0), folds.ValidationRows(0), ParameterSet.Of(parameters), 1, options.Seed, options.Threads);
     clock.Restart();
     new LightGbmLearner().Fit(one, CancellationToken.None);

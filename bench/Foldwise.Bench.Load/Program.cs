@@ -3,11 +3,11 @@ using Foldwise.Bench.Load;
 using Foldwise.Csv;
 
 // Usage: Foldwise.Bench.Load [rows] [columns] [density] [--keep]
-// Defaults: 49,000 × 5,000 at 3% non-zero, the size of the field's test table.
+// Defaults: 12,000 × 7,000 at 6 % non-zero, the size of the full demo's test table.
 var numbers = args.Where(a => !a.StartsWith("--", StringComparison.Ordinal)).ToArray();
-int rows = numbers.Length > 0 ? int.Parse(numbers[0]) : 49_000;
-int columns = numbers.Length > 1 ? int.Parse(numbers[1]) : 5_000;
-double density = numbers.Length > 2 ? double.Parse(numbers[2]) : 0.03;
+int rows = numbers.Length > 0 ? int.Parse(numbers[0]) : 12_000;
+int columns = numbers.Length > 1 ? int.Parse(numbers[1]) : 7_000;
+double density = numbers.Length > 2 ? double.Parse(numbers[2]) : 0.06;
 bool keep = args.Contains("--keep");
 
 string directory = Path.Combine(Path.GetTempPath(), "foldwise-bench-load-" + Environment.ProcessId);

@@ -12,7 +12,7 @@ namespace Foldwise.Csv;
 /// </summary>
 internal static class TableLoader
 {
-    // A 5,000-column row is ~10–40 K characters; the buffer grows up to this before a row counts as broken.
+    // A 7,000-column row is ~15–60 K characters; the buffer grows up to this before a row counts as broken.
     private const int MaxRowChars = 1 << 25;
 
     public static FeatureTable Load(string path, string idColumn, string? targetColumn, TargetUse use, Metric? metric, TableRules rules, TrainingColumns? training)

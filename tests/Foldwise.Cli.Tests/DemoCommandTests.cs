@@ -18,7 +18,7 @@ public sealed class DemoCommandTests : IDisposable
         var demo = CliHarness.Run("demo", "--quick", "--data-only", "--out", workspace.Out);
 
         Assert.True(demo.ExitCode == 0, demo.Output);
-        Assert.Contains("train.csv 800 × 400, test.csv 2,000 rows, search.json", demo.Output);
+        Assert.Contains("train.csv 800 × 400, test.csv 3,200 rows, search.json", demo.Output);
         var definition = DefinitionReader.Read(Path.Combine(workspace.Out, "search.json"));
         var train = CsvTableReader.ReadTraining(definition.Data.Train, definition.Data.IdColumn, definition.Data.TargetColumn, Metric.Rmsle);
         Assert.Equal(800, train.RowCount);
@@ -36,6 +36,6 @@ public sealed class DemoCommandTests : IDisposable
         Assert.Contains("nested estimate", demo.Output);
         var rows = File.ReadAllLines(Path.Combine(workspace.Out, "predictions.csv"));
         Assert.Equal("shipper_id,predicted_q1_spend", rows[0]);
-        Assert.Equal(2001, rows.Length);
+        Assert.Equal(3201, rows.Length);
     }
 }

@@ -21,7 +21,7 @@ public sealed class SearchEventsTests(QuickDemoRun run) : IClassFixture<QuickDem
     [Fact]
     public void Reports_each_trial_started_and_scored_and_each_promotion_with_its_parent()
     {
-        // Given a finished run of the quick demo (trials 6, 8 and 10 retrain 1, 7 and 9 at 30 rounds)
+        // Given a finished run of the quick demo (trials 6, 8 and 10 retrain 3, 7 and 9 at 30 rounds)
         var started = run.Events.OfType<TrialStarted>();
         var scored = run.Events.OfType<TrialScored>();
         var promoted = run.Events.OfType<CandidatePromoted>();
@@ -32,12 +32,12 @@ public sealed class SearchEventsTests(QuickDemoRun run) : IClassFixture<QuickDem
         Assert.Equal(10, scored[^1].Progress.Done);
 
         // And each promotion names the trial it retrains
-        Assert.Equal([(6, 1), (8, 7), (10, 9)], promoted.Select(e => (e.Trial.Id, e.Trial.ParentId ?? 0)));
+        Assert.Equal([(6, 3), (8, 7), (10, 9)], promoted.Select(e => (e.Trial.Id, e.Trial.ParentId ?? 0)));
 
         // And the blend reports the summary the result returns, and where it wrote the predictions
         var blend = Assert.Single(run.Events.OfType<BlendSolved>());
         Assert.Same(run.Result.Blend, blend.Summary);
         Assert.Equal(run.Result.PredictionFile, blend.PredictionFile);
-        Assert.Equal(2_000, blend.Predictions);
+        Assert.Equal(3_200, blend.Predictions);
     }
 }

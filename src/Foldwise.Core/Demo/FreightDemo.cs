@@ -15,14 +15,14 @@ public static class FreightDemo
 
     public const string TargetColumn = "q1_spend";
 
-    /// <summary>Non-zero cells over all cells that the generator aims for (97% zeros).</summary>
-    public const double TargetDensity = 0.03;
+    /// <summary>Non-zero cells over all cells that the generator aims for (94 % zeros).</summary>
+    public const double TargetDensity = 0.06;
 
-    /// <summary>Rows and columns of each size: test rows are ten times the training rows for <see cref="DemoSize.Full"/>.</summary>
+    /// <summary>Rows and columns of each size: the test table is four times longer than the training table.</summary>
     public static (int TrainRows, int TestRows, int Columns) Shape(DemoSize size) => size switch
     {
-        DemoSize.Quick => (800, 2_000, 400),
-        DemoSize.Full => (4_500, 45_000, 5_000),
+        DemoSize.Quick => (800, 3_200, 400),
+        DemoSize.Full => (3_000, 12_000, 7_000),
         _ => throw new ArgumentOutOfRangeException(nameof(size), size, "unknown demo size"),
     };
 

@@ -15,7 +15,7 @@ public sealed class FreightDemoTests
     {
         var (train, test) = Quick;
 
-        Assert.Equal((800, 400, 2_000, 400), (train.RowCount, train.FeatureCount, test.RowCount, test.FeatureCount));
+        Assert.Equal((800, 400, 3_200, 400), (train.RowCount, train.FeatureCount, test.RowCount, test.FeatureCount));
         Assert.True(train.HasTarget);
         Assert.False(test.HasTarget);
         Assert.Equal(train.FeatureNames.ToArray(), test.FeatureNames.ToArray());
@@ -23,24 +23,24 @@ public sealed class FreightDemoTests
 
     [Fact]
     [Trait(Lane.Key, Lane.Slow)]
-    public void Makes_a_full_table_with_the_fields_character()
+    public void Makes_a_full_table_wide_sparse_and_with_a_test_table_four_times_longer()
     {
         // Given the full demo
         var (train, test) = Full.Value;
 
-        // Then it is 4,500 × 5,000 at ~97% zeros (the generator's full size, FreightDemo.Shape), with a test table ten times longer
-        Assert.Equal((4_500, 5_000), (train.RowCount, train.FeatureCount));
-        Assert.Equal(10 * train.RowCount, test.RowCount);
-        Assert.InRange(train.Density, 0.025, 0.035);
-        Assert.InRange(test.Density, 0.025, 0.035);
+        // Then it is 3,000 × 7,000 at ~94 % zeros, with a test table four times longer
+        Assert.Equal((3_000, 7_000), (train.RowCount, train.FeatureCount));
+        Assert.Equal(4 * train.RowCount, test.RowCount);
+        Assert.InRange(train.Density, 0.055, 0.065);
+        Assert.InRange(test.Density, 0.055, 0.065);
         Assert.True(CountConstant(train) >= 5, "constant columns");
         Assert.True(CountDuplicates(train) >= 20, "duplicated columns");
     }
 
     [Fact]
-    public void Is_about_97_percent_zeros_at_the_quick_size_too()
+    public void Is_about_94_percent_zeros_at_the_quick_size_too()
     {
-        Assert.InRange(Quick.Train.Density, 0.025, 0.035);
+        Assert.InRange(Quick.Train.Density, 0.055, 0.065);
     }
 
     [Fact]
