@@ -12,7 +12,7 @@ namespace Foldwise.Tuning.Tests;
 /// nothing written. Each test works on its own copy of one finished quick-demo search.
 /// </summary>
 [Trait(Lane.Key, Lane.Slow)]
-public sealed class KeptModelsTests(QuickDemoRun run) : IClassFixture<QuickDemoRun>, IDisposable
+public sealed class KeptModelsTests(KeptDemoRun run) : IClassFixture<KeptDemoRun>, IDisposable
 {
     private readonly TempFolder copy = new();
 
@@ -161,7 +161,7 @@ public sealed class KeptModelsTests(QuickDemoRun run) : IClassFixture<QuickDemoR
 
     public void Dispose() => copy.Dispose();
 
-    private string TestCsv => Path.Combine(Path.GetDirectoryName(run.Result.OutDir)!, "test.csv");
+    private string TestCsv => run.TestCsv;
 
     /// <summary>The search's folder copied (store, tables, models, prediction file), so a test may change it.</summary>
     private string CopyOfSearch()
