@@ -18,6 +18,12 @@ public static class ExitCodes
     /// <summary>Another process is writing the search's store (a coordinator runs it already).</summary>
     public const int StoreBusy = 4;
 
+    /// <summary>
+    /// This machine cannot work for the cluster: the coordinator runs another build, no family trains here, or the
+    /// cluster's mutual TLS refuses it.
+    /// </summary>
+    public const int Refused = 5;
+
     /// <summary>Stopped by the user before the blend (second Ctrl-C or SIGTERM).</summary>
     public const int Interrupted = 130;
 }

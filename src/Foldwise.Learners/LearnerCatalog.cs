@@ -23,6 +23,8 @@ public sealed class LearnerCatalog : ILearnerCatalog
             ? learner
             : throw new ArgumentException($"unknown learner family '{family}'; this worker runs {string.Join(", ", Families)}", nameof(family));
 
+    public IReadOnlyList<string> MissingLibraries() => NativePrerequisites.Missing();
+
     /// <summary>Whether every built-in family name has a learner here (a test pins it against <see cref="FamilyNames.All"/>).</summary>
     internal bool Covers(IEnumerable<string> families) => families.All(byFamily.ContainsKey);
 }

@@ -17,4 +17,7 @@ public enum SearchEnding
 
     /// <summary>Abandoned during the blend: every trial is stored, the prediction file was not written.</summary>
     BlendAbandoned,
+
+    /// <summary>The store refused a write (a full disk): the search stopped, every trial committed before is kept.</summary>
+    StoreFailed,
 }

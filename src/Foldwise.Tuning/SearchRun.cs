@@ -171,6 +171,12 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
             var session = new CoordinatorSession(manifest, coordinator, store, events, span.Context);
             cluster.Sessions.Add(session);
             await session.Finished.WaitAsync(abandon);
+            if (session.StoreFault is { } fault)
+            {
+                // The store refused a write: nothing more is written, what it committed before stays for 'resume'.
+                return new SearchResult(SearchEnding.StoreFailed, header.SearchId, outDir, null) { StoreFault = fault };
+            }
+
             events.Report(new SearchStopped(header.SearchId, coordinator.Progress()));
         }
         catch (OperationCanceledException) when (stopping.Abandon.IsCancellationRequested)

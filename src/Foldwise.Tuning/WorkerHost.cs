@@ -35,7 +35,8 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
     /// <summary>Attempts made before this process started (a fresh process continues the count).</summary>
     public int EarlierAttempts { get; init; }
 
-    public async Task RunAsync(CancellationToken stopping)
+    /// <summary>Runs until stopped; returns null then, or the one line saying why this worker cannot work for the cluster.</summary>
+    public async Task<string?> RunAsync(CancellationToken stopping)
     {
         events.Report(new WorkerStarting(options.Name, role.Join?.ToString() ?? "", role.Advertise.ToString(), role.Certificate is not null));
         int attempt = EarlierAttempts;
@@ -47,10 +48,23 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
             {
                 await host.StartAsync(stopping);
                 events.Report(new WorkerJoined(role.Join?.ToString() ?? "", options.Name, options.Slots, options.Threads));
-                string why = await WatchAsync(host, stopping);
+                var end = await WatchAsync(host, stopping);
+                if (end.Refusal is { } refusal)
+                {
+                    events.Report(new WorkerRefused(role.Join?.ToString() ?? "", refusal));
+                    await StopQuietly(host);
+                    return refusal;
+                }
+
+                if (end.Left)
+                {
+                    await StopQuietly(host);
+                    break;
+                }
+
                 if (!stopping.IsCancellationRequested)
                 {
-                    events.Report(new WorkerLostCluster(why));
+                    events.Report(end.Rejoining);
                 }
             }
             catch (OperationCanceledException) when (stopping.IsCancellationRequested)
@@ -72,6 +86,7 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
         }
 
         events.Report(new WorkerStopped());
+        return null;
     }
 
     private IHost Build()
@@ -89,19 +104,47 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
         return builder.Build();
     }
 
-    /// <summary>Returns when the worker should start over: the silo stopped itself, or the coordinator stayed unreachable.</summary>
-    private async Task<string> WatchAsync(IHost host, CancellationToken stopping)
+    /// <summary>
+    /// Returns when the worker should start over (the silo stopped itself, or the coordinator stayed unreachable), leave
+    /// (refused, or its search finished and it was asked to leave then), or was stopped. Says which search it works on,
+    /// and plainly when that search finished, so the coordinator going away after a search is not mistaken for a fault.
+    /// </summary>
+    private async Task<WatchEnd> WatchAsync(IHost host, CancellationToken stopping)
     {
         var lifetime = host.Services.GetRequiredService<IHostApplicationLifetime>();
         var board = host.Services.GetRequiredService<IGrainFactory>().GetGrain<ISearchBoardGrain>(0);
+        var stop = host.Services.GetRequiredService<WorkerStop>();
         using var either = CancellationTokenSource.CreateLinkedTokenSource(stopping, lifetime.ApplicationStopping);
         DateTime? unreachableSince = null;
+        string[] active = [];
+        string? finished = null;
         while (!either.IsCancellationRequested)
         {
+            if (stop.Reason is { } refusal)
+            {
+                return WatchEnd.Refused(refusal);
+            }
+
             try
             {
-                await board.ActiveSearchesAsync().WaitAsync(TimeSpan.FromSeconds(5), either.Token);
+                string[] now = await board.ActiveSearchesAsync().WaitAsync(TimeSpan.FromSeconds(5), either.Token);
                 unreachableSince = null;
+                foreach (string started in now.Except(active))
+                {
+                    events.Report(new WorkerOnSearch(started));
+                }
+
+                foreach (string ended in active.Except(now))
+                {
+                    finished = ended;
+                    events.Report(new WorkerSearchFinished(ended, options.LeaveWhenDone));
+                    if (options.LeaveWhenDone)
+                    {
+                        return WatchEnd.Leave;
+                    }
+                }
+
+                active = now;
             }
             catch (OperationCanceledException) when (either.IsCancellationRequested)
             {
@@ -109,10 +152,17 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
             }
             catch (Exception e) when (e is not OperationCanceledException || !either.IsCancellationRequested)
             {
+                if (unreachableSince is null && active.Length == 0 && finished is not null)
+                {
+                    events.Report(new WorkerCoordinatorGone(finished));
+                }
+
                 unreachableSince ??= DateTime.UtcNow;
                 if (DateTime.UtcNow - unreachableSince >= LostAfter)
                 {
-                    return $"coordinator unreachable for {LostAfter.TotalSeconds:F0} s: {FirstLine(e)}";
+                    return WatchEnd.Rejoin(finished is not null && active.Length == 0
+                        ? new WorkerAwaitsNextSearch()
+                        : new WorkerLostCluster($"coordinator unreachable for {LostAfter.TotalSeconds:F0} s: {FirstLine(e)}"));
                 }
             }
 
@@ -126,7 +176,17 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
             }
         }
 
-        return "the silo was stopped by the cluster";
+        return stop.Reason is { } late ? WatchEnd.Refused(late) : WatchEnd.Rejoin(new WorkerLostCluster("the silo was stopped by the cluster"));
+    }
+
+    /// <summary>How watching ended: joining again (with the event saying why), refused, or leaving.</summary>
+    private sealed record WatchEnd(SearchEvent Rejoining, string? Refusal, bool Left)
+    {
+        public static WatchEnd Leave { get; } = new(new WorkerStopped(), null, Left: true);
+
+        public static WatchEnd Refused(string line) => new(new WorkerStopped(), line, Left: false);
+
+        public static WatchEnd Rejoin(SearchEvent why) => new(why, null, Left: false);
     }
 
     private static async Task StopQuietly(IHost host)

@@ -72,9 +72,38 @@ public sealed class CommandLineTests : IDisposable
     }
 
     [Fact]
+    public void A_coordinator_listening_beyond_loopback_without_a_certificate_is_refused_unless_an_open_cluster_is_accepted()
+    {
+        // When a search would listen on an office address without --cert
+        var run = CliHarness.Run("run", "--train", "a.csv", "--test", "b.csv", "--id", "i", "--target", "y", "--out", workspace.Out,
+            "--port", "23111", "--advertise", "192.0.2.10");
+
+        // Then it does not start, and says the risk and both ways out in one line
+        Assert.Equal(ExitCodes.Usage, run.ExitCode);
+        Assert.Contains("anyone who can reach this machine's ports could read the training table and post results", run.Output);
+        Assert.Contains("--cert FILE", run.Output);
+        Assert.Contains("--open-cluster", run.Output);
+        Assert.False(Directory.Exists(workspace.Out));
+    }
+
+    [Fact]
+    public void Clear_cache_deletes_the_cached_tables_without_joining()
+    {
+        string cache = workspace.PathOf("tables");
+        Directory.CreateDirectory(cache);
+        File.WriteAllText(Path.Combine(cache, "0a.fwt"), "x");
+
+        var clear = CliHarness.Run("worker", "--clear-cache", "--cache", cache);
+
+        Assert.Equal(ExitCodes.Ok, clear.ExitCode);
+        Assert.Contains("Deleted 1 cached table(s)", clear.Output);
+        Assert.Empty(Directory.GetFiles(cache));
+    }
+
+    [Fact]
     public void Exit_codes_are_distinct_and_the_readme_lists_each()
     {
-        int[] codes = [ExitCodes.Ok, ExitCodes.BadInput, ExitCodes.Usage, ExitCodes.Failed, ExitCodes.StoreBusy, ExitCodes.Interrupted];
+        int[] codes = [ExitCodes.Ok, ExitCodes.BadInput, ExitCodes.Usage, ExitCodes.Failed, ExitCodes.StoreBusy, ExitCodes.Refused, ExitCodes.Interrupted];
         string readme = File.ReadAllText(Path.Combine(RepositoryRoot(), "README.md"));
 
         Assert.Equal(codes.Length, codes.Distinct().Count());

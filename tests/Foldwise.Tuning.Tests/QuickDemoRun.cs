@@ -7,7 +7,7 @@ using OpenTelemetry.Trace;
 
 namespace Foldwise.Tuning.Tests;
 
-/// <summary>One run of <see cref="QuickDemo"/> through the search use case (one slot of one thread, spans to memory), shared by a test class.</summary>
+/// <summary>One run of <see cref="QuickDemo"/> through the search use case (one slot of one thread, spans to memory), shared by the test classes of <see cref="QuickDemoCollection"/>.</summary>
 public sealed class QuickDemoRun : IAsyncLifetime, IDisposable
 {
     private readonly TempFolder folder = new();

@@ -7,7 +7,8 @@ namespace Foldwise.Tuning.Tests;
 /// Pins what the search computes for one definition and seed, so a change of structure (the use case's move out of
 /// the command line, the one seed scheme) cannot change trials, scores or predictions unseen.
 /// </summary>
-public sealed class SameResultsTests(QuickDemoRun run) : IClassFixture<QuickDemoRun>
+[Collection(QuickDemoCollection.Name)]
+public sealed class SameResultsTests(QuickDemoRun run)
 {
     /// <summary>
     /// Trial id, family, rounds, parent (0: none), out-of-fold score, drawn learning rate: the history that

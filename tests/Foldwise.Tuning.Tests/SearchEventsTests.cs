@@ -3,7 +3,8 @@ using Foldwise.Core.Events;
 namespace Foldwise.Tuning.Tests;
 
 /// <summary>What the use case reports while it runs, read by the command line and by anyone following a search.</summary>
-public sealed class SearchEventsTests(QuickDemoRun run) : IClassFixture<QuickDemoRun>
+[Collection(QuickDemoCollection.Name)]
+public sealed class SearchEventsTests(QuickDemoRun run)
 {
     [Fact]
     public void Reports_preparation_then_each_trial_then_the_stop_then_the_blend_in_that_order()

@@ -4,7 +4,8 @@ using Foldwise.Cluster.Telemetry;
 namespace Foldwise.Tuning.Tests;
 
 /// <summary>One search is one trace: its span parents every trial (and so every fold) and the blend.</summary>
-public sealed class SearchTraceTests(QuickDemoRun run) : IClassFixture<QuickDemoRun>
+[Collection(QuickDemoCollection.Name)]
+public sealed class SearchTraceTests(QuickDemoRun run)
 {
     [Fact]
     public void The_search_span_parents_every_trial_span_and_the_blend_span_and_each_trial_its_folds()

@@ -43,6 +43,10 @@ public class SearchHostSettings : CommandSettings
     [Description("Passphrase of --cert. Default: the FOLDWISE_CERT_PASSPHRASE environment variable.")]
     public string? Passphrase { get; init; }
 
+    [CommandOption("--open-cluster")]
+    [Description("Accept listening beyond this machine without --cert: anyone who can reach the port could read the training table and post results.")]
+    public bool OpenCluster { get; init; }
+
     [CommandOption("--verbose")]
     [Description("Log information messages of the cluster to stderr too, not only warnings and errors.")]
     public bool Verbose { get; init; }
@@ -84,6 +88,11 @@ public class SearchHostSettings : CommandSettings
         if (Advertise is not null && !IPAddress.TryParse(Advertise, out _))
         {
             return ValidationResult.Error("--advertise must be an IP address, e.g. 192.168.1.20");
+        }
+
+        if (Advertise is not null && Running.OpenCluster.Refusal("coordinator", IPAddress.Parse(Advertise), Cert is not null, OpenCluster) is { } open)
+        {
+            return ValidationResult.Error(open);
         }
 
         if (LeaseSeconds is <= 0)

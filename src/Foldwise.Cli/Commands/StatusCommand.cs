@@ -62,6 +62,10 @@ public sealed class StatusCommand(IAnsiConsole console) : AsyncCommand<StatusSet
         }
 
         console.MarkupLine($"Running now: {(p.RunningOn.Length == 0 ? "none" : Markup.Escape(string.Join(", ", p.RunningOn)))}.");
+        foreach (var (worker, why) in p.Quarantined ?? [])
+        {
+            console.MarkupLine($"[red]Quarantined[/] {Markup.Escape(worker)}: {Markup.Escape(why)}");
+        }
     }
 
     private static bool TryGateway(string text, out IPEndPoint gateway)

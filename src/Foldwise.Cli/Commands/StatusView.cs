@@ -41,6 +41,25 @@ public static class StatusView
 
         console.Write(best);
         RenderSlots(console, trials);
+        RenderFailures(console, trials);
+    }
+
+    /// <summary>The latest failures and lost attempts with their reasons, so a broken machine shows by name.</summary>
+    private static void RenderFailures(IAnsiConsole console, IReadOnlyList<TrialRecord> trials)
+    {
+        var reasons = trials
+            .SelectMany(t => t.LostAttempts.Select(lost => $"trial {t.Id}, {lost}")
+                .Concat(t.FailureReason is { } failed ? [$"trial {t.Id} failed: {failed}"] : []))
+            .TakeLast(5)
+            .ToList();
+        if (reasons.Count > 0)
+        {
+            console.WriteLine("Latest failures:");
+            foreach (string reason in reasons)
+            {
+                console.WriteLine("  " + reason);
+            }
+        }
     }
 
     private static void RenderSlots(IAnsiConsole console, IReadOnlyList<TrialRecord> trials)

@@ -48,6 +48,22 @@ public sealed class WorkerSettings : CommandSettings
     [Description("Passphrase of --cert. Default: the FOLDWISE_CERT_PASSPHRASE environment variable.")]
     public string? Passphrase { get; init; }
 
+    [CommandOption("--open-cluster")]
+    [Description("Accept joining without --cert from an address beyond this machine: anyone who can reach the ports could read the training table and post results.")]
+    public bool OpenCluster { get; init; }
+
+    [CommandOption("--cache-limit <GB>")]
+    [Description("Most gigabytes the table cache keeps; the least recently used tables go first. Default 4.")]
+    public double CacheLimit { get; init; } = 4;
+
+    [CommandOption("--clear-cache")]
+    [Description("Delete the cached tables (in --cache) and exit; no --join needed.")]
+    public bool ClearCache { get; init; }
+
+    [CommandOption("--leave-when-done")]
+    [Description("Leave (exit 0) when the search this worker works on has finished, instead of waiting for the coordinator's next search.")]
+    public bool LeaveWhenDone { get; init; }
+
     [CommandOption("--json")]
     [Description("Print each event (joined, trial scored, lease lost, …) as one JSON object per line instead of sentences.")]
     public bool Json { get; init; }
@@ -58,7 +74,12 @@ public sealed class WorkerSettings : CommandSettings
 
     public override ValidationResult Validate()
     {
-        if (string.IsNullOrWhiteSpace(Join))
+        if (CacheLimit <= 0)
+        {
+            return ValidationResult.Error("--cache-limit must be more than 0 GB");
+        }
+
+        if (string.IsNullOrWhiteSpace(Join) && !ClearCache)
         {
             return ValidationResult.Error("--join HOST:PORT is required: the coordinator's address and --port");
         }

@@ -1,3 +1,4 @@
+using Foldwise.Cli.Running;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Events;
 using Foldwise.Core.Metrics;
@@ -66,10 +67,15 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
                 Started(s);
                 break;
             case CoordinatorListening l:
-                // Networked: say how to join, and who comes and goes (one plain line each).
+                // Networked: say how to join, and who comes and goes (one plain line each); an accepted open cluster says its risk.
+                if (OpenCluster.Warning(System.Net.IPAddress.Parse(l.Address), l.MutualTls) is { } risk)
+                {
+                    console.Profile.Out.Writer.WriteLine(risk);
+                }
+
                 console.Profile.Out.Writer.WriteLine(
                     $"Coordinator listening on {l.Address}:{l.Port}" +
-                    (l.MutualTls ? " (mutual TLS)" : " (no certificate: any machine that reaches the port can join)") +
+                    (l.MutualTls ? " (mutual TLS)" : " (no certificate)") +
                     $"; workers join with: foldwise worker --join {l.Address}:{l.Port}" + (l.MutualTls ? " --cert FILE" : ""));
                 break;
             case ClusterChanged c:

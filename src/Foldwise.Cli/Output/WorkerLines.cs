@@ -2,7 +2,10 @@ using Foldwise.Core.Events;
 
 namespace Foldwise.Cli.Output;
 
-/// <summary>A worker's screen: one plain line per event it sees (joining, each trial a slot finishes, losing the cluster).</summary>
+/// <summary>
+/// A worker's screen: one plain line per event it sees (joining, families it cannot offer, each trial a slot finishes,
+/// a search finishing, a refusal, losing the cluster).
+/// </summary>
 public sealed class WorkerLines(TextWriter output) : IProgress<SearchEvent>
 {
     public void Report(SearchEvent value)
@@ -14,6 +17,15 @@ public sealed class WorkerLines(TextWriter output) : IProgress<SearchEvent>
             WorkerJoinFailed f => $"Cannot join {f.Join} (attempt {f.Attempt}): {f.Reason}; retrying in {f.RetryIn.TotalSeconds:F0} s",
             WorkerLostCluster l => $"Lost the cluster ({l.Reason}); joining again",
             WorkerStopped => "Worker stopped",
+            FamilyNotOffered n => $"{n.Family} cannot train on this machine and is not offered: {n.Problem}",
+            WorkerRefused r => $"Cannot work for {r.Join}: {r.Reason}",
+            WorkerOnSearch w => $"Working on search {w.SearchId}",
+            WorkerSearchFinished f => f.Leaving
+                ? $"Search {f.SearchId} finished; leaving as asked"
+                : $"Search {f.SearchId} finished; waiting for the next search (Ctrl-C to leave)",
+            WorkerCoordinatorGone g => $"The coordinator of search {g.FinishedSearchId} has stopped; waiting for it to run the next search",
+            WorkerAwaitsNextSearch => "Rejoining to wait for the coordinator's next search",
+            SlotQuarantined q => $"Slot {q.Slot}: quarantined by search {q.SearchId}: {q.Reason}",
             SlotTrialScored s => $"Slot {s.Slot}: trial {s.TrialId} attempt {s.Attempt} scored {s.Score:F5} in {s.Took.TotalSeconds:F1} s (accepted: {s.Accepted})",
             SlotLeaseLost l => $"Slot {l.Slot}: lost the lease of trial {l.TrialId} attempt {l.Attempt}; dropping it",
             SlotTrialFailed f => $"Slot {f.Slot}: trial {f.TrialId} failed: {f.Reason}",

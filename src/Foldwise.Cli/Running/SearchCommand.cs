@@ -39,6 +39,10 @@ public static class SearchCommand
             case SearchEnding.BlendAbandoned:
                 console.MarkupLine($"[yellow]Abandoned the blend: every trial is stored, the prediction file was not written. 'foldwise blend {Markup.Escape(result.OutDir)}' blends them.[/]");
                 return ExitCodes.Interrupted;
+            case SearchEnding.StoreFailed:
+                console.MarkupLine($"[red]Stopped: the store in {Markup.Escape(result.OutDir)} refused a write ({Markup.Escape(result.StoreFault ?? "")}). " +
+                                   $"Every trial committed before is kept; free space, then 'foldwise resume {Markup.Escape(result.OutDir)}' continues the search.[/]");
+                return ExitCodes.Failed;
             default:
                 return ExitCodes.Ok;
         }

@@ -8,4 +8,7 @@ namespace Foldwise.Cluster.Contracts;
 public interface ISearchBoardGrain : IGrainWithIntegerKey
 {
     Task<string[]> ActiveSearchesAsync();
+
+    /// <summary>A worker introduces itself before its first lease; null admits it, otherwise the one-line reason it is refused.</summary>
+    Task<string?> JoinAsync(WorkerHello hello);
 }

@@ -9,7 +9,8 @@ public interface ISearchGrain : IGrainWithStringKey
 {
     Task<SearchManifest> GetManifestAsync();
 
-    Task<LeaseReply> LeaseAsync(string worker, string slot);
+    /// <summary>The next trial of one of <paramref name="families"/> (the families this worker trains), or why there is none.</summary>
+    Task<LeaseReply> LeaseAsync(string worker, string slot, string[] families);
 
     /// <summary>False when the lease is no longer the caller's: the slot should drop the trial.</summary>
     Task<bool> RenewAsync(int trialId, int attempt);

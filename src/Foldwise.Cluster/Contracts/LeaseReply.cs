@@ -14,7 +14,8 @@ public sealed record LeaseReply(
     [property: Id(5)] int Budget,
     [property: Id(6)] int Seed,
     [property: Id(7)] TimeSpan LeaseDuration,
-    [property: Id(8)] string? TraceParent = null)
+    [property: Id(8)] string? TraceParent = null,
+    [property: Id(9)] string? Reason = null)
 {
     public static LeaseReply Waiting { get; } = new(LeaseStatus.Wait, 0, 0, "", [], 0, 0, TimeSpan.Zero);
 

@@ -7,4 +7,7 @@ public enum LeaseStatus
     Granted,
     Wait,
     Finished,
+
+    /// <summary>This worker's trials failed too often in a row while others succeeded; the reply's reason says why.</summary>
+    Quarantined,
 }

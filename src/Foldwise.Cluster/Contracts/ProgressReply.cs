@@ -14,4 +14,5 @@ public sealed record ProgressReply(
     [property: Id(8)] Dictionary<string, double> BestByFamily,
     [property: Id(9)] string? Stopping,
     [property: Id(10)] bool Finished,
-    [property: Id(11)] string[] RunningOn);
+    [property: Id(11)] string[] RunningOn,
+    [property: Id(12)] Dictionary<string, string>? Quarantined = null);

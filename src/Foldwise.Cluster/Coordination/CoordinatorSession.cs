@@ -8,7 +8,8 @@ namespace Foldwise.Cluster.Coordination;
 
 /// <summary>
 /// One running search on the coordinator: Core's <see cref="SearchCoordinator"/> plus the store it records into.
-/// It lives outside any grain, so a grain that is deactivated and activated again loses nothing.
+/// It lives outside any grain, so a grain that is deactivated and activated again loses nothing. A failed write to the
+/// store (a full disk) stops the search at once: what was committed before stays, and <c>resume</c> continues.
 /// </summary>
 public sealed class CoordinatorSession
 {
@@ -38,9 +39,17 @@ public sealed class CoordinatorSession
     /// <summary>Completes once the search has stopped creating trials and none is running.</summary>
     public Task Finished => finished.Task;
 
-    public LeaseReply Lease(string worker, string slot)
+    /// <summary>Why the search stopped on a failed store write (e.g. "IOException: No space left on device"); null while the store takes every write.</summary>
+    public string? StoreFault { get; private set; }
+
+    /// <param name="families">The families this worker offers (null: any); a trial of another family is never leased to it.</param>
+    public LeaseReply Lease(string worker, string slot, IReadOnlyCollection<string>? families = null)
     {
-        var grant = Coordinator.Lease(worker, slot);
+        if (StoreFault is not null || !Writing(() => Coordinator.Lease(worker, slot, families), out var grant))
+        {
+            return LeaseReply.Done;
+        }
+
         if (grant.Kind == LeaseKind.Granted)
         {
             if (grant.Trial!.ParentId is not null && grant.Trial.Attempt == 1)
@@ -65,6 +74,7 @@ public sealed class CoordinatorSession
                 grant.Trial.LeaseExpires!.Value - grant.Trial.Started!.Value,
                 traceParent),
             LeaseKind.Wait => LeaseReply.Waiting,
+            LeaseKind.Quarantined => LeaseReply.Waiting with { Status = LeaseStatus.Quarantined, Reason = grant.Reason },
             _ => LeaseReply.Done,
         };
     }
@@ -81,8 +91,13 @@ public sealed class CoordinatorSession
                 return false;
             }
 
-            recorder.SaveVectors(report.TrialId, report.OutOfFold, report.Test);
-            bool accepted = Coordinator.Complete(report.TrialId, report.Attempt, report.Score, [.. report.FoldScores]);
+            if (StoreFault is not null ||
+                !Writing(() => { recorder.SaveVectors(report.TrialId, report.OutOfFold, report.Test); return true; }, out _) ||
+                !Writing(() => Coordinator.Complete(report.TrialId, report.Attempt, report.Score, [.. report.FoldScores]), out bool accepted))
+            {
+                return false;
+            }
+
             if (accepted)
             {
                 events.Report(new TrialScored(SearchId, Coordinator.Trial(report.TrialId)!, Coordinator.Progress()));
@@ -95,7 +110,11 @@ public sealed class CoordinatorSession
 
     public bool Release(int trialId, int attempt, string reason, bool interrupted)
     {
-        bool released = Coordinator.Release(trialId, attempt, reason, interrupted);
+        if (StoreFault is not null || !Writing(() => Coordinator.Release(trialId, attempt, reason, interrupted), out bool released))
+        {
+            return false;
+        }
+
         if (released && Coordinator.Trial(trialId) is { State: TrialState.Failed } failed)
         {
             events.Report(new TrialFailed(SearchId, failed, Coordinator.Progress()));
@@ -114,14 +133,23 @@ public sealed class CoordinatorSession
             .ToArray();
         return new ProgressReply(
             p.Created, p.Queued, p.Running, p.Done, p.Failed, p.TrialBudget, p.SpentSeconds, p.HoursBudget,
-            p.BestByFamily.ToDictionary(), p.Stopping?.ToString(), p.Finished, runningOn);
+            p.BestByFamily.ToDictionary(), p.Stopping?.ToString(), p.Finished, runningOn, p.Quarantined?.ToDictionary());
     }
 
     /// <summary>Called about once a second: expires lost leases and records the time spent.</summary>
     public void Tick()
     {
+        if (StoreFault is not null)
+        {
+            return;
+        }
+
         int failedBefore = Coordinator.Progress().Failed;
-        Coordinator.ExpireLeases();
+        if (!Writing(() => { Coordinator.ExpireLeases(); return true; }, out _))
+        {
+            return;
+        }
+
         var progress = Coordinator.Progress();
         if (progress.Failed > failedBefore)
         {
@@ -132,8 +160,31 @@ public sealed class CoordinatorSession
             }
         }
 
-        recorder.UpdateSpent(progress.SpentSeconds, finished: false);
+        if (!Writing(() => { recorder.UpdateSpent(progress.SpentSeconds, finished: false); return true; }, out _))
+        {
+            return;
+        }
+
         CheckFinished();
+    }
+
+    /// <summary>Runs one write to the store; on failure records the fault, ends the search, and returns false.</summary>
+    private bool Writing<T>(Func<T> write, out T result)
+    {
+        try
+        {
+            result = write();
+            return true;
+        }
+#pragma warning disable CA1031 // Whatever the store threw, the search must stop rather than run on with results it cannot keep.
+        catch (Exception e)
+#pragma warning restore CA1031
+        {
+            result = default!;
+            StoreFault ??= $"{e.GetType().Name}: {e.Message.Split('\n')[0].Trim()}";
+            finished.TrySetResult();
+            return false;
+        }
     }
 
     private void CheckFinished()

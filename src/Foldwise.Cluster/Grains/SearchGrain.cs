@@ -11,7 +11,7 @@ internal sealed class SearchGrain(SessionRegistry sessions) : Grain, ISearchGrai
 
     public Task<SearchManifest> GetManifestAsync() => Task.FromResult(Session.Manifest);
 
-    public Task<LeaseReply> LeaseAsync(string worker, string slot) => Task.FromResult(Session.Lease(worker, slot));
+    public Task<LeaseReply> LeaseAsync(string worker, string slot, string[] families) => Task.FromResult(Session.Lease(worker, slot, families));
 
     public Task<bool> RenewAsync(int trialId, int attempt) => Task.FromResult(Session.Renew(trialId, attempt));
 

@@ -109,6 +109,7 @@ public static class FoldwiseSiloExtensions
         services.AddSingleton<TableCache>();
         services.AddSingleton<TrialDataCache>();
         services.AddSingleton<SlotStatistics>();
+        services.AddSingleton<WorkerStop>();
         services.AddMetrics();
         services.TryAddSingleton<FoldwiseMetrics>();
         services.AddHostedService<SlotPump>();

@@ -9,11 +9,13 @@ using Microsoft.Extensions.Logging;
 namespace Foldwise.Cluster.Workers;
 
 /// <summary>
-/// One slot: asks the coordinator for a lease, trains the trial's folds, renews the lease while it works,
-/// and reports. It survives the coordinator going away by retrying with a growing pause.
+/// One slot: asks the coordinator for a lease of a family its worker offers, trains the trial's folds, renews the
+/// lease while it works, and reports. Any failure of a trial releases its lease at once with the reason. It survives
+/// the coordinator going away by retrying with a growing pause.
 /// </summary>
 public sealed partial class SlotRunner(
     string slot,
+    string[] families,
     IGrainFactory grains,
     TrialDataCache data,
     ILearnerCatalog learners,
@@ -26,6 +28,13 @@ public sealed partial class SlotRunner(
 {
     private static readonly TimeSpan MaxBackoff = TimeSpan.FromSeconds(5);
 
+    /// <summary>How long a quarantined slot waits before asking again (a new search may take it).</summary>
+    private static readonly TimeSpan QuarantinePause = TimeSpan.FromSeconds(30);
+
+    private bool unreachable;
+    private bool searchFinished;
+    private string? quarantinedIn;
+
     public async Task RunAsync(CancellationToken stopping)
     {
         var backoff = options.PollInterval;
@@ -33,11 +42,12 @@ public sealed partial class SlotRunner(
         {
             try
             {
-                bool worked = await StepAsync(stopping);
+                var pause = await StepAsync(stopping);
                 backoff = options.PollInterval;
-                if (!worked)
+                unreachable = false;
+                if (pause > TimeSpan.Zero)
                 {
-                    await Task.Delay(options.PollInterval, time, stopping);
+                    await Task.Delay(pause, time, stopping);
                 }
             }
             catch (OperationCanceledException) when (stopping.IsCancellationRequested)
@@ -46,33 +56,55 @@ public sealed partial class SlotRunner(
             }
             catch (Exception e) when (e is not OperationCanceledException)
             {
-                // The coordinator may be restarting or unreachable: wait and ask again.
-                LogCoordinatorUnreachable(slot, e.Message.Split('\n')[0].Trim());
-                events.Report(new SlotCoordinatorUnreachable(options.Name, slot, e.Message.Split('\n')[0].Trim()));
+                // The coordinator may be restarting or unreachable: wait and ask again. The worker host says what it
+                // sees of the cluster; a slot warns once per outage, not at every retry, and not at all when the search
+                // it worked on had finished (its coordinator is expected to go).
+                if (!unreachable && !searchFinished)
+                {
+                    string reason = e.Message.Split('\n')[0].Trim();
+                    LogCoordinatorUnreachable(slot, reason);
+                    events.Report(new SlotCoordinatorUnreachable(options.Name, slot, reason));
+                    unreachable = true;
+                }
+
                 await DelayQuietly(backoff, stopping);
                 backoff = TimeSpan.FromTicks(Math.Min(MaxBackoff.Ticks, backoff.Ticks * 2));
             }
         }
     }
 
-    /// <summary>Asks once; true when a trial was run.</summary>
-    private async Task<bool> StepAsync(CancellationToken stopping)
+    /// <summary>Asks once; returns how long to wait before asking again (zero after a trial ran).</summary>
+    private async Task<TimeSpan> StepAsync(CancellationToken stopping)
     {
         string? searchId = options.SearchId ?? (await grains.GetGrain<ISearchBoardGrain>(0).ActiveSearchesAsync()).FirstOrDefault();
         if (searchId is null)
         {
-            return false;
+            return options.PollInterval;
         }
 
         var search = grains.GetGrain<ISearchGrain>(searchId);
-        var lease = await search.LeaseAsync(options.Name, slot);
+        var lease = await search.LeaseAsync(options.Name, slot, families);
+        if (lease.Status == LeaseStatus.Quarantined)
+        {
+            if (quarantinedIn != searchId)
+            {
+                string reason = lease.Reason ?? "no reason given";
+                LogQuarantined(slot, searchId, reason);
+                events.Report(new SlotQuarantined(options.Name, slot, searchId, reason));
+                quarantinedIn = searchId;
+            }
+
+            return QuarantinePause;
+        }
+
+        searchFinished = lease.Status == LeaseStatus.Finished;
         if (lease.Status != LeaseStatus.Granted)
         {
-            return false;
+            return options.PollInterval;
         }
 
         await RunTrialAsync(searchId, search, lease, stopping);
-        return true;
+        return TimeSpan.Zero;
     }
 
     private async Task RunTrialAsync(string searchId, ISearchGrain search, LeaseReply lease, CancellationToken stopping)
@@ -118,13 +150,16 @@ public sealed partial class SlotRunner(
             LogLeaseLost(slot, lease.TrialId, lease.Attempt);
             events.Report(new SlotLeaseLost(options.Name, slot, lease.TrialId, lease.Attempt));
         }
-        catch (Exception e) when (e is ArgumentException or InvalidOperationException or IOException or OutOfMemoryException)
+        catch (Exception e) when (e is not OperationCanceledException)
         {
-            LogTrialFailed(slot, lease.TrialId, e.Message);
-            events.Report(new SlotTrialFailed(options.Name, slot, lease.TrialId, lease.Attempt, e.Message));
+            // Whatever failed (the learner, a native library, the table), the trial goes back at once with the reason,
+            // instead of holding its lease until it expires.
+            string reason = $"{e.GetType().Name}: {e.Message.Split('\n')[0].Trim()}";
+            LogTrialFailed(slot, lease.TrialId, reason);
+            events.Report(new SlotTrialFailed(options.Name, slot, lease.TrialId, lease.Attempt, reason));
             ending = "failed";
-            span?.SetStatus(ActivityStatusCode.Error, e.Message);
-            await ReleaseQuietly(search, lease, $"{e.GetType().Name}: {e.Message}", interrupted: false);
+            span?.SetStatus(ActivityStatusCode.Error, reason);
+            await ReleaseQuietly(search, lease, reason, interrupted: false);
         }
         finally
         {
@@ -197,6 +232,9 @@ public sealed partial class SlotRunner(
 
     [LoggerMessage(Level = LogLevel.Warning, Message = "Slot {Slot}: could not renew or release trial {TrialId}: {Reason}")]
     private partial void LogRenewFailed(string slot, int trialId, string reason);
+
+    [LoggerMessage(Level = LogLevel.Error, Message = "Slot {Slot}: quarantined by search {SearchId}: {Reason}")]
+    private partial void LogQuarantined(string slot, string searchId, string reason);
 
     [LoggerMessage(Level = LogLevel.Warning, Message = "Slot {Slot}: coordinator unreachable ({Reason}); retrying")]
     private partial void LogCoordinatorUnreachable(string slot, string reason);

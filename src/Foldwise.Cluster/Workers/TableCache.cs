@@ -8,7 +8,8 @@ namespace Foldwise.Cluster.Workers;
 /// <summary>
 /// Tables by content hash: in memory, then on local disk, then fetched from the coordinator chunk by chunk
 /// straight into the disk cache (<see cref="TableDownload"/>). Every fetched or cached file is checked against
-/// its hash before it is decoded, and decoded from the file, never held as one array of bytes.
+/// its hash before it is decoded, and decoded from the file, never held as one array of bytes. The folder is its
+/// owner's only and kept under <see cref="WorkerOptions.CacheLimitBytes"/> (see <see cref="CacheFolder"/>).
 /// </summary>
 public sealed class TableCache(IGrainFactory grains, WorkerOptions options)
 {
@@ -36,18 +37,19 @@ public sealed class TableCache(IGrainFactory grains, WorkerOptions options)
 
     private async Task<FeatureTable> LoadAsync(string hash, CancellationToken cancellation)
     {
-        string path = Path.Combine(options.CacheDirectory, hash + ".fwt");
+        string path = Path.Combine(options.CacheDirectory, hash + CacheFolder.Extension);
         if (File.Exists(path))
         {
             if (await HashOfFileAsync(path, cancellation) == hash)
             {
+                CacheFolder.Touch(path);
                 return Decode(path);
             }
 
             File.Delete(path);
         }
 
-        Directory.CreateDirectory(options.CacheDirectory);
+        CacheFolder.Ensure(options.CacheDirectory);
         string partial = path + "." + Environment.ProcessId + ".part";
         try
         {
@@ -62,6 +64,7 @@ public sealed class TableCache(IGrainFactory grains, WorkerOptions options)
         }
 
         Fetches++;
+        CacheFolder.Prune(options.CacheDirectory, Math.Max(options.CacheLimitBytes, new FileInfo(path).Length));
         return Decode(path);
     }
 

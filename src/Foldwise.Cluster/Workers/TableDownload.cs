@@ -6,6 +6,7 @@ namespace Foldwise.Cluster.Workers;
 /// <summary>
 /// Fetches a table chunk by chunk into a file: each chunk is checked against its listed SHA-256 before it is
 /// written, and the whole against the table's hash as the chunks pass, so at most one chunk is ever in memory.
+/// The file is its owner's only (<see cref="CacheFolder"/>).
 /// </summary>
 public static class TableDownload
 {
@@ -20,7 +21,7 @@ public static class TableDownload
         ArgumentNullException.ThrowIfNull(listing);
         ArgumentNullException.ThrowIfNull(chunk);
         using var whole = IncrementalHash.CreateHash(HashAlgorithmName.SHA256);
-        await using var file = new FileStream(path, FileMode.Create, FileAccess.Write, FileShare.None, bufferSize: 1);
+        await using var file = CacheFolder.CreateOwnerOnly(path);
         int count = listing.ChunkHashes.Length;
         long written = 0;
         for (int i = 0; i < count; i++)

@@ -24,11 +24,23 @@ public sealed class WorkerOptions
     public string CacheDirectory { get; set; } = Path.Combine(
         Environment.GetFolderPath(Environment.SpecialFolder.UserProfile), ".cache", "foldwise", "tables");
 
+    /// <summary>
+    /// The most the table cache may hold; the least recently used tables are deleted beyond it (never the table just
+    /// fetched). The default is <c>4 GiB</c>.
+    /// </summary>
+    public long CacheLimitBytes { get; set; } = 4L << 30;
+
     /// <summary>How long a slot waits before asking again when there is nothing to start. The default is <c>250 ms</c>.</summary>
     public TimeSpan PollInterval { get; set; } = TimeSpan.FromMilliseconds(250);
 
     /// <summary>Only work on this search; null asks the coordinator's board.</summary>
     public string? SearchId { get; set; }
+
+    /// <summary>The build this worker tells the coordinator when it joins. The default is this build's (<see cref="Core.BuildVersion"/>).</summary>
+    public string Version { get; set; } = Core.BuildVersion.Text;
+
+    /// <summary>Leave when the search this worker worked on has finished, instead of waiting for the next. The default is <c>false</c>.</summary>
+    public bool LeaveWhenDone { get; set; }
 
     public int Threads => ThreadsPerSlot ?? Math.Max(1, Environment.ProcessorCount / Math.Max(1, Slots));
 

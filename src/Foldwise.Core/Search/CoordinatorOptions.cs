@@ -20,6 +20,12 @@ public sealed record CoordinatorOptions
     /// <summary>Finished trials needed before a trial can be called overdue. Default 5.</summary>
     public int BackupMinimumDone { get; init; } = 5;
 
+    /// <summary>
+    /// A worker whose trials fail this many times in a row, while another worker has finished trials, is quarantined:
+    /// it gets no more work in this session. Default 3.
+    /// </summary>
+    public int QuarantineAfter { get; init; } = 3;
+
     public void Validate()
     {
         if (LeaseDuration <= TimeSpan.Zero)
@@ -30,6 +36,11 @@ public sealed record CoordinatorOptions
         if (MaxAttempts < 1)
         {
             throw new ArgumentOutOfRangeException(nameof(MaxAttempts), MaxAttempts, "a trial needs at least one attempt");
+        }
+
+        if (QuarantineAfter < 1)
+        {
+            throw new ArgumentOutOfRangeException(nameof(QuarantineAfter), QuarantineAfter, "quarantine needs at least one failure");
         }
 
         if (BackupAfter is <= 1.0)

@@ -11,4 +11,7 @@ public enum LeaseKind
 
     /// <summary>The search has stopped handing out work; the slot may stop asking.</summary>
     Finished,
+
+    /// <summary>The worker's trials failed too often in a row while others succeeded: it gets no more work in this search.</summary>
+    Quarantined,
 }

@@ -21,6 +21,7 @@ public sealed class SearchCoordinator
     private readonly Dictionary<int, TrialRecord> running = [];
 
     private readonly LeaseTable leases = new();
+    private readonly WorkerQuarantine quarantine;
     private readonly StragglerWatch? stragglers;
     private readonly double spentBefore;
     private readonly DateTimeOffset sessionStart;
@@ -45,6 +46,7 @@ public sealed class SearchCoordinator
         this.time = time;
         this.options = options ?? new CoordinatorOptions();
         this.options.Validate();
+        quarantine = new WorkerQuarantine(this.options.QuarantineAfter);
         stragglers = this.options.BackupAfter is { } factor ? new StragglerWatch(factor, this.options.BackupMinimumDone) : null;
         spentBefore = spentSeconds;
         sessionStart = time.GetUtcNow();
@@ -56,18 +58,34 @@ public sealed class SearchCoordinator
 
     public SearchDefinition Definition => definition;
 
-    /// <summary>Gives a slot the next trial: a queued one first (lowest id), else a new one from the schedule.</summary>
-    public LeaseGrant Lease(string worker, string slot)
+    /// <summary>
+    /// Gives a slot the next trial of a family its worker offers: a queued one first (lowest id), else a new one from
+    /// the schedule. A new trial of a family the worker does not offer is queued for another worker, and while such a
+    /// trial waits, this worker creates no more (so a machine without a family cannot flood the queue).
+    /// </summary>
+    /// <param name="families">The families the asking worker trains; null for every family.</param>
+    public LeaseGrant Lease(string worker, string slot, IReadOnlyCollection<string>? families = null)
     {
         lock (gate)
         {
             var now = time.GetUtcNow();
             ExpireLeasesLocked(now);
             UpdateStoppingLocked(now);
-            int? id = queued.Count > 0 && stopping is not (StopReason.Requested or StopReason.HoursBudget) ? queued.Min : CreateLocked(now);
+            if (quarantine.Reason(worker) is { } why)
+            {
+                return IsFinishedLocked() ? LeaseGrant.Finished : new LeaseGrant(LeaseKind.Quarantined, Reason: why);
+            }
+
+            bool takesQueued = stopping is not (StopReason.Requested or StopReason.HoursBudget);
+            int? id = takesQueued ? queued.Where(q => Offers(families, trials[q].Family)).Select(q => (int?)q).FirstOrDefault() : null;
+            if (id is null && !(takesQueued && queued.Count > 0) && CreateLocked(now) is { } created && Offers(families, trials[created].Family))
+            {
+                id = created;
+            }
+
             if (id is not { } trialId)
             {
-                return BackupLocked(worker, slot, now) ?? (IsFinishedLocked() ? LeaseGrant.Finished : LeaseGrant.Wait);
+                return BackupLocked(worker, slot, now, families) ?? (IsFinishedLocked() ? LeaseGrant.Finished : LeaseGrant.Wait);
             }
 
             queued.Remove(trialId);
@@ -128,6 +146,7 @@ public sealed class SearchCoordinator
                 LeaseExpires = null,
             };
             CommitLocked(done);
+            quarantine.Succeeded(winner.Worker);
             stragglers?.Finished(done.Budget, done.Duration!.Value);
             return true;
         }
@@ -146,7 +165,12 @@ public sealed class SearchCoordinator
                 return false;
             }
 
-            DropHoldLocked(trialId, hold, reason, counts: !interrupted);
+            DropHoldLocked(trialId, hold, $"{reason} on {hold.Worker}/{hold.Slot}", counts: !interrupted);
+            if (!interrupted)
+            {
+                quarantine.Failed(hold.Worker, reason);
+            }
+
             return true;
         }
     }
@@ -200,7 +224,8 @@ public sealed class SearchCoordinator
                 definition.Budget.Hours,
                 best,
                 stopping,
-                IsFinishedLocked());
+                IsFinishedLocked(),
+                quarantine.All());
         }
     }
 
@@ -294,10 +319,10 @@ public sealed class SearchCoordinator
     }
 
     /// <summary>An idle slot's backup copy of the most overdue trial, when the straggler watch names one.</summary>
-    private LeaseGrant? BackupLocked(string worker, string slot, DateTimeOffset now)
+    private LeaseGrant? BackupLocked(string worker, string slot, DateTimeOffset now, IReadOnlyCollection<string>? families)
     {
         if (stragglers is null || stopping is StopReason.Requested or StopReason.HoursBudget ||
-            stragglers.Pick(running.Values.Select(t => (t.Id, t.Budget, leases.Of(t.Id))), worker, now,
+            stragglers.Pick(running.Values.Where(t => Offers(families, t.Family)).Select(t => (t.Id, t.Budget, leases.Of(t.Id))), worker, now,
                 draining: stopping is StopReason.TrialBudget or StopReason.ScheduleExhausted) is not { } trialId)
         {
             return null;
@@ -312,6 +337,8 @@ public sealed class SearchCoordinator
         leases.Add(trialId, hold);
         return Granted(backedUp with { Worker = worker, Slot = slot, Started = now });
     }
+
+    private static bool Offers(IReadOnlyCollection<string>? families, string family) => families is null || families.Contains(family);
 
     private LeaseHold? HoldLocked(int trialId, int attempt) =>
         running.ContainsKey(trialId) ? leases.Find(trialId, attempt) : null;

@@ -2,7 +2,10 @@ using System.Collections.Immutable;
 
 namespace Foldwise.Core.Search;
 
-/// <summary>A snapshot for progress bars and <c>status</c>: counts by state, the best score so far per family, budgets spent.</summary>
+/// <summary>
+/// A snapshot for progress bars and <c>status</c>: counts by state, the best score so far per family, budgets spent,
+/// and the workers quarantined in this session with the reason.
+/// </summary>
 public sealed record SearchProgress(
     int Created,
     int Queued,
@@ -14,7 +17,8 @@ public sealed record SearchProgress(
     double? HoursBudget,
     ImmutableSortedDictionary<string, double> BestByFamily,
     StopReason? Stopping,
-    bool Finished)
+    bool Finished,
+    ImmutableSortedDictionary<string, string>? Quarantined = null)
 {
     public double? Best => BestByFamily.Count == 0 ? null : BestByFamily.Values.Min();
 }

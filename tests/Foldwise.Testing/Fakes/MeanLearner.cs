@@ -17,10 +17,20 @@ public sealed class MeanLearner(string family) : IFoldLearner, ILearnerCatalog
 
     public int Fits => Volatile.Read(ref fits);
 
+    public IReadOnlyList<string> Families => [family];
+
+    /// <summary>When set, every fit throws this (a broken machine); the worker's self-test then refuses the family.</summary>
+    public Exception? Broken { get; set; }
+
     public IFoldLearner Get(string family) => family == Family ? this : throw new ArgumentException($"unknown family '{family}'", nameof(family));
 
     public FoldPrediction Fit(FoldJob job, CancellationToken cancellation)
     {
+        if (Broken is { } broken)
+        {
+            throw broken;
+        }
+
         Interlocked.Increment(ref fits);
         if (Delay > TimeSpan.Zero)
         {

@@ -29,7 +29,18 @@ public sealed class MemoryRecorder : ISearchRecorder
         }
     }
 
-    public void SaveVectors(int trialId, double[] outOfFold, double[] test) => Vectors[trialId] = (outOfFold, test);
+    /// <summary>When set, the store holds this many trials' vectors and then fails every write, as a full disk does.</summary>
+    public int? FullAfter { get; set; }
+
+    public void SaveVectors(int trialId, double[] outOfFold, double[] test)
+    {
+        if (Vectors.Count >= FullAfter)
+        {
+            throw new IOException("No space left on device");
+        }
+
+        Vectors[trialId] = (outOfFold, test);
+    }
 
     public void UpdateSpent(double spentSeconds, bool finished) => SpentSeconds = spentSeconds;
 }
