@@ -30,12 +30,12 @@ public sealed class FastTreeLearner : IFoldLearner, IKeepsModels
     // ML.NET 5 FastTree skips training rows that hold a NaN feature and scores NaN as neither zero nor those rows
     // (MissingCellTests), so it reads the fold's median-imputed inputs with their "was missing" columns.
     public FoldPrediction Fit(FoldJob job, CancellationToken cancellation) =>
-        FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.FastTree(Options(job)).Fit(train), cancellation, imputes: true);
+        FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.FastTree(Options(job)).Fit(train), cancellation);
 
     public KeptFold FitAndKeep(FoldJob job, CancellationToken cancellation) =>
-        FoldFitter.FitAndKeep(Family, job, (ml, train) => ml.Regression.Trainers.FastTree(Options(job)).Fit(train), cancellation, imputes: true);
+        FoldFitter.FitAndKeep(Family, job, (ml, train) => ml.Regression.Trainers.FastTree(Options(job)).Fit(train), cancellation);
 
-    public double[] PredictKept(FoldJob job, byte[] model) => FoldFitter.PredictKept(job, model, imputes: true);
+    public double[] PredictKept(FoldJob job, byte[] model) => FoldFitter.PredictKept(Family, job, model);
 
     internal static FastTreeRegressionTrainer.Options Options(FoldJob job)
     {

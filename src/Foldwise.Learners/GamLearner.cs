@@ -25,13 +25,13 @@ public sealed class GamLearner : IFoldLearner, IKeepsModels
     public FoldPrediction Fit(FoldJob job, CancellationToken cancellation)
     {
         // GAM trains a NaN cell as 0 but scores it in its lowest bin (MissingCellTests): it reads imputed inputs.
-        return FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.Gam(Options(job)).Fit(train), cancellation, imputes: true);
+        return FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.Gam(Options(job)).Fit(train), cancellation);
     }
 
     public KeptFold FitAndKeep(FoldJob job, CancellationToken cancellation) =>
-        FoldFitter.FitAndKeep(Family, job, (ml, train) => ml.Regression.Trainers.Gam(Options(job)).Fit(train), cancellation, imputes: true);
+        FoldFitter.FitAndKeep(Family, job, (ml, train) => ml.Regression.Trainers.Gam(Options(job)).Fit(train), cancellation);
 
-    public double[] PredictKept(FoldJob job, byte[] model) => FoldFitter.PredictKept(job, model, imputes: true);
+    public double[] PredictKept(FoldJob job, byte[] model) => FoldFitter.PredictKept(Family, job, model);
 
     internal static GamRegressionTrainer.Options Options(FoldJob job)
     {

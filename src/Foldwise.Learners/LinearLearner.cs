@@ -1,5 +1,4 @@
 using Foldwise.Core.Learning;
-using Foldwise.Core.Preparation;
 using Foldwise.Core.Spaces;
 using Microsoft.ML;
 using Microsoft.ML.Trainers;
@@ -8,7 +7,7 @@ namespace Foldwise.Learners;
 
 /// <summary>
 /// ML.NET's SDCA regression with squared loss and an L2 penalty (ridge), budget = passes over the fold's training
-/// rows, on inputs prepared from those rows only (<see cref="ColumnScaling"/>), after median imputation (SDCA predicts NaN for a NaN cell). SDCA's L1
+/// rows, on inputs prepared from those rows only (<see cref="Core.Preparation.ColumnScaling"/>), after median imputation (SDCA predicts NaN for a NaN cell). SDCA's L1
 /// option is left at 0: its fits matched no mapping onto scikit-learn's ElasticNet penalties (seen 2026-12-05).
 /// </summary>
 public sealed class LinearLearner : IFoldLearner, IKeepsModels
@@ -28,30 +27,14 @@ public sealed class LinearLearner : IFoldLearner, IKeepsModels
 
     public string Family => FamilyNames.Linear;
 
-    public FoldPrediction Fit(FoldJob job, CancellationToken cancellation) => Fit(job, keep: false, cancellation).Prediction;
+    // SDCA trains a NaN cell as 0 and predicts NaN for it (MissingCellTests): its descriptor asks for scaled, imputed inputs.
+    public FoldPrediction Fit(FoldJob job, CancellationToken cancellation) =>
+        FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.Sdca(Options(job)).Fit(train), cancellation);
 
-    public KeptFold FitAndKeep(FoldJob job, CancellationToken cancellation) => Fit(job, keep: true, cancellation);
+    public KeptFold FitAndKeep(FoldJob job, CancellationToken cancellation) =>
+        FoldFitter.FitAndKeep(Family, job, (ml, train) => ml.Regression.Trainers.Sdca(Options(job)).Fit(train), cancellation);
 
-    public double[] PredictKept(FoldJob job, byte[] model) => FoldFitter.PredictKept(Prepared(job), model);
-
-    private KeptFold Fit(FoldJob job, bool keep, CancellationToken cancellation)
-    {
-        FoldFitter.Check(Family, job);
-        var prepared = Prepared(job);
-        Func<MLContext, IDataView, ITransformer> train = (ml, rows) => ml.Regression.Trainers.Sdca(Options(job)).Fit(rows);
-        return keep ? FoldFitter.FitAndKeep(Family, prepared, train, cancellation) : new KeptFold(FoldFitter.Fit(Family, prepared, train, cancellation), []);
-    }
-
-    /// <summary>
-    /// The job on the fold's imputed inputs, scaled as its training rows say: SDCA trains a NaN cell as 0 and predicts
-    /// NaN for it (MissingCellTests).
-    /// </summary>
-    private static FoldJob Prepared(FoldJob job)
-    {
-        var inputs = job.Features.Imputed(job.TrainRows);
-        var scaling = ColumnScaling.Learn(inputs.Train, job.TrainRows);
-        return job with { Inputs = new FoldInputs(scaling.Apply(inputs.Train), scaling.Apply(inputs.Test)) };
-    }
+    public double[] PredictKept(FoldJob job, byte[] model) => FoldFitter.PredictKept(Family, job, model);
 
     internal static SdcaRegressionTrainer.Options Options(FoldJob job)
     {
