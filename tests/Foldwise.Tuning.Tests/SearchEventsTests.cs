@@ -13,9 +13,9 @@ public sealed class SearchEventsTests(QuickDemoRun run)
         var seen = run.Events.Seen.Where(e => e is not (SlotTrialScored or TrialStarted or CandidatePromoted or SlotFoldFitted or StepProgress)).Select(e => e.GetType()).ToList();
 
         // Then the tables are read and screened before the search starts, every trial is scored before the stop,
-        // and the blend comes last
+        // the blend comes next, and the blend members' models are kept last
         Assert.Equal(
-            [typeof(TablesRead), typeof(ColumnsScreened), typeof(SearchStarted), .. Enumerable.Repeat(typeof(TrialScored), 10), typeof(SearchStopped), typeof(BlendSolved)],
+            [typeof(TablesRead), typeof(ColumnsScreened), typeof(SearchStarted), .. Enumerable.Repeat(typeof(TrialScored), 10), typeof(SearchStopped), typeof(BlendSolved), typeof(ModelsKept)],
             seen);
     }
 

@@ -108,6 +108,14 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
                 BlendView.Render(console, b.Summary, Metric.For(b.Metric), b.Trials);
                 console.MarkupLine($"Wrote [bold]{Markup.Escape(b.PredictionFile)}[/]: {b.Predictions:N0} predictions.");
                 break;
+            case ModelsKept k:
+                console.MarkupLine($"Kept the models of {k.Kept.Members.Length} blend member(s) in [bold]{Markup.Escape(k.Folder)}[/] " +
+                                   $"({k.Kept.Bytes / 1e6:F1} MB; {k.Refitted} re-fitted in {k.Took.TotalSeconds:F1} s, test predictions within {k.Kept.LargestDifference:G2}); " +
+                                   "score new rows with 'foldwise predict STORE --rows FILE --out FILE'.");
+                break;
+            case ModelsNotKept n:
+                console.MarkupLine($"[yellow]Models not kept: {Markup.Escape(n.Reason)}[/]");
+                break;
             default:
                 break;
         }
