@@ -10,7 +10,7 @@ namespace Foldwise.Learners;
 /// every fit of a process should use the same thread count (LightGBM keeps it in a process-wide setting).
 /// <see cref="LightGbmFoldModel"/> offers what a fit alone does not: per-round held-out scores and continued training.
 /// </summary>
-public sealed class LightGbmLearner : IRoundLearner
+public sealed class LightGbmLearner : IRoundLearner, IKeepsModels
 {
     public string Family => FamilyNames.LightGbm;
 
@@ -21,4 +21,13 @@ public sealed class LightGbmLearner : IRoundLearner
     }
 
     public IRoundFit Start(FoldJob job, CancellationToken cancellation) => LightGbmFoldModel.Start(job, scoreEachRound: false, cancellation);
+
+    /// <summary>As <see cref="Fit"/>, with the model's text (LightGBM's own model format) as the kept bytes.</summary>
+    public KeptFold FitAndKeep(FoldJob job, CancellationToken cancellation)
+    {
+        using var model = LightGbmFoldModel.Train(job, scoreEachRound: false, cancellation);
+        return new KeptFold(model.Predict(), model.Save());
+    }
+
+    public double[] PredictKept(FoldJob job, byte[] model) => LightGbmFoldModel.PredictKept(job, model);
 }

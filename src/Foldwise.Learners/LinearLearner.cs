@@ -1,5 +1,4 @@
 using Foldwise.Core.Learning;
-using Foldwise.Core.Preparation;
 using Foldwise.Core.Spaces;
 using Microsoft.ML;
 using Microsoft.ML.Trainers;
@@ -8,10 +7,10 @@ namespace Foldwise.Learners;
 
 /// <summary>
 /// ML.NET's SDCA regression with squared loss and an L2 penalty (ridge), budget = passes over the fold's training
-/// rows, on inputs prepared from those rows only (<see cref="ColumnScaling"/>), after median imputation (SDCA predicts NaN for a NaN cell). SDCA's L1
+/// rows, on inputs prepared from those rows only (<see cref="Core.Preparation.ColumnScaling"/>), after median imputation (SDCA predicts NaN for a NaN cell). SDCA's L1
 /// option is left at 0: its fits matched no mapping onto scikit-learn's ElasticNet penalties (seen 2026-12-05).
 /// </summary>
-public sealed class LinearLearner : IFoldLearner
+public sealed class LinearLearner : IFoldLearner, IKeepsModels
 {
     /// <summary>
     /// SDCA stops before its budget once the duality gap is this small relative to the loss. At ML.NET's regression
@@ -28,15 +27,14 @@ public sealed class LinearLearner : IFoldLearner
 
     public string Family => FamilyNames.Linear;
 
-    public FoldPrediction Fit(FoldJob job, CancellationToken cancellation)
-    {
-        FoldFitter.Check(Family, job);
-        // SDCA trains a NaN cell as 0 and predicts NaN for it (MissingCellTests): it scales the fold's imputed inputs.
-        var inputs = job.Features.Imputed(job.TrainRows);
-        var scaling = ColumnScaling.Learn(inputs.Train, job.TrainRows);
-        var prepared = job with { Inputs = new FoldInputs(scaling.Apply(inputs.Train), scaling.Apply(inputs.Test)) };
-        return FoldFitter.Fit(Family, prepared, (ml, train) => ml.Regression.Trainers.Sdca(Options(job)).Fit(train), cancellation);
-    }
+    // SDCA trains a NaN cell as 0 and predicts NaN for it (MissingCellTests): its descriptor asks for scaled, imputed inputs.
+    public FoldPrediction Fit(FoldJob job, CancellationToken cancellation) =>
+        FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.Sdca(Options(job)).Fit(train), cancellation);
+
+    public KeptFold FitAndKeep(FoldJob job, CancellationToken cancellation) =>
+        FoldFitter.FitAndKeep(Family, job, (ml, train) => ml.Regression.Trainers.Sdca(Options(job)).Fit(train), cancellation);
+
+    public double[] PredictKept(FoldJob job, byte[] model) => FoldFitter.PredictKept(Family, job, model);
 
     internal static SdcaRegressionTrainer.Options Options(FoldJob job)
     {

@@ -69,7 +69,7 @@ public sealed class MissingCellTests
         FoldPrediction Fit(TrialData data)
         {
             var job = TinyTables.Job(data, family, budget: 50);
-            return FoldFitter.Fit(family, job, (ml, view) => train(ml, view, job), CancellationToken.None);
+            return FoldFitter.Fit(family, FamilyInput.RawWithMissing, job, (ml, view) => train(ml, view, job), CancellationToken.None);
         }
 
         return (Fit(Table(double.NaN)), Fit(Table(0)));

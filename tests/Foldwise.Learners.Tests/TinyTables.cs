@@ -69,7 +69,8 @@ internal static class TinyTables
             chosen["l2"] = 1e-3;
         }
 
-        return ParameterSet.Of(DefaultSpaces.For(family).Ranges.Select(r => KeyValuePair.Create(r.Name, chosen[r.Name])));
+        // A parameter not listed takes its default range's low end, so a new family needs no line here.
+        return ParameterSet.Of(DefaultSpaces.For(family).Ranges.Select(r => KeyValuePair.Create(r.Name, chosen.GetValueOrDefault(r.Name, r.Low))));
     }
 
     /// <summary>The families whose space samples rows, so that their seed shows in the fit.</summary>

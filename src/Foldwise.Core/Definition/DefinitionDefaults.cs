@@ -19,13 +19,13 @@ public static class DefinitionDefaults
     /// <summary>The name of a search started from flags alone.</summary>
     public const string Name = "search";
 
-    /// <summary>Every built-in family with its default space, in <see cref="FamilyNames.All"/> order: what a definition may name.</summary>
+    /// <summary>Every built-in family with its default space, in <see cref="FamilyDescriptors.All"/> order: what a definition may name.</summary>
     public static ImmutableArray<FamilySearch> BuiltInFamilies { get; } =
-        [.. FamilyNames.All.Select(f => new FamilySearch(f, DefaultSpaces.For(f)))];
+        [.. FamilyDescriptors.All.Select(d => new FamilySearch(d.Name, d.Space))];
 
-    /// <summary>The families searched when a definition names none (<see cref="FamilyNames.Default"/>).</summary>
+    /// <summary>The families searched when a definition names none: those whose descriptor is in the default set.</summary>
     public static ImmutableArray<FamilySearch> DefaultFamilies { get; } =
-        [.. BuiltInFamilies.Where(f => FamilyNames.Default.Contains(f.Family))];
+        [.. BuiltInFamilies.Where(f => FamilyDescriptors.Get(f.Family).InDefaultSet)];
 
     /// <summary>
     /// The definition behind <c>foldwise run --train --test --id --target [--trials] [--hours]</c>. Relative paths

@@ -9,8 +9,6 @@ namespace Foldwise.Core.Definition;
 /// </summary>
 internal sealed class FamiliesReader(DefinitionCheck check, IReadOnlyList<FamilySearch> builtIn)
 {
-    private readonly RangeReader ranges = new(check);
-
     public ImmutableArray<FamilySearch> Read(DefinitionNode node)
     {
         string[] known = [.. builtIn.Select(f => f.Family)];
@@ -28,6 +26,7 @@ internal sealed class FamiliesReader(DefinitionCheck check, IReadOnlyList<Family
         string family = node.Path["families.".Length..];
         var names = standard.Ranges.Select(r => r.Name).ToArray();
         var given = check.Object(node, names, "parameter", $"{family}'s parameters");
+        var ranges = new RangeReader(check, FamilyDescriptors.Find(family));
         return new ParameterSpace([.. standard.Ranges.Select(r => given.Get(r.Name) is { } m ? ranges.Read(m.Value, r) : r)]);
     }
 }

@@ -2,9 +2,10 @@ namespace Foldwise.Core.Definition;
 
 /// <summary>
 /// The values a parameter can take at all, whatever range a file asks for; a bound is either
-/// inclusive or open. A range reaching past these would only fail later, on a worker.
+/// inclusive or open. A range reaching past these would only fail later, on a worker. This table holds the names
+/// several families share; a name only one family has keeps its limit in that family's descriptor.
 /// </summary>
-internal sealed record ParameterLimit(double Min, bool MinOpen, double Max, bool MaxOpen, string Meaning)
+public sealed record ParameterLimit(double Min, bool MinOpen, double Max, bool MaxOpen, string Meaning)
 {
     private static readonly Dictionary<string, ParameterLimit> ByName = new(StringComparer.Ordinal)
     {
@@ -23,12 +24,9 @@ internal sealed record ParameterLimit(double Min, bool MinOpen, double Max, bool
 
         // lambda_l2 >= 0 — LightGBM docs/Parameters.rst (from memory).
         ["l2"] = new(0, false, double.MaxValue, false, "a penalty weight"),
-
-        // GAM bins per feature: at least 2 — ML.NET GamTrainerBase option checks (from memory).
-        ["bins"] = new(2, false, 65535, false, "bins per feature"),
     };
 
-    /// <summary>The limit for a parameter name, or null when the name has none.</summary>
+    /// <summary>The shared limit for a parameter name, or null when the name has none (<see cref="Spaces.FamilyDescriptor.LimitOf"/> adds a family's own).</summary>
     public static ParameterLimit? For(string name) => ByName.GetValueOrDefault(name);
 
     /// <summary>Why <paramref name="value"/> is not allowed, or null when it is.</summary>

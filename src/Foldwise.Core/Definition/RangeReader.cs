@@ -8,7 +8,7 @@ namespace Foldwise.Core.Definition;
 /// <c>{"one_of": ["a", "b"]}</c>, or a bare number for a fixed value. The family's default range decides
 /// which of these fit: whole-number parameters take int, real ones float or log, named ones choice.
 /// </summary>
-internal sealed class RangeReader(DefinitionCheck check)
+internal sealed class RangeReader(DefinitionCheck check, FamilyDescriptor? family)
 {
     public ParameterRange Read(DefinitionNode node, ParameterRange standard)
     {
@@ -117,7 +117,7 @@ internal sealed class RangeReader(DefinitionCheck check)
 
     private void WithinLimits(DefinitionNode node, string name, double value)
     {
-        if (ParameterLimit.For(name)?.Problem(value) is { } problem)
+        if ((family is null ? ParameterLimit.For(name) : family.LimitOf(name))?.Problem(value) is { } problem)
         {
             throw check.Fail(node, $"'{node.Path}' {problem}, got {node.Text}");
         }

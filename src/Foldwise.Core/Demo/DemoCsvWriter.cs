@@ -5,7 +5,8 @@ using Foldwise.Core.Data;
 namespace Foldwise.Core.Demo;
 
 /// <summary>
-/// Writes a table as CSV (header, then one line per row: id, every feature, then the target if asked).
+/// Writes a table as CSV (header, then one line per row: id, every feature, every category column with a missing
+/// cell left empty, then the target if asked).
 /// Runs of zeros are copied from a prepared ",0,0,…" string, so a 12,000 × 7,000 table writes in seconds.
 /// The file appears whole or not at all: it is written beside the destination and then moved over it.
 /// </summary>
@@ -50,6 +51,12 @@ public static class DemoCsvWriter
             writer.Write(Escape(name));
         }
 
+        foreach (string name in table.CategoryNames)
+        {
+            writer.Write(',');
+            writer.Write(Escape(name));
+        }
+
         if (targetColumn is not null)
         {
             writer.Write(',');
@@ -77,6 +84,16 @@ public static class DemoCsvWriter
             }
 
             writer.Write(zeros[..(2 * (width - next))]);
+            foreach (var category in table.Categories)
+            {
+                writer.Write(',');
+                int code = category.Codes[r];
+                if (code != CategoryColumn.Missing)
+                {
+                    writer.Write(Escape(category.Levels[code]));
+                }
+            }
+
             if (targetColumn is not null)
             {
                 writer.Write(',');

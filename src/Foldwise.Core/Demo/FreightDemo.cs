@@ -6,8 +6,9 @@ namespace Foldwise.Core.Demo;
 /// <summary>
 /// The invented demo: a regional freight co-operative predicting the first-quarter shipping spend
 /// (<c>q1_spend</c>) of newly signed member shippers (<c>shipper_id</c>) from anonymised, mostly-zero
-/// lane-usage counts (<c>lane_0001</c>…). The same seed always gives the same tables; the test table
-/// is drawn from the same world and has no target.
+/// lane-usage counts (<c>lane_0001</c>…) and three facts from the signing form as text (<c>region</c>,
+/// <c>sector</c>, <c>signing_channel</c>; some left blank). The same seed always gives the same tables; the test
+/// table is drawn from the same world and has no target.
 /// </summary>
 public static class FreightDemo
 {
@@ -43,9 +44,16 @@ public static class FreightDemo
         var builder = new ColumnBuilder(scenario.ColumnCount);
         var ids = ImmutableArray.CreateBuilder<string>(rows);
         var target = ImmutableArray.CreateBuilder<double>(rows);
+        var facts = new int[ShipperFacts.ColumnNames.Length][];
+        for (int f = 0; f < facts.Length; f++)
+        {
+            facts[f] = new int[rows];
+        }
+
         for (int r = 0; r < rows; r++)
         {
-            var (columns, counts, spend) = scenario.Shipper(random);
+            var (columns, counts, fact, spend) = scenario.Shipper(random);
+            (facts[0][r], facts[1][r], facts[2][r]) = (fact.Region, fact.Sector, fact.Channel);
             for (int k = 0; k < columns.Length; k++)
             {
                 builder.Add(r, columns[k], counts[k]);
@@ -55,6 +63,18 @@ public static class FreightDemo
             target.Add(spend);
         }
 
-        return new FeatureTable(source, ids.MoveToImmutable(), names, builder.BuildAll(), withTarget ? target.MoveToImmutable() : []);
+        string[][] levelNames = [ShipperFacts.Regions[..scenario.RegionCount], ShipperFacts.Sectors, ShipperFacts.Channels];
+        ImmutableArray<CategoryColumn> categories = [.. facts.Select((codes, f) => InOrderOfAppearance(codes, levelNames[f]))];
+        return new FeatureTable(
+            source, ids.MoveToImmutable(), names, builder.BuildAll(), withTarget ? target.MoveToImmutable() : [],
+            [.. ShipperFacts.ColumnNames], categories);
+    }
+
+    /// <summary>A category column whose levels are listed in order of first appearance, as a CSV reader would list them.</summary>
+    private static CategoryColumn InOrderOfAppearance(int[] codes, string[] names)
+    {
+        var order = new Dictionary<int, int>();
+        var recoded = codes.Select(c => c == ShipperFacts.Blank ? CategoryColumn.Missing : order.TryGetValue(c, out int at) ? at : order[c] = order.Count).ToImmutableArray();
+        return new CategoryColumn([.. order.OrderBy(p => p.Value).Select(p => names[p.Key])], recoded);
     }
 }

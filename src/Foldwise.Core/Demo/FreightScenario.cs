@@ -26,6 +26,9 @@ internal sealed class FreightScenario
     private readonly float[] scratch;
     private readonly double structureMean;
     private readonly double structureSpread;
+    private readonly double[] sectorEffect;
+    private readonly double[] sectorCumulative;
+    private readonly double[] channelEffect;
 
     public FreightScenario(int columns, double density, Random random)
     {
@@ -52,6 +55,11 @@ internal sealed class FreightScenario
         corridorCumulative = [.. corridorLanes.Select(lanes => Cumulative([.. lanes.Select(i => popularity[i])]))];
         corridorEffect = [.. Enumerable.Range(0, corridors).Select(_ => 0.3 * random.Normal())];
 
+        // A shipper's sector and how it signed up move its spend a little beyond what its lanes say.
+        sectorEffect = [.. ShipperFacts.Sectors.Select(_ => 0.25 * random.Normal())];
+        sectorCumulative = Cumulative([.. ShipperFacts.Sectors.Select((_, k) => 1.0 / (k + 2))]);
+        channelEffect = [.. ShipperFacts.Channels.Select(_ => 0.1 * random.Normal())];
+
         // Spend is driven by a sparse subset of the busier lanes, a few of them in pairs.
         int signalCount = Math.Max(8, laneColumns.Length / 120);
         signal = [.. random.GetItems(Enumerable.Range(0, laneColumns.Length / 4).ToArray(), signalCount).Distinct()
@@ -70,7 +78,7 @@ internal sealed class FreightScenario
         var raw = new double[400];
         for (int i = 0; i < raw.Length; i++)
         {
-            raw[i] = Use(pilot, touched);
+            raw[i] = Use(pilot, touched, out _);
             Clear(touched);
         }
 
@@ -82,25 +90,37 @@ internal sealed class FreightScenario
 
     public int ColumnCount => columnCount;
 
-    /// <summary>One new member: its non-zero lane counts (columns ascending) and its first-quarter spend.</summary>
-    public (int[] Columns, float[] Counts, double Spend) Shipper(Random random)
+    /// <summary>Number of regions: one per home corridor.</summary>
+    public int RegionCount => corridorLanes.Length;
+
+    /// <summary>
+    /// One new member: its non-zero lane counts (columns ascending), the facts its signing form records (region,
+    /// sector, channel; <see cref="ShipperFacts.Blank"/> where the form left it empty) and its first-quarter spend.
+    /// </summary>
+    public (int[] Columns, float[] Counts, ShipperFacts Facts, double Spend) Shipper(Random random)
     {
         var touched = new List<int>();
-        double structure = (Use(random, touched) - structureMean) / structureSpread;
+        double structure = (Use(random, touched, out int home) - structureMean) / structureSpread;
+        int sector = random.Pick(sectorCumulative);
+        int channel = random.Next(ShipperFacts.Channels.Length);
 
-        // Median spend e^8.3 ≈ 4,000; the lanes explain a log-scale spread of 1, the rest is noise.
-        double spend = Math.Round(Math.Exp(8.3 + structure + (0.45 * random.Normal())), 2);
+        // Median spend e^8.3 ≈ 4,000; the lanes explain a log-scale spread of 1, sector and channel a little more, the rest is noise.
+        double spend = Math.Round(Math.Exp(8.3 + structure + sectorEffect[sector] + channelEffect[channel] + (0.45 * random.Normal())), 2);
+        var facts = new ShipperFacts(
+            Region: random.NextDouble() < ShipperFacts.RegionBlankShare ? ShipperFacts.Blank : home,
+            Sector: random.NextDouble() < ShipperFacts.SectorBlankShare ? ShipperFacts.Blank : sector,
+            Channel: random.NextDouble() < ShipperFacts.ChannelBlankShare ? ShipperFacts.Blank : channel);
         touched.Sort();
         int[] columns = [.. touched];
         var counts = columns.Select(c => scratch[c]).ToArray();
         Clear(touched);
-        return (columns, counts, spend);
+        return (columns, counts, facts, spend);
     }
 
-    /// <summary>Draws a shipper's lane usage into the scratch row and returns its unscaled log spend.</summary>
-    private double Use(Random random, List<int> touched)
+    /// <summary>Draws a shipper's lane usage into the scratch row and returns its unscaled log spend and home corridor.</summary>
+    private double Use(Random random, List<int> touched, out int home)
     {
-        int home = random.Next(corridorLanes.Length);
+        home = random.Next(corridorLanes.Length);
         double activity = Math.Exp(0.5 * random.Normal());
         int wanted = Math.Clamp(random.Poisson(meanLanes * activity), 1, laneColumns.Length / 2);
         double trips = 0;

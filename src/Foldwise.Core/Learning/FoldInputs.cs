@@ -1,6 +1,8 @@
 using System.Collections.Immutable;
 using Foldwise.Core.Data;
 using Foldwise.Core.Encodings;
+using Foldwise.Core.Preparation;
+using Foldwise.Core.Spaces;
 
 namespace Foldwise.Core.Learning;
 
@@ -47,6 +49,27 @@ public sealed class FoldInputs
     /// column after all others. Returns this object when nothing is missing.
     /// </summary>
     public FoldInputs Imputed(ImmutableArray<int> trainRows) => HasMissing ? MedianImputation.Apply(this, trainRows) : this;
+
+    /// <summary>
+    /// The inputs a family reads (<see cref="FamilyDescriptor.Input"/>), each learnt from <paramref name="trainRows"/> only:
+    /// these as they are, <see cref="Imputed"/>, or imputed and then scaled (<see cref="ColumnScaling"/>).
+    /// </summary>
+    public FoldInputs For(FamilyInput input, ImmutableArray<int> trainRows)
+    {
+        switch (input)
+        {
+            case FamilyInput.RawWithMissing:
+                return this;
+            case FamilyInput.Imputed:
+                return Imputed(trainRows);
+            case FamilyInput.Scaled:
+                var imputed = Imputed(trainRows);
+                var scaling = ColumnScaling.Learn(imputed.Train, trainRows);
+                return new FoldInputs(scaling.Apply(imputed.Train), scaling.Apply(imputed.Test));
+            default:
+                throw new ArgumentOutOfRangeException(nameof(input), input, "unknown family input");
+        }
+    }
 
     private static bool ContainsNaN(float[] values)
     {

@@ -38,7 +38,12 @@ public static class ColumnNotes
             ? "one indicator column per kept level"
             : "smoothed target mean, out-of-fold within each fold's training rows";
         string missing = note.MissingShare > 0 ? string.Create(CultureInfo.InvariantCulture, $", {note.MissingShare * 100:F1}% missing (a level of its own)") : "";
-        string fresh = note.NewTestLevels > 0 ? $"; the test table has {note.NewTestLevels:N0} new levels in {note.NewTestRows:N0} rows (encoded as \"other\")" : "";
-        return $"category {note.Name}: {note.Levels:N0} levels, {note.LevelsKept:N0} seen often enough to keep, the rest \"other\"; {encoding}{missing}{fresh}";
+        string fresh = note.NewTestLevels > 0 ? $"; the test table has {Count(note.NewTestLevels, "new level")} in {Count(note.NewTestRows, "row")} (encoded as \"other\")" : "";
+        string kept = note.LevelsKept == note.Levels
+            ? "each seen often enough to keep"
+            : $"{note.LevelsKept:N0} seen often enough to keep, the rest \"other\"";
+        return $"category {note.Name}: {note.Levels:N0} levels, {kept}; {encoding}{missing}{fresh}";
     }
+
+    private static string Count(int count, string noun) => count == 1 ? $"1 {noun}" : $"{count:N0} {noun}s";
 }

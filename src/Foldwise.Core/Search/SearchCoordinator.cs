@@ -412,23 +412,10 @@ public sealed class SearchCoordinator
         }
     }
 
-    private LeaseGrant Granted(TrialRecord trial) => new(
-        LeaseKind.Granted,
-        trial,
-        SeedOf(trial),
-        definition.Schedule.ShortRungRate.For(trial.Parameters, trial.Budget, definition.Schedule.FullBudget),
-        PredictsTest: TestPredictions.Wanted(trial.Budget, definition.Schedule.FullBudget, fullBudgetDone));
-
-    /// <summary>Promotions share their first candidate's seed, so a longer fit grows the same trees.</summary>
-    private int SeedOf(TrialRecord trial)
+    private LeaseGrant Granted(TrialRecord trial)
     {
-        var root = trial;
-        while (root.ParentId is { } parent && trials.TryGetValue(parent, out var up))
-        {
-            root = up;
-        }
-
-        return new SearchSeeds(definition.Seed).Trial(root.Id);
+        var fit = TrialFit.For(trial, trials, definition);
+        return new(LeaseKind.Granted, trial, fit.Seed, fit.Run, PredictsTest: TestPredictions.Wanted(trial.Budget, definition.Schedule.FullBudget, fullBudgetDone));
     }
 
     private double SpentSecondsLocked(DateTimeOffset now) => spentBefore + (now - sessionStart).TotalSeconds;

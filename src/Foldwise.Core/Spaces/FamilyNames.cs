@@ -1,6 +1,6 @@
 namespace Foldwise.Core.Spaces;
 
-/// <summary>The built-in learner families. Workers run only these; the coordinator sends names and parameters, never code.</summary>
+/// <summary>The built-in families' names, for code that names one family on purpose; what a family is lives in <see cref="FamilyDescriptors"/>.</summary>
 public static class FamilyNames
 {
     public const string LightGbm = "lightgbm";
@@ -9,12 +9,9 @@ public static class FamilyNames
     public const string Gam = "gam";
     public const string Linear = "linear";
 
-    /// <summary>Every family a definition may name.</summary>
-    public static IReadOnlyList<string> All { get; } = [LightGbm, FastTree, Forest, Gam, Linear];
+    /// <summary>Every family a definition may name (<see cref="FamilyDescriptors.All"/>).</summary>
+    public static IReadOnlyList<string> All { get; } = [.. FamilyDescriptors.All.Select(d => d.Name)];
 
-    /// <summary>
-    /// The families a search without <c>families</c> runs. Forest, GAM and linear join once each family has a budget
-    /// range of its own: under the shared rounds range a forest trial costs many boosted ones.
-    /// </summary>
-    public static IReadOnlyList<string> Default { get; } = [LightGbm, FastTree];
+    /// <summary>The families a search without <c>families</c> runs: those whose descriptor says so.</summary>
+    public static IReadOnlyList<string> Default { get; } = [.. FamilyDescriptors.All.Where(d => d.InDefaultSet).Select(d => d.Name)];
 }

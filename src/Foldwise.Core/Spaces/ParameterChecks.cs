@@ -1,5 +1,3 @@
-using Foldwise.Core.Definition;
-
 namespace Foldwise.Core.Spaces;
 
 /// <summary>
@@ -10,7 +8,8 @@ public static class ParameterChecks
 {
     public static IReadOnlyList<string> Problems(string family, ParameterSet parameters)
     {
-        var space = DefaultSpaces.For(family);
+        var descriptor = FamilyDescriptors.Get(family);
+        var space = descriptor.Space;
         var problems = new List<string>();
         foreach (var (name, value) in parameters.Values)
         {
@@ -29,7 +28,7 @@ public static class ParameterChecks
             {
                 problems.Add($"parameter '{name}' = {value} must be a whole number");
             }
-            else if (ParameterLimit.For(name)?.Problem(value) is { } problem)
+            else if (descriptor.LimitOf(name)?.Problem(value) is { } problem)
             {
                 problems.Add($"parameter '{name}' = {value} {problem}");
             }

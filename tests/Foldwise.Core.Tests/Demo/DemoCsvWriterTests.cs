@@ -64,11 +64,15 @@ public sealed class DemoCsvWriterTests : IDisposable
 
         DemoCsvWriter.Write(train, path, FreightDemo.IdColumn, FreightDemo.TargetColumn);
 
+        // Then each line holds the id, every lane, the three text facts (blank where missing) and the target
         var lines = File.ReadAllLines(path);
         Assert.Equal(train.RowCount + 1, lines.Length);
-        Assert.All(lines, l => Assert.Equal(train.FeatureCount + 2, l.Split(',').Length));
-        long nonZero = lines.Skip(1).Sum(l => l.Split(',')[1..^1].Count(f => f != "0"));
+        Assert.All(lines, l => Assert.Equal(train.FeatureCount + 3 + 2, l.Split(',').Length));
+        Assert.EndsWith(",region,sector,signing_channel,q1_spend", lines[0]);
+        long nonZero = lines.Skip(1).Sum(l => l.Split(',')[1..(1 + train.FeatureCount)].Count(f => f != "0"));
         Assert.Equal(train.Columns.Sum(c => (long)c.NonZeroCount), nonZero);
+        int blanks = lines.Skip(1).Sum(l => l.Split(',')[(1 + train.FeatureCount)..^1].Count(f => f.Length == 0));
+        Assert.Equal(train.Categories.Sum(c => c.MissingCount), blanks);
     }
 
     /// <summary>Columns a, b, c, d: b[0] = 3, a[1] = 1.25, d[1] = 7.</summary>

@@ -93,6 +93,48 @@ public sealed class FreightDemoTests
         Assert.Empty(train.Ids.Intersect(test.Ids));
     }
 
+    [Fact]
+    public void Records_region_sector_and_channel_as_text_with_some_left_blank()
+    {
+        var (train, test) = Quick;
+
+        // Then both tables carry the three facts, each with a few levels and some blank cells
+        Assert.Equal(["region", "sector", "signing_channel"], train.CategoryNames.ToArray());
+        Assert.Equal(train.CategoryNames.ToArray(), test.CategoryNames.ToArray());
+        Assert.Equal([4, 8, 4], train.Categories.Select(c => c.Levels.Length).ToArray());
+        Assert.All(train.Categories, c => Assert.InRange(c.MissingCount, 0.02 * train.RowCount, 0.3 * train.RowCount));
+        Assert.Contains("groceries", train.Categories[1].Levels);
+
+        // And the blank share follows the form: the channel is left empty most often
+        Assert.True(train.Categories[2].MissingCount > train.Categories[0].MissingCount, "channel blank more often than region");
+    }
+
+    [Fact]
+    public void Lets_the_sector_move_the_spend()
+    {
+        // Given the quick demo's shippers with a sector, and their log spends
+        var (train, _) = Quick;
+        var sector = train.Categories[1];
+        int[] rows = [.. Enumerable.Range(0, train.RowCount).Where(r => sector.Codes[r] != CategoryColumn.Missing)];
+        int[] codes = [.. rows.Select(r => sector.Codes[r])];
+        double[] logSpend = [.. rows.Select(r => Math.Log(train.Target[r]))];
+
+        // When the spread of the sectors' mean log spends is compared with that of 20 seeded shuffles of the labels
+        double actual = SpreadOfGroupMeans(codes, logSpend);
+        var random = new Random(5);
+        double shuffled = Enumerable.Range(0, 20).Max(_ => SpreadOfGroupMeans([.. codes.OrderBy(_ => random.Next())], logSpend));
+
+        // Then the sector explains more than any shuffle does
+        Assert.True(actual > shuffled, $"sector spread {actual:F3}, largest shuffled {shuffled:F3}");
+    }
+
+    private static double SpreadOfGroupMeans(int[] codes, double[] values)
+    {
+        var means = codes.Zip(values).GroupBy(p => p.First).Select(g => g.Average(p => p.Second)).ToArray();
+        double mean = means.Average();
+        return means.Sum(m => (m - mean) * (m - mean)) / means.Length;
+    }
+
     private static int CountConstant(FeatureTable table) =>
         table.Columns.Count(c => c.NonZeroCount == 0 || (c.NonZeroCount == table.RowCount && c.Values.All(v => v == c.Values[0])));
 
