@@ -16,8 +16,8 @@ public sealed class FailureLinesTests
         view.Report(new AttemptFailed("s", 7, 2, "office-pc-3/1", "DllNotFoundException: lib_lightgbm.so"));
         view.Report(new WorkerQuarantined("s", "office-pc-3", "3 trials failed in a row; last: DllNotFoundException: lib_lightgbm.so"));
 
-        Assert.Contains("trial 7 attempt 2 failed on office-pc-3/1: DllNotFoundException: lib_lightgbm.so; queued again", console.Output, StringComparison.Ordinal);
-        Assert.Contains("worker office-pc-3 quarantined: 3 trials failed in a row; last: DllNotFoundException: lib_lightgbm.so", console.Output, StringComparison.Ordinal);
+        Assert.Contains("Attempt 2 of trial 7 failed on office-pc-3/1: DllNotFoundException: lib_lightgbm.so; queued again", console.Output, StringComparison.Ordinal);
+        Assert.Contains("Worker office-pc-3 quarantined: 3 trials failed in a row; last: DllNotFoundException: lib_lightgbm.so", console.Output, StringComparison.Ordinal);
     }
 
     [Fact]
