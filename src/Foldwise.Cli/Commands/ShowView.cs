@@ -21,7 +21,7 @@ public static class ShowView
         void Fact(string name, string value) => facts.AddRow(name, Markup.Escape(value));
 
         // No bracket: a schedule without brackets (plain ASHA, full budget).
-        int? bracket = BracketNumbers.For(search.Definition.Schedule).Of(t.Bracket);
+        int? bracket = BracketNumbers.For(search.Definition).Of(t.Family, t.Bracket);
         Fact("rung", $"{t.Rung}{(bracket is { } b ? $" (bracket {b})" : "")}, {t.Budget} rounds");
         Fact("proposed by", t.ParentId is { } p ? $"{t.Proposer} of trial {p}" : t.Proposer);
         var chain = ShowLineage.Chain(t, search.Trials);

@@ -408,7 +408,7 @@ public sealed class SearchCoordinator
     }
 
     private LeaseGrant Granted(TrialRecord trial) => new(
-        LeaseKind.Granted, trial, SeedOf(trial), definition.Schedule.ShortRungRate.For(trial.Parameters, trial.Budget, definition.Schedule.FullBudget));
+        LeaseKind.Granted, trial, SeedOf(trial), definition.Schedule.ShortRungRate.For(trial.Parameters, trial.Budget, definition.BudgetOf(trial.Family).FullBudget));
 
     /// <summary>Promotions share their first candidate's seed, so a longer fit grows the same trees.</summary>
     private int SeedOf(TrialRecord trial)
