@@ -28,6 +28,9 @@ public static class FoldwiseApp
         config.AddCommand<BlendCommand>("blend")
             .WithDescription("Solve the blend again from the stored out-of-fold predictions, store it, and rewrite the prediction file.")
             .WithExample("blend", "runs/demo/search.db", "--mode", "non_negative", "--pool", "5");
+        config.AddCommand<PredictCommand>("predict")
+            .WithDescription("Score a table of new rows with the blend's kept models, written under the search's prediction header.")
+            .WithExample("predict", "runs/demo/search.db", "--rows", "new-rows.csv", "--out", "runs/demo/new-predictions.csv");
         config.AddCommand<ExportCommand>("export")
             .WithDescription("Write every full-budget trial's out-of-fold predictions (original scale) to a CSV file.")
             .WithExample("export", "runs/demo/search.db", "--oof", "runs/demo/oof.csv");

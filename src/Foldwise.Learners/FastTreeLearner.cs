@@ -9,7 +9,7 @@ namespace Foldwise.Learners;
 /// ML.NET's FastTree regression, budget = trees. Seeded; bagging every tree when row_fraction &lt; 1.
 /// Unlike LightGBM it trains in parallel within one process.
 /// </summary>
-public sealed class FastTreeLearner : IFoldLearner
+public sealed class FastTreeLearner : IFoldLearner, IKeepsModels
 {
     internal static readonly OptionTable<FastTreeRegressionTrainer.Options> Table = new(
         new Dictionary<string, Action<FastTreeRegressionTrainer.Options, double>>
@@ -31,6 +31,11 @@ public sealed class FastTreeLearner : IFoldLearner
     // (MissingCellTests), so it reads the fold's median-imputed inputs with their "was missing" columns.
     public FoldPrediction Fit(FoldJob job, CancellationToken cancellation) =>
         FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.FastTree(Options(job)).Fit(train), cancellation);
+
+    public KeptFold FitAndKeep(FoldJob job, CancellationToken cancellation) =>
+        FoldFitter.FitAndKeep(Family, job, (ml, train) => ml.Regression.Trainers.FastTree(Options(job)).Fit(train), cancellation);
+
+    public double[] PredictKept(FoldJob job, byte[] model) => FoldFitter.PredictKept(Family, job, model);
 
     internal static FastTreeRegressionTrainer.Options Options(FoldJob job)
     {

@@ -22,10 +22,32 @@ internal static class FoldFitter
 
     /// <summary>The family's descriptor says which inputs it reads (<see cref="FamilyInput"/>); they are prepared from the fold's training rows.</summary>
     public static FoldPrediction Fit(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation) =>
-        Fit(family, FamilyDescriptors.Get(family).Input, job, train, cancellation);
+        Run(family, FamilyDescriptors.Get(family).Input, job, train, keep: false, cancellation).Prediction;
 
     /// <param name="input">The inputs to prepare; MissingCellTests passes <see cref="FamilyInput.RawWithMissing"/> to see what a library does with NaN.</param>
-    internal static FoldPrediction Fit(string family, FamilyInput input, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation)
+    internal static FoldPrediction Fit(string family, FamilyInput input, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation) =>
+        Run(family, input, job, train, keep: false, cancellation).Prediction;
+
+    /// <summary>As <see cref="Fit(string, FoldJob, Func{MLContext, IDataView, ITransformer}, CancellationToken)"/>, with the trained model in ML.NET's own model format as the kept bytes.</summary>
+    public static KeptFold FitAndKeep(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation) =>
+        Run(family, FamilyDescriptors.Get(family).Input, job, train, keep: true, cancellation);
+
+    /// <summary>
+    /// Scores every test row of <paramref name="job"/> with a model <see cref="FitAndKeep"/> kept for the same fold, on
+    /// inputs prepared as for that fit (the family's inputs learnt from the same training rows, the same training mean added back).
+    /// </summary>
+    public static double[] PredictKept(string family, FoldJob job, byte[] model)
+    {
+        ArgumentNullException.ThrowIfNull(job);
+        ArgumentNullException.ThrowIfNull(model);
+        var ml = new MLContext(job.Seed);
+        var inputs = job.Features.For(FamilyDescriptors.Get(family).Input, job.TrainRows);
+        using var stream = new MemoryStream(model, writable: false);
+        var loaded = ml.Model.Load(stream, out _);
+        return Score(loaded, SparseViews.Rows(ml, inputs.Test, [.. Enumerable.Range(0, inputs.Test.RowCount)], labels: null), inputs.Test.RowCount, TrainingMean(job));
+    }
+
+    private static KeptFold Run(string family, FamilyInput input, FoldJob job, Func<MLContext, IDataView, ITransformer> train, bool keep, CancellationToken cancellation)
     {
         Check(family, job);
         cancellation.ThrowIfCancellationRequested();
@@ -46,8 +68,15 @@ internal static class FoldFitter
             cancellation.ThrowIfCancellationRequested();
             var validation = Score(model, SparseViews.Rows(ml, inputs.Train, job.ValidationRows, labels: null), job.ValidationRows.Length, offset);
             var test = Score(model, SparseViews.Test(inputs.Test), inputs.Test.RowCount, offset);
-            return new FoldPrediction(validation, test);
+            return new KeptFold(new FoldPrediction(validation, test), keep ? Save(ml, model, trainView.Schema) : []);
         }
+    }
+
+    private static byte[] Save(MLContext ml, ITransformer model, DataViewSchema schema)
+    {
+        using var stream = new MemoryStream();
+        ml.Model.Save(model, schema, stream);
+        return stream.ToArray();
     }
 
     /// <summary>The training rows' mean target: every tree learner here fits the target less it.</summary>

@@ -10,7 +10,7 @@ namespace Foldwise.Learners;
 /// <c>row_fraction</c> of the rows; the prediction is the trees' mean.
 /// Reads the fold's median-imputed inputs: ML.NET trains a NaN cell as 0 but scores it otherwise (MissingCellTests).
 /// </summary>
-public sealed class ForestLearner : IFoldLearner
+public sealed class ForestLearner : IFoldLearner, IKeepsModels
 {
     internal static readonly OptionTable<FastForestRegressionTrainer.Options> Table = new(
         new Dictionary<string, Action<FastForestRegressionTrainer.Options, double>>
@@ -28,6 +28,11 @@ public sealed class ForestLearner : IFoldLearner
         // FastForest trains a NaN cell as 0 but scores it above every split (MissingCellTests): it reads imputed inputs.
         return FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.FastForest(Options(job)).Fit(train), cancellation);
     }
+
+    public KeptFold FitAndKeep(FoldJob job, CancellationToken cancellation) =>
+        FoldFitter.FitAndKeep(Family, job, (ml, train) => ml.Regression.Trainers.FastForest(Options(job)).Fit(train), cancellation);
+
+    public double[] PredictKept(FoldJob job, byte[] model) => FoldFitter.PredictKept(Family, job, model);
 
     internal static FastForestRegressionTrainer.Options Options(FoldJob job)
     {

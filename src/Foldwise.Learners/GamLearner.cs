@@ -10,7 +10,7 @@ namespace Foldwise.Learners;
 /// step function per feature, each boosted from single-feature trees.
 /// Reads the fold's median-imputed inputs: ML.NET trains a NaN cell as 0 but scores it otherwise (MissingCellTests).
 /// </summary>
-public sealed class GamLearner : IFoldLearner
+public sealed class GamLearner : IFoldLearner, IKeepsModels
 {
     internal static readonly OptionTable<GamRegressionTrainer.Options> Table = new(
         new Dictionary<string, Action<GamRegressionTrainer.Options, double>>
@@ -27,6 +27,11 @@ public sealed class GamLearner : IFoldLearner
         // GAM trains a NaN cell as 0 but scores it in its lowest bin (MissingCellTests): it reads imputed inputs.
         return FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.Gam(Options(job)).Fit(train), cancellation);
     }
+
+    public KeptFold FitAndKeep(FoldJob job, CancellationToken cancellation) =>
+        FoldFitter.FitAndKeep(Family, job, (ml, train) => ml.Regression.Trainers.Gam(Options(job)).Fit(train), cancellation);
+
+    public double[] PredictKept(FoldJob job, byte[] model) => FoldFitter.PredictKept(Family, job, model);
 
     internal static GamRegressionTrainer.Options Options(FoldJob job)
     {

@@ -10,7 +10,7 @@ namespace Foldwise.Learners;
 /// every fit of a process should use the same thread count (LightGBM keeps it in a process-wide setting).
 /// <see cref="LightGbmFoldModel"/> offers what a fit alone does not: per-round held-out scores and continued training.
 /// </summary>
-public sealed class LightGbmLearner : IFoldLearner
+public sealed class LightGbmLearner : IFoldLearner, IKeepsModels
 {
     public string Family => FamilyNames.LightGbm;
 
@@ -19,4 +19,13 @@ public sealed class LightGbmLearner : IFoldLearner
         using var model = LightGbmFoldModel.Train(job, scoreEachRound: false, cancellation);
         return model.Predict();
     }
+
+    /// <summary>As <see cref="Fit"/>, with the model's text (LightGBM's own model format) as the kept bytes.</summary>
+    public KeptFold FitAndKeep(FoldJob job, CancellationToken cancellation)
+    {
+        using var model = LightGbmFoldModel.Train(job, scoreEachRound: false, cancellation);
+        return new KeptFold(model.Predict(), model.Save());
+    }
+
+    public double[] PredictKept(FoldJob job, byte[] model) => LightGbmFoldModel.PredictKept(job, model);
 }

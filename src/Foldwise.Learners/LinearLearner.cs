@@ -10,7 +10,7 @@ namespace Foldwise.Learners;
 /// rows, on inputs prepared from those rows only (<see cref="Core.Preparation.ColumnScaling"/>), after median imputation (SDCA predicts NaN for a NaN cell). SDCA's L1
 /// option is left at 0: its fits matched no mapping onto scikit-learn's ElasticNet penalties (seen 2026-12-05).
 /// </summary>
-public sealed class LinearLearner : IFoldLearner
+public sealed class LinearLearner : IFoldLearner, IKeepsModels
 {
     /// <summary>
     /// SDCA stops before its budget once the duality gap is this small relative to the loss. At ML.NET's regression
@@ -30,6 +30,11 @@ public sealed class LinearLearner : IFoldLearner
     // SDCA trains a NaN cell as 0 and predicts NaN for it (MissingCellTests): its descriptor asks for scaled, imputed inputs.
     public FoldPrediction Fit(FoldJob job, CancellationToken cancellation) =>
         FoldFitter.Fit(Family, job, (ml, train) => ml.Regression.Trainers.Sdca(Options(job)).Fit(train), cancellation);
+
+    public KeptFold FitAndKeep(FoldJob job, CancellationToken cancellation) =>
+        FoldFitter.FitAndKeep(Family, job, (ml, train) => ml.Regression.Trainers.Sdca(Options(job)).Fit(train), cancellation);
+
+    public double[] PredictKept(FoldJob job, byte[] model) => FoldFitter.PredictKept(Family, job, model);
 
     internal static SdcaRegressionTrainer.Options Options(FoldJob job)
     {

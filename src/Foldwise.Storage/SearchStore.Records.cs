@@ -6,7 +6,7 @@ using static Foldwise.Storage.BsonFields;
 
 namespace Foldwise.Storage;
 
-/// <summary>The records a search keeps: header, trials, vectors, screening and blend.</summary>
+/// <summary>The records a search keeps: header, trials, vectors, screening, blend and the record of kept models.</summary>
 public sealed partial class SearchStore
 {
     private const string VectorCollection = "vectors";
@@ -125,6 +125,20 @@ public sealed partial class SearchStore
     {
         var doc = Read(db => db.GetCollection(HeaderDocuments.Collection).FindById(BlendDocuments.Id));
         return doc is null ? null : BlendDocuments.FromDocument(doc);
+    }
+
+    /// <summary>Records which blend members' models are kept beside the store (replacing any earlier record).</summary>
+    public void SaveKept(KeptModels kept) => Write(db =>
+        db.GetCollection(HeaderDocuments.Collection).Upsert(KeptDocuments.ToDocument(kept)));
+
+    /// <summary>Removes the record of kept models: the blend changed and its members' models could not be kept.</summary>
+    public void ForgetKept() => Write(db => db.GetCollection(HeaderDocuments.Collection).Delete(KeptDocuments.Id));
+
+    /// <summary>The kept models' record, or null when the search kept none.</summary>
+    public KeptModels? LoadKept()
+    {
+        var doc = Read(db => db.GetCollection(HeaderDocuments.Collection).FindById(KeptDocuments.Id));
+        return doc is null ? null : KeptDocuments.FromDocument(doc);
     }
 
     private static void InTransaction(LiteDatabase db, Action action)

@@ -11,7 +11,8 @@ namespace Foldwise.Tuning;
 
 /// <summary>
 /// The final stage: pools the best full-budget trials of each family, solves the weights on their out-of-fold
-/// predictions, stores the blend, and writes the blended test predictions on the original scale.
+/// predictions, stores the blend, writes the blended test predictions on the original scale, and keeps the members'
+/// fold models (<see cref="ModelKeeping"/>).
 /// </summary>
 public static class BlendStep
 {
@@ -57,6 +58,7 @@ public static class BlendStep
         span?.SetTag("foldwise.blend.mode", DefinitionWords.Of(result.Summary.Mode)).SetTag("foldwise.blend.pool", pool.Count)
             .SetTag("foldwise.blend.nested", result.Summary.NestedScore).SetTag("foldwise.blend.in_sample", result.Summary.InSampleScore);
         events.Report(new BlendSolved(result.Summary, definition.Metric, [.. trials], path, header.TestIds.Length));
+        ModelKeeping.Keep(store, header, definition, outDir, result.Summary, events, abandon);
         return result.Summary;
     }
 }

@@ -43,6 +43,9 @@ public static class ShowJson
             ["started"] = t.Started,
             ["finished"] = t.Finished,
             ["seconds"] = t.Duration?.TotalSeconds,
+            ["kept_models"] = search.KeptMemberOf(t.Id) is { } kept
+                ? new JsonObject { ["file"] = $"{Tuning.KeptModelFiles.FolderName}/{kept.Hash}.fwm", ["sha256"] = kept.Hash, ["bytes"] = kept.Bytes, ["folds"] = kept.Folds, ["weight"] = kept.Weight }
+                : null,
             ["attempts"] = t.Attempt,
             ["lost_attempts"] = new JsonArray([.. t.LostAttempts.Select(s => (JsonNode?)s)]),
             ["failure"] = t.FailureReason,

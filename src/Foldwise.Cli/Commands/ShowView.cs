@@ -13,6 +13,11 @@ public static class ShowView
 {
     private static readonly CultureInfo Invariant = CultureInfo.InvariantCulture;
 
+    /// <summary>Where the trial's fold models are kept (the file and its SHA-256), or why they are not.</summary>
+    internal static string KeptText(StoredSearch search, TrialRecord t) => search.KeptMemberOf(t.Id) is { } kept
+        ? $"{Tuning.KeptModelFiles.FolderName}/{kept.Hash}.fwm ({kept.Folds} fold models, {(kept.Bytes / 1e6).ToString("F2", Invariant)} MB, blend weight {kept.Weight.ToString("F4", Invariant)})"
+        : search.Kept is null ? "none: the search kept no models ('foldwise blend STORE' keeps the blend's)" : "none: not a member of the kept blend";
+
     public static void Render(IAnsiConsole console, StoredSearch search, TrialRecord t)
     {
         string metric = search.Metric.Name;
@@ -50,6 +55,7 @@ public static class ShowView
         Fact("finished", t.Finished?.ToString("u", Invariant) ?? "");
         Fact("duration", t.Duration is { } d ? $"{d.TotalSeconds.ToString("F1", Invariant)} s" : "");
         Fact("attempts", $"{t.Attempt} ({t.Failures} lost)");
+        Fact("kept models", KeptText(search, t));
         foreach (string lost in t.LostAttempts)
         {
             Fact("  lost attempt", lost);

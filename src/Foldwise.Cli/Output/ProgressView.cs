@@ -17,6 +17,7 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
     private readonly object gate = new();
     private LiveBar? live;
     private IReadOnlyDictionary<string, ParameterSpace> spaces = new Dictionary<string, ParameterSpace>();
+    private readonly StepLine stepLine = new(console);
 
     public void Report(SearchEvent value)
     {
@@ -28,6 +29,13 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
 
     private void Render(SearchEvent value)
     {
+        if (value is StepProgress step)
+        {
+            stepLine.Show(step);
+            return;
+        }
+
+        stepLine.Clear();
         switch (value)
         {
             case TablesRead r:
@@ -87,6 +95,9 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
             case TrialFailed f:
                 live?.Update(f.Progress);
                 break;
+            case SlotFoldFitted f:
+                FoldFitted(f);
+                break;
             case SearchStopped s:
                 Stopped(s.Progress);
                 break;
@@ -96,6 +107,14 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
             case BlendSolved b:
                 BlendView.Render(console, b.Summary, Metric.For(b.Metric), b.Trials);
                 console.MarkupLine($"Wrote [bold]{Markup.Escape(b.PredictionFile)}[/]: {b.Predictions:N0} predictions.");
+                break;
+            case ModelsKept k:
+                console.MarkupLine($"Kept the models of {k.Kept.Members.Length} blend member(s) in [bold]{Markup.Escape(k.Folder)}[/] " +
+                                   $"({k.Kept.Bytes / 1e6:F1} MB; {k.Refitted} re-fitted in {k.Took.TotalSeconds:F1} s, test predictions within {k.Kept.LargestDifference:G2}); " +
+                                   "score new rows with 'foldwise predict STORE --rows FILE --out FILE'.");
+                break;
+            case ModelsNotKept n:
+                console.MarkupLine($"[yellow]Models not kept: {Markup.Escape(n.Reason)}[/]");
                 break;
             default:
                 break;
@@ -129,6 +148,18 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
             $"trial {trial.Id,4} {trial.Family,-9} rung {trial.Rung} {trial.Budget,4} rounds {trial.Score:F5} " +
             $"{trial.Duration?.TotalSeconds,5:F1} s {trial.Worker}/{trial.Slot} | done {p.Done}{Of(p.TrialBudget)} running {p.Running} best {p.Best:F5} | " +
             trial.Parameters.Describe(spaces.GetValueOrDefault(trial.Family)));
+    }
+
+    private void FoldFitted(SlotFoldFitted f)
+    {
+        if (live is not null)
+        {
+            live.FoldFitted(f);
+        }
+        else if (f.IsLong)
+        {
+            console.Profile.Out.Writer.WriteLine($"  trial {f.TrialId}: fold {f.Fold + 1} of {f.Folds} fitted after {f.Elapsed.TotalSeconds:F0} s ({f.Worker}/{f.Slot})");
+        }
     }
 
     private void Stopped(SearchProgress end)

@@ -10,7 +10,7 @@ namespace Foldwise.Cli.Report;
 
 /// <summary>
 /// One read of a search's store for <c>show</c>, <c>status</c> and <c>report</c>: header, definition, trials,
-/// screening and blend as they were at the moment of reading (the store may be written meanwhile).
+/// screening, blend and kept models as they were at the moment of reading (the store may be written meanwhile).
 /// </summary>
 public sealed record StoredSearch(
     string StorePath,
@@ -18,7 +18,8 @@ public sealed record StoredSearch(
     SearchDefinition Definition,
     IReadOnlyList<TrialRecord> Trials,
     ScreeningReport? Screening,
-    BlendSummary? Blend)
+    BlendSummary? Blend,
+    KeptModels? Kept = null)
 {
     public Metric Metric => Metric.For(Definition.Metric);
 
@@ -33,7 +34,7 @@ public sealed record StoredSearch(
     public static StoredSearch Load(SearchStore store)
     {
         var (header, definition) = HeaderOf(store);
-        return new StoredSearch(store.FilePath, header, definition, store.LoadTrials(), store.LoadScreening(), store.LoadBlend());
+        return new StoredSearch(store.FilePath, header, definition, store.LoadTrials(), store.LoadScreening(), store.LoadBlend(), store.LoadKept());
     }
 
     /// <summary>The search's header and its definition as stored (paths in it are absolute already).</summary>
@@ -43,6 +44,9 @@ public sealed record StoredSearch(
         var header = store.LoadHeader() ?? throw new StoreException($"{store.FilePath} holds no search yet (no header).");
         return (header, header.Definition);
     }
+
+    /// <summary>The kept model file of a blend member, as <c>models/SHA256.fwm</c>, or null when the trial's models are not kept.</summary>
+    public KeptMember? KeptMemberOf(int trialId) => Kept?.Members.FirstOrDefault(m => m.TrialId == trialId);
 
     /// <summary>The space a family's trials were drawn from, or null for a family the definition does not name.</summary>
     public ParameterSpace? SpaceOf(string family) => Definition.Families.FirstOrDefault(f => f.Family == family)?.Space;

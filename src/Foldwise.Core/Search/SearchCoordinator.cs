@@ -407,19 +407,10 @@ public sealed class SearchCoordinator
         }
     }
 
-    private LeaseGrant Granted(TrialRecord trial) => new(
-        LeaseKind.Granted, trial, SeedOf(trial), definition.Schedule.ShortRungRate.For(trial.Parameters, trial.Budget, definition.BudgetOf(trial.Family).FullBudget));
-
-    /// <summary>Promotions share their first candidate's seed, so a longer fit grows the same trees.</summary>
-    private int SeedOf(TrialRecord trial)
+    private LeaseGrant Granted(TrialRecord trial)
     {
-        var root = trial;
-        while (root.ParentId is { } parent && trials.TryGetValue(parent, out var up))
-        {
-            root = up;
-        }
-
-        return new SearchSeeds(definition.Seed).Trial(root.Id);
+        var fit = TrialFit.For(trial, trials, definition);
+        return new(LeaseKind.Granted, trial, fit.Seed, fit.Run);
     }
 
     private double SpentSecondsLocked(DateTimeOffset now) => spentBefore + (now - sessionStart).TotalSeconds;

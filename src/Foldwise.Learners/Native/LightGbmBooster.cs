@@ -3,15 +3,16 @@ namespace Foldwise.Learners.Native;
 /// <summary>
 /// A LightGBM Booster over one training Dataset, which it keeps alive for as long as it lives. Rounds are added one
 /// at a time, so a fit can be stopped between rounds, continued later, and its validation scores read per round.
+/// A booster loaded from a kept model's text (<see cref="Load"/>) has no training Dataset and only predicts.
 /// </summary>
 internal sealed class LightGbmBooster : IDisposable
 {
     private readonly BoosterHandle handle;
-    private readonly LightGbmDataset train;
+    private readonly LightGbmDataset? train;
     private readonly string parameters;
     private readonly List<LightGbmDataset> validations = [];
 
-    private LightGbmBooster(BoosterHandle handle, LightGbmDataset train, string parameters)
+    private LightGbmBooster(BoosterHandle handle, LightGbmDataset? train, string parameters)
     {
         this.handle = handle;
         this.train = train;
@@ -22,6 +23,31 @@ internal sealed class LightGbmBooster : IDisposable
     {
         NativeCall.Check(LightGbmNative.BoosterCreate(train.Handle, parameters, out var handle), $"the parameters '{parameters}'");
         return new LightGbmBooster(handle, train, parameters);
+    }
+
+    /// <summary>A booster from the text <see cref="Save"/> wrote (UTF-8), for predicting only.</summary>
+    public static unsafe LightGbmBooster Load(byte[] model)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        var text = new byte[model.Length + 1];
+        model.CopyTo(text, 0);
+        fixed (byte* start = text)
+        {
+            NativeCall.Check(LightGbmNative.BoosterLoadModelFromString(start, out _, out var handle), $"a kept model ({model.Length:N0} bytes)");
+            return new LightGbmBooster(handle, train: null, "a kept model");
+        }
+    }
+
+    /// <summary>The model's text (UTF-8, without its closing zero) of its first <paramref name="rounds"/> rounds (all when 0).</summary>
+    public unsafe byte[] Save(int rounds)
+    {
+        NativeCall.Check(LightGbmNative.BoosterSaveModelToString(handle, 0, rounds, 0, 0, out long length, null), "to measure the model's text");
+        var text = new byte[length];
+        fixed (byte* into = text)
+        {
+            NativeCall.Check(LightGbmNative.BoosterSaveModelToString(handle, 0, rounds, 0, length, out long written, into), "to write the model's text");
+            return written == length ? text[..^1] : throw new LightGbmException($"LightGBM wrote {written} bytes of model text after announcing {length}");
+        }
     }
 
     /// <summary>Rounds trained so far.</summary>
@@ -98,6 +124,6 @@ internal sealed class LightGbmBooster : IDisposable
             validation.Dispose();
         }
 
-        train.Dispose();
+        train?.Dispose();
     }
 }

@@ -132,6 +132,36 @@ public sealed class LightGbmFoldModel : IDisposable
             Shift(booster.Predict(inputs.Test, use, job.Threads, "the test table")));
     }
 
+    /// <summary>The model's text of its first <paramref name="rounds"/> rounds (all by default), for <see cref="PredictKept"/>.</summary>
+    public byte[] Save(int? rounds = null)
+    {
+        if (rounds is < 1 || rounds > Rounds)
+        {
+            throw new ArgumentOutOfRangeException(nameof(rounds), rounds, $"the model has {Rounds} rounds");
+        }
+
+        return booster.Save(rounds ?? 0);
+    }
+
+    /// <summary>
+    /// Predictions of the job's test rows, on the fitting scale, from a model <see cref="Save"/> wrote for the same fold:
+    /// the job's inputs and its training mean are derived exactly as in training.
+    /// </summary>
+    public static double[] PredictKept(FoldJob job, byte[] model)
+    {
+        ArgumentNullException.ThrowIfNull(job);
+        using var gate = ThreadCountGate.Enter(job.Threads);
+        using var booster = LightGbmBooster.Load(model);
+        var scores = booster.Predict(CsrRows.All(job.Features.Test), 0, job.Threads, "the new rows");
+        double offset = FoldFitter.TrainingMean(job);
+        for (int i = 0; i < scores.Length; i++)
+        {
+            scores[i] += offset;
+        }
+
+        return scores;
+    }
+
     public void Dispose() => booster.Dispose();
 
     private double[] Shift(double[] raw)

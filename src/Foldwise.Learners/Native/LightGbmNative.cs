@@ -59,6 +59,14 @@ internal static unsafe partial class LightGbmNative
         long rowStartCount, long valueCount, long columnCount, int predictType, int startIteration, int iterationCount,
         string parameters, out long length, double* scores);
 
+    /// <summary>Writes the model's text into <paramref name="text"/> when <paramref name="bufferLength"/> holds it; <paramref name="length"/> counts its closing zero byte.</summary>
+    [LibraryImport(Library, EntryPoint = "LGBM_BoosterSaveModelToString")]
+    public static partial int BoosterSaveModelToString(
+        BoosterHandle booster, int startIteration, int iterationCount, int featureImportanceType, long bufferLength, out long length, byte* text);
+
+    [LibraryImport(Library, EntryPoint = "LGBM_BoosterLoadModelFromString")]
+    public static partial int BoosterLoadModelFromString(byte* text, out int iterations, out BoosterHandle booster);
+
     [LibraryImport(Library, EntryPoint = "LGBM_BoosterFree")]
     public static partial int BoosterFree(nint booster);
 }
