@@ -92,8 +92,15 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
             case TrialScored t:
                 Scored(t);
                 break;
+            case AttemptFailed a:
+                console.MarkupLine($"[yellow]Attempt {a.Attempt} of trial {a.TrialId} failed on {Markup.Escape(a.Machine)}: {Markup.Escape(a.Reason)}; queued again[/]");
+                break;
             case TrialFailed f:
+                console.MarkupLine($"[red]Trial {f.Trial.Id} failed for good: {Markup.Escape(f.Trial.FailureReason ?? "no reason recorded")}[/]");
                 live?.Update(f.Progress);
+                break;
+            case WorkerQuarantined q:
+                console.MarkupLine($"[red]Worker {Markup.Escape(q.Worker)} quarantined: {Markup.Escape(q.Reason)}; it gets no more trials of this search[/]");
                 break;
             case SlotFoldFitted f:
                 FoldFitted(f);
