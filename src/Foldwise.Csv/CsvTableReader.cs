@@ -17,7 +17,8 @@ namespace Foldwise.Csv;
 public static class CsvTableReader
 {
     /// <summary>Reads a training table; every target must be one the metric can score.</summary>
-    public static FeatureTable ReadTraining(string path, string idColumn, string targetColumn, Metric metric, TableRules? rules = null)
+    /// <param name="bytesRead">Told every few thousand rows the bytes read so far and the file's length.</param>
+    public static FeatureTable ReadTraining(string path, string idColumn, string targetColumn, Metric metric, TableRules? rules = null, Action<long, long>? bytesRead = null)
     {
         ArgumentException.ThrowIfNullOrEmpty(targetColumn);
         ArgumentNullException.ThrowIfNull(metric);
@@ -26,7 +27,7 @@ public static class CsvTableReader
             throw new ArgumentException($"the id and target columns must differ, not both '{idColumn}'", nameof(targetColumn));
         }
 
-        return TableLoader.Load(path, idColumn, targetColumn, TargetUse.Required, metric, rules ?? TableRules.Default, training: null);
+        return TableLoader.Load(path, idColumn, targetColumn, TargetUse.Required, metric, rules ?? TableRules.Default, training: null, bytesRead);
     }
 
     /// <summary>Reads a test table on its own; a target column, when named and present, is skipped, not read.</summary>
@@ -37,7 +38,7 @@ public static class CsvTableReader
     /// Reads a test table for a training table: the training table's category columns are read as categories here, and a
     /// column that is numeric in one table and text in the other is an <see cref="InputException"/> naming both files.
     /// </summary>
-    public static FeatureTable ReadTest(string path, string idColumn, string? targetColumn, TableRules rules, FeatureTable train)
+    public static FeatureTable ReadTest(string path, string idColumn, string? targetColumn, TableRules rules, FeatureTable train, Action<long, long>? bytesRead = null)
     {
         ArgumentNullException.ThrowIfNull(rules);
         ArgumentNullException.ThrowIfNull(train);
@@ -50,7 +51,7 @@ public static class CsvTableReader
             train.CategoryNames.ToHashSet(StringComparer.Ordinal),
             textCategories.ToHashSet(StringComparer.Ordinal),
             train.FeatureNames.ToHashSet(StringComparer.Ordinal));
-        return TableLoader.Load(path, idColumn, targetColumn, TargetUse.IgnoredIfPresent, metric: null, rules, training);
+        return TableLoader.Load(path, idColumn, targetColumn, TargetUse.IgnoredIfPresent, metric: null, rules, training, bytesRead);
     }
 
     private static bool IsText(string level) =>

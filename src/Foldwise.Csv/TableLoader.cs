@@ -15,7 +15,9 @@ internal static class TableLoader
     // A 7,000-column row is ~15–60 K characters; the buffer grows up to this before a row counts as broken.
     private const int MaxRowChars = 1 << 25;
 
-    public static FeatureTable Load(string path, string idColumn, string? targetColumn, TargetUse use, Metric? metric, TableRules rules, TrainingColumns? training)
+    /// <param name="bytesRead">Told every few thousand rows how far the read has come: bytes of the file read, and its length.</param>
+    public static FeatureTable Load(
+        string path, string idColumn, string? targetColumn, TargetUse use, Metric? metric, TableRules rules, TrainingColumns? training, Action<long, long>? bytesRead = null)
     {
         ArgumentException.ThrowIfNullOrEmpty(path);
         ArgumentException.ThrowIfNullOrEmpty(idColumn);
@@ -26,7 +28,8 @@ internal static class TableLoader
 
         try
         {
-            using var text = new StreamReader(path, Encoding.UTF8, detectEncodingFromByteOrderMarks: true, new FileStreamOptions { BufferSize = 1 << 16 });
+            using var file = new FileStream(path, new FileStreamOptions { BufferSize = 1 << 16 });
+            using var text = new StreamReader(file, Encoding.UTF8, detectEncodingFromByteOrderMarks: true);
             using var csv = CsvDataReader.Create(text, new CsvDataReaderOptions { Delimiter = ',', BufferSize = 1 << 16, MaxBufferSize = MaxRowChars });
             var names = Enumerable.Range(0, csv.FieldCount).Select(csv.GetName).ToArray();
             if (names.Length == 1 && names[0].Length == 0)
@@ -35,7 +38,8 @@ internal static class TableLoader
             }
 
             var layout = HeaderLayout.From(path, names, idColumn, targetColumn, use == TargetUse.Required, rules);
-            return ReadRows(path, csv, layout, use == TargetUse.Required ? metric : null, targetColumn, rules, training);
+            Action? tick = bytesRead is null ? null : () => bytesRead(file.Position, file.Length);
+            return ReadRows(path, csv, layout, use == TargetUse.Required ? metric : null, targetColumn, rules, training, tick);
         }
         catch (CsvMissingHeadersException)
         {
@@ -52,7 +56,7 @@ internal static class TableLoader
     }
 
     private static FeatureTable ReadRows(
-        string path, CsvDataReader csv, HeaderLayout layout, Metric? metric, string? targetColumn, TableRules rules, TrainingColumns? training)
+        string path, CsvDataReader csv, HeaderLayout layout, Metric? metric, string? targetColumn, TableRules rules, TrainingColumns? training, Action? tick)
     {
         var ids = ImmutableArray.CreateBuilder<string>();
         var target = ImmutableArray.CreateBuilder<double>();
@@ -72,6 +76,11 @@ internal static class TableLoader
         {
             // Sylvan numbers data records from 1; the header is line 1 of the file.
             long line = csv.RowNumber + 1;
+            if ((line & 0xFFF) == 0)
+            {
+                tick?.Invoke();
+            }
+
             if (csv.RowFieldCount != layout.FieldCount)
             {
                 if (csv.RowFieldCount == 1 && csv.GetFieldSpan(0).IsWhiteSpace())

@@ -20,8 +20,10 @@ public static class SearchPreparation
         var metric = Metric.For(definition.Metric);
         var clock = Stopwatch.StartNew();
         var rules = definition.Data.Rules;
-        var train = CsvTableReader.ReadTraining(definition.Data.Train, definition.Data.IdColumn, definition.Data.TargetColumn, metric, rules);
-        var rawTest = CsvTableReader.ReadTest(definition.Data.Test, definition.Data.IdColumn, definition.Data.TargetColumn, rules, train);
+        var train = CsvTableReader.ReadTraining(
+            definition.Data.Train, definition.Data.IdColumn, definition.Data.TargetColumn, metric, rules, Paced(PreparationStep.Reading, definition.Data.Train, events));
+        var rawTest = CsvTableReader.ReadTest(
+            definition.Data.Test, definition.Data.IdColumn, definition.Data.TargetColumn, rules, train, Paced(PreparationStep.Reading, definition.Data.Test, events));
         var (test, extra) = TableAlignment.AlignTest(train, rawTest);
         if (train.RowCount < 2 * definition.Folds)
         {
@@ -31,7 +33,7 @@ public static class SearchPreparation
         events.Report(new TablesRead(
             definition.Data.Train, train.RowCount, train.FeatureCount, train.Density, definition.Data.Test, test.RowCount, clock.Elapsed, [.. extra]));
 
-        var report = TestLevelCount.Add(ColumnScreen.Screen(train, definition.Screening), train, test);
+        var report = TestLevelCount.Add(ColumnScreen.Screen(train, definition.Screening, Paced(PreparationStep.Screening, Path.GetFileName(definition.Data.Train), events)), train, test);
         var screenedTrain = ColumnScreen.Apply(report, train);
         var screenedTest = ColumnScreen.Apply(report, test);
         events.Report(new ColumnsScreened(report, definition.Screening.MinNonZero));
@@ -50,4 +52,7 @@ public static class SearchPreparation
 
         return new PreparedSearch(fitted, screenedTrain, screenedTest, report, folds);
     }
+
+    private static Action<long, long> Paced(PreparationStep step, string subject, IProgress<SearchEvent> events) =>
+        ProgressPacer.For(step, Path.GetFileName(subject), events).Tick;
 }

@@ -35,6 +35,9 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
     /// <summary>Attempts made before this process started (a fresh process continues the count).</summary>
     public int EarlierAttempts { get; init; }
 
+    /// <summary>How long joining may take before this worker checks its certificate against the coordinator's. Default 3 s.</summary>
+    public TimeSpan ProbeAfter { get; init; } = TimeSpan.FromSeconds(3);
+
     /// <summary>Runs until stopped; returns null then, or the one line saying why this worker cannot work for the cluster.</summary>
     public async Task<string?> RunAsync(CancellationToken stopping)
     {
@@ -46,7 +49,13 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
             using var host = Build();
             try
             {
-                await host.StartAsync(stopping);
+                if (await StartOrMismatchAsync(host, stopping) is { } mismatch)
+                {
+                    events.Report(new WorkerRefused(role.Join?.ToString() ?? "", mismatch));
+                    await StopQuietly(host);
+                    return mismatch;
+                }
+
                 events.Report(new WorkerJoined(role.Join?.ToString() ?? "", options.Name, options.Slots, options.Threads));
                 var end = await WatchAsync(host, stopping);
                 if (end.Refusal is { } refusal)
@@ -86,6 +95,28 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
         }
 
         events.Report(new WorkerStopped());
+        return null;
+    }
+
+    /// <summary>
+    /// Starts the silo; when joining takes longer than <see cref="ProbeAfter"/>, asks the coordinator's silo port whether
+    /// the cluster certificates match (mutual TLS refuses a mismatch by closing the connection, which Orleans retries
+    /// for a minute in silence). Returns the mismatch, or null once the silo has started.
+    /// </summary>
+    private async Task<string?> StartOrMismatchAsync(IHost host, CancellationToken stopping)
+    {
+        var starting = host.StartAsync(stopping);
+        if (role.Join is { } join &&
+            await Task.WhenAny(starting, Task.Delay(ProbeAfter, stopping)) != starting &&
+            !stopping.IsCancellationRequested &&
+            await ClusterProbe.MismatchAsync(join, role.Certificate, TimeSpan.FromSeconds(5), stopping) is { } mismatch)
+        {
+            // The start is abandoned with the host; its failure is not news.
+            _ = starting.ContinueWith(t => t.Exception, CancellationToken.None, TaskContinuationOptions.OnlyOnFaulted, TaskScheduler.Default);
+            return mismatch;
+        }
+
+        await starting;
         return null;
     }
 

@@ -10,13 +10,31 @@ public sealed class SearchEventsTests(QuickDemoRun run)
     public void Reports_preparation_then_each_trial_then_the_stop_then_the_blend_in_that_order()
     {
         // Given a finished run of the quick demo
-        var seen = run.Events.Seen.Where(e => e is not (SlotTrialScored or TrialStarted or CandidatePromoted)).Select(e => e.GetType()).ToList();
+        var seen = run.Events.Seen.Where(e => e is not (SlotTrialScored or TrialStarted or CandidatePromoted or SlotFoldFitted or StepProgress)).Select(e => e.GetType()).ToList();
 
         // Then the tables are read and screened before the search starts, every trial is scored before the stop,
         // the blend comes next, and the blend members' models are kept last
         Assert.Equal(
             [typeof(TablesRead), typeof(ColumnsScreened), typeof(SearchStarted), .. Enumerable.Repeat(typeof(TrialScored), 10), typeof(SearchStopped), typeof(BlendSolved), typeof(ModelsKept)],
             seen);
+    }
+
+    [Fact]
+    public void Reports_each_fold_of_each_trial_in_order_before_the_trial_is_scored()
+    {
+        // Given a finished run of the quick demo (3 folds)
+        var seen = run.Events.Seen;
+
+        // Then every trial reports folds 0, 1, 2 of 3, and its last fold comes before its score
+        foreach (int trial in Enumerable.Range(1, 10))
+        {
+            var folds = seen.OfType<SlotFoldFitted>().Where(f => f.TrialId == trial).ToList();
+            Assert.Equal([0, 1, 2], folds.Select(f => f.Fold).ToArray());
+            Assert.All(folds, f => Assert.Equal(3, f.Folds));
+            int lastFold = seen.ToList().IndexOf(folds[^1]);
+            int scored = seen.ToList().FindIndex(e => e is TrialScored t && t.Trial.Id == trial);
+            Assert.True(lastFold < scored, $"trial {trial}: last fold at {lastFold}, scored at {scored}");
+        }
     }
 
     [Fact]

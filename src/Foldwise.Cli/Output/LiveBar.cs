@@ -1,4 +1,5 @@
 using Foldwise.Core.Definition;
+using Foldwise.Core.Events;
 using Foldwise.Core.Search;
 using Spectre.Console;
 
@@ -14,6 +15,8 @@ internal sealed class LiveBar
     private readonly TaskCompletionSource<ProgressTask> task = new(TaskCreationOptions.RunContinuationsAsynchronously);
     private readonly TaskCompletionSource<SearchProgress> end = new(TaskCreationOptions.RunContinuationsAsynchronously);
     private readonly Task running;
+    private readonly Dictionary<string, SlotFoldFitted> folds = new(StringComparer.Ordinal);
+    private SearchProgress? latest;
 
     public LiveBar(IAnsiConsole console, SearchDefinition definition)
     {
@@ -26,18 +29,40 @@ internal sealed class LiveBar
                 var bar = context.AddTask("starting", maxValue: 1);
                 task.SetResult(bar);
                 var last = await end.Task;
-                Update(bar, last, definition);
+                Update(bar, last, definition, "");
                 bar.Value = bar.MaxValue;
             });
     }
 
     public void Update(SearchProgress progress)
     {
+        latest = progress;
         if (task.Task.IsCompletedSuccessfully)
         {
-            Update(task.Task.Result, progress, definition);
+            Update(task.Task.Result, progress, definition, Folds());
         }
     }
+
+    /// <summary>Shows, beside the counts, how far each slot's running trial has come (its last fold fitted).</summary>
+    public void FoldFitted(SlotFoldFitted fold)
+    {
+        string slot = fold.Worker + "/" + fold.Slot;
+        if (fold.Fold + 1 >= fold.Folds)
+        {
+            folds.Remove(slot);
+        }
+        else
+        {
+            folds[slot] = fold;
+        }
+
+        if (latest is { } progress)
+        {
+            Update(progress);
+        }
+    }
+
+    private string Folds() => string.Concat(folds.Values.OrderBy(f => f.TrialId).Select(f => $" · trial {f.TrialId} {f.Fold + 1}/{f.Folds} folds"));
 
     /// <summary>Closes the bar and waits until it is drawn for the last time.</summary>
     public void Finish(SearchProgress progress)
@@ -46,7 +71,7 @@ internal sealed class LiveBar
         running.GetAwaiter().GetResult();
     }
 
-    private static void Update(ProgressTask bar, SearchProgress p, SearchDefinition definition)
+    private static void Update(ProgressTask bar, SearchProgress p, SearchDefinition definition, string folds)
     {
         if (p.TrialBudget is { } budget)
         {
@@ -59,6 +84,6 @@ internal sealed class LiveBar
             bar.Value = Math.Min(bar.MaxValue, p.SpentSeconds);
         }
 
-        bar.Description = Markup.Escape($"done {p.Done}{ProgressView.Of(p.TrialBudget)} · running {p.Running} · failed {p.Failed} · best {ProgressView.FormatBest(p)}");
+        bar.Description = Markup.Escape($"done {p.Done}{ProgressView.Of(p.TrialBudget)} · running {p.Running} · failed {p.Failed} · best {ProgressView.FormatBest(p)}{folds}");
     }
 }

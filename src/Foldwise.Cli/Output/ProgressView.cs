@@ -17,6 +17,7 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
     private readonly object gate = new();
     private LiveBar? live;
     private IReadOnlyDictionary<string, ParameterSpace> spaces = new Dictionary<string, ParameterSpace>();
+    private readonly StepLine stepLine = new(console);
 
     public void Report(SearchEvent value)
     {
@@ -28,6 +29,13 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
 
     private void Render(SearchEvent value)
     {
+        if (value is StepProgress step)
+        {
+            stepLine.Show(step);
+            return;
+        }
+
+        stepLine.Clear();
         switch (value)
         {
             case TablesRead r:
@@ -84,8 +92,18 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
             case TrialScored t:
                 Scored(t);
                 break;
+            case AttemptFailed a:
+                console.MarkupLine($"[yellow]Attempt {a.Attempt} of trial {a.TrialId} failed on {Markup.Escape(a.Machine)}: {Markup.Escape(a.Reason)}; queued again[/]");
+                break;
             case TrialFailed f:
+                console.MarkupLine($"[red]Trial {f.Trial.Id} failed for good: {Markup.Escape(f.Trial.FailureReason ?? "no reason recorded")}[/]");
                 live?.Update(f.Progress);
+                break;
+            case WorkerQuarantined q:
+                console.MarkupLine($"[red]Worker {Markup.Escape(q.Worker)} quarantined: {Markup.Escape(q.Reason)}; it gets no more trials of this search[/]");
+                break;
+            case SlotFoldFitted f:
+                FoldFitted(f);
                 break;
             case SearchStopped s:
                 Stopped(s.Progress);
@@ -137,6 +155,18 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
             $"trial {trial.Id,4} {trial.Family,-9} rung {trial.Rung} {trial.Budget,4} rounds {trial.Score:F5} " +
             $"{trial.Duration?.TotalSeconds,5:F1} s {trial.Worker}/{trial.Slot} | done {p.Done}{Of(p.TrialBudget)} running {p.Running} best {p.Best:F5} | " +
             trial.Parameters.Describe(spaces.GetValueOrDefault(trial.Family)));
+    }
+
+    private void FoldFitted(SlotFoldFitted f)
+    {
+        if (live is not null)
+        {
+            live.FoldFitted(f);
+        }
+        else if (f.IsLong)
+        {
+            console.Profile.Out.Writer.WriteLine($"  trial {f.TrialId}: fold {f.Fold + 1} of {f.Folds} fitted after {f.Elapsed.TotalSeconds:F0} s ({f.Worker}/{f.Slot})");
+        }
     }
 
     private void Stopped(SearchProgress end)

@@ -8,10 +8,17 @@ namespace Foldwise.Cli.Output;
 /// </summary>
 public sealed class WorkerLines(TextWriter output) : IProgress<SearchEvent>
 {
+    /// <summary>A fetch's progress is shown at most this often: a worker's screen is a plain log.</summary>
+    public static readonly TimeSpan StepInterval = TimeSpan.FromSeconds(5);
+
+    private TimeSpan? lastStep;
+
     public void Report(SearchEvent value)
     {
         string? line = value switch
         {
+            StepProgress p => PacedStep(p),
+            SlotFoldFitted f when f.IsLong => $"Slot {f.Slot}: trial {f.TrialId} fold {f.Fold + 1} of {f.Folds} fitted after {f.Elapsed.TotalSeconds:F0} s",
             WorkerStarting s => $"Worker {s.Name} joining {s.Join} from {s.Advertise}" + (s.MutualTls ? " (mutual TLS)" : " (no certificate)") + "; Ctrl-C to leave",
             WorkerJoined j => $"Joined the cluster at {j.Join} as {j.Name} with {j.Slots} slot(s), {j.Threads} thread(s) each",
             WorkerJoinFailed f => $"Cannot join {f.Join} (attempt {f.Attempt}): {f.Reason}; retrying in {f.RetryIn.TotalSeconds:F0} s",
@@ -40,5 +47,16 @@ public sealed class WorkerLines(TextWriter output) : IProgress<SearchEvent>
                 output.WriteLine(line);
             }
         }
+    }
+
+    private string? PacedStep(StepProgress step)
+    {
+        if (lastStep is { } last && step.Elapsed > last && step.Elapsed - last < StepInterval)
+        {
+            return null;
+        }
+
+        lastStep = step.Elapsed;
+        return StepLine.Describe(step);
     }
 }

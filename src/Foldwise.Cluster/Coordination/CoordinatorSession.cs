@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using System.Diagnostics;
 using Foldwise.Cluster.Contracts;
 using Foldwise.Cluster.Telemetry;
@@ -110,18 +111,42 @@ public sealed class CoordinatorSession
 
     public bool Release(int trialId, int attempt, string reason, bool interrupted)
     {
+        var holder = Coordinator.Trial(trialId);
+        var quarantinedBefore = Coordinator.Progress().Quarantined;
         if (StoreFault is not null || !Writing(() => Coordinator.Release(trialId, attempt, reason, interrupted), out bool released))
         {
             return false;
         }
 
-        if (released && Coordinator.Trial(trialId) is { State: TrialState.Failed } failed)
+        if (released && !interrupted)
         {
-            events.Report(new TrialFailed(SearchId, failed, Coordinator.Progress()));
+            ReportFailure(trialId, attempt, $"{holder?.Worker}/{holder?.Slot}", reason, quarantinedBefore);
         }
 
         CheckFinished();
         return released;
+    }
+
+    /// <summary>Says what a failed attempt did: the trial queued again or failed for good, and a worker quarantined by it.</summary>
+    private void ReportFailure(int trialId, int attempt, string machine, string reason, ImmutableSortedDictionary<string, string>? quarantinedBefore)
+    {
+        var progress = Coordinator.Progress();
+        if (Coordinator.Trial(trialId) is { State: TrialState.Failed } failed)
+        {
+            events.Report(new TrialFailed(SearchId, failed, progress));
+        }
+        else
+        {
+            events.Report(new AttemptFailed(SearchId, trialId, attempt, machine, reason));
+        }
+
+        foreach (var (worker, why) in progress.Quarantined ?? ImmutableSortedDictionary<string, string>.Empty)
+        {
+            if (quarantinedBefore?.ContainsKey(worker) != true)
+            {
+                events.Report(new WorkerQuarantined(SearchId, worker, why));
+            }
+        }
     }
 
     public ProgressReply Progress()

@@ -60,6 +60,7 @@ public static class FoldwiseSiloExtensions
         silo.Configure<SiloMessagingOptions>(o => o.ResponseTimeout = TimeSpan.FromSeconds(60));
         if (role.Certificate is { } certificate)
         {
+            silo.LogTlsRefusals();
             silo.UseFoldwiseTls(certificate);
         }
 
@@ -78,7 +79,7 @@ public static class FoldwiseSiloExtensions
         {
             o.RemoteCertificateMode = RemoteCertificateMode.RequireCertificate;
             o.ClientCertificateMode = RemoteCertificateMode.RequireCertificate;
-            o.RemoteCertificateValidation = (presented, _, _) => ClusterCertificate.IsSame(certificate, presented);
+            o.RemoteCertificateValidation = (presented, _, _) => TlsRefusals.Check(certificate, presented);
             o.OnAuthenticateAsClient = (_, ssl) => ssl.TargetHost = "foldwise";
             o.HandshakeTimeout = TimeSpan.FromSeconds(5);
         });

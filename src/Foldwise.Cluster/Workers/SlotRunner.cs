@@ -124,7 +124,11 @@ public sealed partial class SlotRunner(
             var parameters = ParameterSet.Of(lease.Parameters);
             using var folds = new FoldSpans(span?.Context ?? default, lease.TrialId, trialData.Folds.FoldCount);
             var outcome = await Task.Factory.StartNew(
-                () => executor.Run(trialData, parameters, lease.Budget, lease.Seed, options.Threads, abandon.Token, folds.FoldDone),
+                () => executor.Run(trialData, parameters, lease.Budget, lease.Seed, options.Threads, abandon.Token, fold =>
+                {
+                    folds.FoldDone(fold);
+                    events.Report(new SlotFoldFitted(options.Name, slot, lease.TrialId, fold, trialData.Folds.FoldCount, clock.Elapsed));
+                }),
                 abandon.Token,
                 TaskCreationOptions.LongRunning,
                 TaskScheduler.Default);

@@ -2,6 +2,7 @@ using System.Collections.Concurrent;
 using System.Security.Cryptography;
 using Foldwise.Cluster.Contracts;
 using Foldwise.Core.Data;
+using Foldwise.Core.Events;
 
 namespace Foldwise.Cluster.Workers;
 
@@ -9,9 +10,10 @@ namespace Foldwise.Cluster.Workers;
 /// Tables by content hash: in memory, then on local disk, then fetched from the coordinator chunk by chunk
 /// straight into the disk cache (<see cref="TableDownload"/>). Every fetched or cached file is checked against
 /// its hash before it is decoded, and decoded from the file, never held as one array of bytes. The folder is its
-/// owner's only and kept under <see cref="WorkerOptions.CacheLimitBytes"/> (see <see cref="CacheFolder"/>).
+/// owner's only and kept under <see cref="WorkerOptions.CacheLimitBytes"/> (see <see cref="CacheFolder"/>). A fetch
+/// that lasts more than a moment reports its progress to <paramref name="events"/>.
 /// </summary>
-public sealed class TableCache(IGrainFactory grains, WorkerOptions options)
+public sealed class TableCache(IGrainFactory grains, WorkerOptions options, IProgress<SearchEvent>? events = null)
 {
     private readonly ConcurrentDictionary<string, Lazy<Task<FeatureTable>>> tables = new();
 
@@ -55,7 +57,8 @@ public sealed class TableCache(IGrainFactory grains, WorkerOptions options)
         {
             var dataset = grains.GetGrain<IDatasetGrain>(hash);
             var listing = await dataset.ListingAsync();
-            await TableDownload.ToFileAsync(hash, listing, dataset.ChunkAsync, partial, cancellation);
+            var pacer = ProgressPacer.For(PreparationStep.Fetching, "table " + hash[..Math.Min(12, hash.Length)], events ?? NoEvents.Instance);
+            await TableDownload.ToFileAsync(hash, listing, dataset.ChunkAsync, partial, cancellation, pacer.Tick);
             File.Move(partial, path, overwrite: true);
         }
         finally

@@ -11,12 +11,14 @@ namespace Foldwise.Cluster.Workers;
 public static class TableDownload
 {
     /// <summary>Writes the table to <paramref name="path"/>; a damaged chunk or a whole that does not match throws <see cref="IOException"/>.</summary>
+    /// <param name="bytesWritten">Told after each chunk the bytes written so far and the table's length.</param>
     public static async Task ToFileAsync(
         string hash,
         TableListing listing,
         Func<int, Task<byte[]>> chunk,
         string path,
-        CancellationToken cancellation)
+        CancellationToken cancellation,
+        Action<long, long>? bytesWritten = null)
     {
         ArgumentNullException.ThrowIfNull(listing);
         ArgumentNullException.ThrowIfNull(chunk);
@@ -36,6 +38,7 @@ public static class TableDownload
             whole.AppendData(bytes);
             await file.WriteAsync(bytes, cancellation);
             written += bytes.Length;
+            bytesWritten?.Invoke(written, listing.Length);
         }
 
         if (written != listing.Length || Convert.ToHexStringLower(whole.GetHashAndReset()) != hash)

@@ -18,11 +18,13 @@ public static class ColumnScreen
     /// <summary>Below this many present cells a column is too short to call nearly unique.</summary>
     public const int NearlyUniqueMinRows = 20;
 
-    public static ScreeningReport Screen(FeatureTable train, ScreeningOptions options) =>
-        Screen(train, options, ContentHash);
+    /// <param name="columnsDone">Told after every column how many of the numeric columns are screened, and of how many.</param>
+    public static ScreeningReport Screen(FeatureTable train, ScreeningOptions options, Action<long, long>? columnsDone = null) =>
+        Screen(train, options, ContentHash, columnsDone: columnsDone);
 
     /// <summary>The same, with the content hash as a seam, so tests can force collisions.</summary>
-    internal static ScreeningReport Screen(FeatureTable train, ScreeningOptions options, Func<SparseColumn, long> hash, EncodingOptions? encoding = null)
+    internal static ScreeningReport Screen(
+        FeatureTable train, ScreeningOptions options, Func<SparseColumn, long> hash, EncodingOptions? encoding = null, Action<long, long>? columnsDone = null)
     {
         ArgumentNullException.ThrowIfNull(train);
         ArgumentNullException.ThrowIfNull(options);
@@ -33,6 +35,7 @@ public static class ColumnScreen
         var gaps = ImmutableArray.CreateBuilder<ColumnGap>();
         for (int c = 0; c < train.FeatureCount; c++)
         {
+            columnsDone?.Invoke(c, train.FeatureCount);
             var column = train.Columns[c];
             string name = train.FeatureNames[c];
             int missing = column.MissingCount;

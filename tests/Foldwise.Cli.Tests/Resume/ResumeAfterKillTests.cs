@@ -66,7 +66,7 @@ public sealed class ResumeAfterKillTests : IDisposable
         await process.WaitForLineAsync(_ => process.Lines.Count(IsTrialLine) >= count, Patience);
 
     /// <summary>"trial    3 lightgbm  rung 0    5 rounds 0.57515 …" → (3, 0.57515).</summary>
-    private static (int Id, double Score) ParseTrialLine(string line)
+    internal static (int Id, double Score) ParseTrialLine(string line)
     {
         string[] words = line.Split(' ', StringSplitOptions.RemoveEmptyEntries);
         int rounds = Array.IndexOf(words, "rounds");

@@ -35,6 +35,17 @@ public sealed class TableDownloadTests : IDisposable
     }
 
     [Fact]
+    public async Task Tells_the_bytes_written_after_each_chunk()
+    {
+        var (hash, listing, chunks) = Served(chunkCount: 3, chunkSize: 1000);
+        var told = new List<(long, long)>();
+
+        await TableDownload.ToFileAsync(hash, listing, i => Task.FromResult(chunks[i]), _path, CancellationToken.None, (done, total) => told.Add((done, total)));
+
+        Assert.Equal([(1000L, 3000L), (2000L, 3000L), (3000L, 3000L)], told);
+    }
+
+    [Fact]
     public async Task Refuses_a_corrupted_chunk_and_asks_for_no_chunk_after_it()
     {
         // Given a coordinator whose second chunk arrives with one flipped bit

@@ -1,0 +1,50 @@
+using Foldwise.Cli.Output;
+using Foldwise.Core.Events;
+using Spectre.Console.Testing;
+
+namespace Foldwise.Cli.Tests.Output;
+
+public sealed class StepLineTests
+{
+    [Fact]
+    public void Describes_reading_in_megabytes_and_screening_in_columns()
+    {
+        var reading = new StepProgress(PreparationStep.Reading, "train.csv", 88_000_000, 195_000_000, TimeSpan.FromSeconds(3.2));
+        var screening = new StepProgress(PreparationStep.Screening, "train.csv", 1_200, 7_000, TimeSpan.FromSeconds(2));
+
+        Assert.Equal("Reading train.csv: 45 % (88 of 195 MB), 3 s", StepLine.Describe(reading));
+        Assert.Equal("Screening train.csv: 1,200 of 7,000 columns, 2 s", StepLine.Describe(screening));
+    }
+
+    [Fact]
+    public void Writes_a_plain_line_at_most_every_ten_seconds_of_one_step()
+    {
+        // Given a console that is not a terminal
+        var console = new TestConsole();
+        var line = new StepLine(console);
+
+        // When a step reports each second from 2 to 25 s
+        for (int s = 2; s <= 25; s++)
+        {
+            line.Show(new StepProgress(PreparationStep.Reading, "big.csv", s, 25, TimeSpan.FromSeconds(s)));
+        }
+
+        // Then it wrote the reports of 2, 12 and 22 s
+        Assert.Equal(["2 s", "12 s", "22 s"], console.Lines.Where(l => l.Length > 0).Select(l => l[(l.LastIndexOf(", ", StringComparison.Ordinal) + 2)..]).ToArray());
+    }
+
+    [Fact]
+    public void A_worker_shows_fold_lines_only_for_long_trials()
+    {
+        // Given a worker's screen
+        var output = new StringWriter();
+        var lines = new WorkerLines(output);
+
+        // When a quick trial's fold and a long trial's fold are fitted
+        lines.Report(new SlotFoldFitted("w1", "0", 4, 1, 5, TimeSpan.FromSeconds(3)));
+        lines.Report(new SlotFoldFitted("w1", "1", 5, 2, 5, TimeSpan.FromSeconds(41)));
+
+        // Then only the long one has a line
+        Assert.Equal("Slot 1: trial 5 fold 3 of 5 fitted after 41 s", output.ToString().Trim());
+    }
+}
