@@ -38,6 +38,8 @@ internal static class DefinitionDocuments
         ["families"] = new BsonArray(d.Families.Select(f => (BsonValue)new BsonDocument
         {
             ["family"] = f.Family,
+            ["firstRung"] = f.Budget is { } b ? b.FirstRung : BsonValue.Null,
+            ["fullBudget"] = f.Budget is { } c ? c.FullBudget : BsonValue.Null,
             ["ranges"] = new BsonArray(f.Space.Ranges.Select(r => (BsonValue)new BsonDocument
             {
                 ["name"] = r.Name,
@@ -100,7 +102,11 @@ internal static class DefinitionDocuments
             var r = v.IsDocument ? v.AsDocument : throw Damaged(Owner, "a parameter range is not a document");
             return new ParameterRange(String(r, "name", Owner), StoreWords.Ranges.Value(String(r, "kind", Owner)), Double(r, "low", Owner), Double(r, "high", Owner), Strings(r, "choices", Owner));
         });
-        return new FamilySearch(String(f, "family", Owner), new ParameterSpace([.. ranges]));
+        // Stores written before families had rungs of their own have neither field: the family takes the schedule's.
+        var first = OptionalInt(f, "firstRung");
+        var full = OptionalInt(f, "fullBudget");
+        var budget = first is { } fr && full is { } fb ? new FamilyBudget(fr, fb) : null;
+        return new FamilySearch(String(f, "family", Owner), new ParameterSpace([.. ranges]), budget);
     }
 
     // Stores written before tables could hold gaps and text have none of these fields: they read as the defaults.

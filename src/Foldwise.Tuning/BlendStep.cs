@@ -29,13 +29,15 @@ public static class BlendStep
         using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.BlendSpan, ActivityKind.Internal, search);
         var metric = Metric.For(definition.Metric);
         var trials = store.LoadTrials();
-        var pool = BlendPool.Select(trials, options.Pool, definition.Schedule.FullBudget);
+        var pool = BlendPool.Select(trials, options.Pool, f => definition.BudgetOf(f).FullBudget);
         if (pool.Count == 0)
         {
-            // No candidate reached the full budget (a very small trial budget): blend what went furthest.
-            int furthest = trials.Where(t => t.State == TrialState.Done).Max(t => t.Budget);
-            pool = BlendPool.Select(trials, options.Pool, furthest);
-            events.Report(new BlendFellBack(definition.Schedule.FullBudget, furthest));
+            // No candidate reached its family's full budget (a very small trial budget): blend what went furthest in each family.
+            var done = trials.Where(t => t.State == TrialState.Done).ToList();
+            var furthest = done.GroupBy(t => t.Family, StringComparer.Ordinal).ToDictionary(g => g.Key, g => g.Max(t => t.Budget), StringComparer.Ordinal);
+            pool = BlendPool.Select(trials, options.Pool, f => furthest.GetValueOrDefault(f, -1));
+            var first = definition.Families[0].Family;
+            events.Report(new BlendFellBack(definition.BudgetOf(first).FullBudget, furthest.GetValueOrDefault(first, done.Max(t => t.Budget))));
         }
 
         var vectors = pool.Select(t => store.LoadVectors(t.Id) ?? throw new InvalidOperationException($"trial {t.Id} is done but its predictions are missing from the store")).ToList();

@@ -40,6 +40,23 @@ public sealed class PlanCommandTests
     }
 
     [Fact]
+    public void Plans_a_family_in_its_own_unit_and_lists_every_familys_own_rungs()
+    {
+        var plan = CliHarness.Run("plan", "--family", "forest");
+
+        Assert.Equal(0, plan.ExitCode);
+        Assert.Contains("forest, budgets in trees.", plan.Output);
+        Assert.Contains("ASHA rungs (trees): 20 → 60 → 180 → 300", plan.Output);
+        Assert.Contains("each cell: candidates × trees", plan.Output);
+        Assert.Contains("lightgbm: 25 → 75 → 225 → 400 rounds", plan.Output);
+        Assert.Contains("linear: 6 → 18 → 50 passes", plan.Output);
+
+        var unknown = CliHarness.Run("plan", "--family", "knn");
+        Assert.NotEqual(0, unknown.ExitCode);
+        Assert.Contains("--family must be one of lightgbm, fasttree, forest, gam, linear, got 'knn'", unknown.Output);
+    }
+
+    [Fact]
     public void Prints_what_each_asha_bracket_costs_and_its_share_of_new_candidates()
     {
         var plan = CliHarness.Run("plan", "--first-rung", "20", "--full-budget", "180", "--eta", "3", "--json");

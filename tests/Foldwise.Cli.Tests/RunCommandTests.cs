@@ -94,7 +94,8 @@ public sealed class RunCommandTests : IDisposable
         Assert.Contains("OOF RMSLE", history.Output);
         Assert.Contains("10 trial(s): 10 done", history.Output);
         var wide = CliHarness.Run("history", workspace.Out, "--wide");
-        Assert.Contains("a trial below 15 rounds ran learning_rate × (15 / rounds)^0.5, at most 1 (schedule.rate_scaling)", wide.Output);
+        Assert.Contains("a trial below its family's full budget (lightgbm", wide.Output);
+        Assert.Contains("to 15 rounds) ran learning_rate × (full budget / budget)^0.5, at most 1 (schedule.rate_scaling)", wide.Output);
 
         var json = CliHarness.Run("history", workspace.Out, "--json");
         using var document = JsonDocument.Parse(json.Output);

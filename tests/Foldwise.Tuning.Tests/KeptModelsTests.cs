@@ -159,6 +159,28 @@ public sealed class KeptModelsTests(KeptDemoRun run) : IClassFixture<KeptDemoRun
         Assert.All(own.Zip(again), pair => Assert.True(Math.Abs(pair.First.Value - pair.Second.Value) <= 1e-6 * Math.Abs(pair.First.Value), $"{pair.First.Id}"));
     }
 
+    [Fact]
+    public void Keeps_no_models_when_a_re_fit_does_not_reproduce_the_search_s_test_predictions()
+    {
+        // Given a search whose stored test predictions of one blend member are not what its models give
+        string outDir = CopyOfSearch();
+        var events = new SyncEvents();
+        using var store = SearchStore.Open(StoreFile.PathIn(outDir));
+        var header = store.LoadHeader()!;
+        int member = store.LoadBlend()!.Members.First(m => m.Weight > 0).TrialId;
+        var (outOfFold, test) = store.LoadVectors(member)!.Value;
+        store.SaveVectors(member, outOfFold, [.. test.Select(p => p * (1 + 1e-5))]);
+        File.Delete(Directory.GetFiles(KeptModelFiles.FolderIn(outDir)).Single(f => f.Contains(store.LoadKept()!.Members.Single(m => m.TrialId == member).Hash, StringComparison.Ordinal)));
+
+        // When the blend is solved again and its members re-fitted
+        BlendStep.Run(store, header, header.Definition, outDir, events);
+
+        // Then it says why no models were kept, and the store records none
+        var notKept = Assert.Single(events.OfType<ModelsNotKept>());
+        Assert.Contains($"trial {member}", notKept.Reason, StringComparison.Ordinal);
+        Assert.Null(store.LoadKept());
+    }
+
     public void Dispose() => copy.Dispose();
 
     private string TestCsv => run.TestCsv;

@@ -17,7 +17,7 @@ public sealed class HistoryCommand(IAnsiConsole console) : Command<HistorySettin
         var trials = Filter(search.Trials, settings);
         if (settings.Json)
         {
-            console.Profile.Out.Writer.WriteLine(TrialJson.Write(trials, definition.Schedule));
+            console.Profile.Out.Writer.WriteLine(TrialJson.Write(trials, definition));
         }
         else
         {

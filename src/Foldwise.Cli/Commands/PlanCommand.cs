@@ -1,18 +1,20 @@
 using System.Text.Json.Nodes;
 using Foldwise.Core.Schedules;
+using Foldwise.Core.Spaces;
 using Spectre.Console;
 using Spectre.Console.Cli;
 
 namespace Foldwise.Cli.Commands;
 
 /// <summary>
-/// <c>foldwise plan</c>: how many candidates get how many rounds, for Hyperband's brackets and ASHA's rungs,
+/// <c>foldwise plan</c>: how many candidates get how much budget, in the family's own unit, for Hyperband's brackets and ASHA's rungs,
 /// so a search can be sized before machines are spent on it.
 /// </summary>
 public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
 {
     public override int Execute(CommandContext context, PlanSettings settings, CancellationToken cancellationToken)
     {
+        string unit = settings.Descriptor.Unit.Many;
         var plan = HyperbandPlan.For(settings.FirstRung, settings.FullBudget, settings.Eta);
         var rungs = RungBudgets.For(settings.FirstRung, settings.FullBudget, settings.Eta);
         var rates = rungs.Select(b => ShortRungRate.Default.Multiplier(b, settings.FullBudget)).ToArray();
@@ -32,6 +34,8 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
             })]);
             var root = new JsonObject
             {
+                ["family"] = settings.Family,
+                ["unit"] = unit,
                 ["first_rung"] = settings.FirstRung,
                 ["full_budget"] = settings.FullBudget,
                 ["eta"] = settings.Eta,
@@ -50,15 +54,16 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
             return ExitCodes.Ok;
         }
 
-        console.MarkupLine($"ASHA rungs (rounds): {string.Join(" → ", rungs)}; a candidate moves up when it is in the top 1/{settings.Eta} of its rung.");
+        console.MarkupLine($"{settings.Family}, budgets in {unit}.");
+        console.MarkupLine($"ASHA rungs ({unit}): {string.Join(" → ", rungs)}; a candidate moves up when it is in the top 1/{settings.Eta} of its rung.");
         console.MarkupLine($"Learning rate on each rung, × the drawn one (default schedule.rate_scaling 0.5; at most 1): {string.Join(" → ", rates.Select(r => r.ToString("0.##")))}.");
         console.MarkupLine($"ASHA brackets (schedule.brackets k runs the first k, each with an equal share of compute): " +
-            string.Join("; ", starts.Select(b => $"bracket {b.Bracket} starts at {b.Budget} rounds, {b.Rounds:0.#} per candidate on average")) +
+            string.Join("; ", starts.Select(b => $"bracket {b.Bracket} starts at {b.Budget} {unit}, {b.Rounds:0.#} per candidate on average")) +
             $"; with all {starts.Length}, new candidates split {string.Join(" : ", starts.Select(b => b.Share.ToString("P0")))}.");
         int widest = plan.Brackets.Max(b => b.Rungs.Length);
         var table = new Table()
-            .Title($"Hyperband brackets, {settings.FirstRung} to {settings.FullBudget} rounds, η = {settings.Eta}")
-            .Caption("each cell: candidates × rounds");
+            .Title($"Hyperband brackets, {settings.FirstRung} to {settings.FullBudget} {unit}, η = {settings.Eta}")
+            .Caption($"each cell: candidates × {unit}");
         table.AddColumn("bracket");
         table.AddColumn("halvings");
         for (int i = 0; i < widest; i++)
@@ -66,7 +71,7 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
             table.AddColumn($"rung {i}");
         }
 
-        table.AddColumn("total rounds");
+        table.AddColumn($"total {unit}");
         foreach (var (bracket, i) in plan.Brackets.Select((b, i) => (b, i)))
         {
             var cells = new List<string> { (i + 1).ToString(), bracket.S.ToString() };
@@ -77,6 +82,12 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
         }
 
         console.Write(table);
+        console.MarkupLine("Each family's own ASHA rungs when a definition gives none (families.NAME.first_rung / full_budget):");
+        foreach (var d in FamilyDescriptors.All)
+        {
+            console.MarkupLine($"  {d.Name}: {string.Join(" → ", RungBudgets.For(d.FirstRung, d.FullBudget, settings.Eta))} {d.Unit.Many}{(d.InDefaultSet ? "" : " (not in the default set)")}");
+        }
+
         return ExitCodes.Ok;
     }
 }

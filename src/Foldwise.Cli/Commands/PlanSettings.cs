@@ -1,19 +1,31 @@
 using System.ComponentModel;
+using Foldwise.Core.Spaces;
 using Spectre.Console;
 using Spectre.Console.Cli;
 
 namespace Foldwise.Cli.Commands;
 
-/// <summary>Options of <c>foldwise plan</c>; the budgets are in the family's budget unit (boosting rounds for the built-in families).</summary>
+/// <summary>Options of <c>foldwise plan</c>; the budgets are in the family's budget unit (boosting rounds for LightGBM, the default family).</summary>
 public sealed class PlanSettings : CommandSettings
 {
+    [CommandOption("--family <NAME>")]
+    [Description("The family whose rungs to plan, in its own budget unit (rounds, trees, iterations, passes). Default lightgbm.")]
+    public string Family { get; init; } = FamilyNames.LightGbm;
+
     [CommandOption("--first-rung <B0>")]
-    [Description("Budget of the lowest rung (rounds). Default 25, as schedule.first_rung.")]
-    public int FirstRung { get; init; } = 25;
+    [Description("Budget of the lowest rung, in the family's unit. Default: the family's own (25 rounds for lightgbm).")]
+    public int? GivenFirstRung { get; init; }
 
     [CommandOption("--full-budget <B>")]
-    [Description("Budget a candidate is scored at when it reaches the top (rounds). Default 400, as schedule.full_budget.")]
-    public int FullBudget { get; init; } = 400;
+    [Description("Budget a candidate is scored at when it reaches the top, in the family's unit. Default: the family's own (400 rounds for lightgbm).")]
+    public int? GivenFullBudget { get; init; }
+
+    /// <summary>The family planned; valid after <see cref="Validate"/>.</summary>
+    public FamilyDescriptor Descriptor => FamilyDescriptors.Get(Family);
+
+    public int FirstRung => GivenFirstRung ?? Descriptor.FirstRung;
+
+    public int FullBudget => GivenFullBudget ?? Descriptor.FullBudget;
 
     [CommandOption("--eta <E>")]
     [Description("Keep one in E at each rung. Default 3.")]
@@ -39,6 +51,11 @@ public sealed class PlanSettings : CommandSettings
         if (RetiredFullBudget is not null)
         {
             return RetiredOption.Refuse("--max-budget");
+        }
+
+        if (FamilyDescriptors.Find(Family) is null)
+        {
+            return ValidationResult.Error($"--family must be one of {string.Join(", ", FamilyNames.All)}, got '{Family}'");
         }
 
         if (FirstRung < 1)

@@ -33,7 +33,7 @@ public static class ShowJson
             ["fold_sd"] = t.FoldScores.Length > 1 ? BlendView.Spread(t.FoldScores) : null,
             ["budget"] = t.Budget,
             ["rung"] = t.Rung,
-            ["bracket"] = BracketNumbers.For(search.Definition.Schedule).Of(t.Bracket),
+            ["bracket"] = BracketNumbers.For(search.Definition).Of(t.Family, t.Bracket),
             ["parent"] = t.ParentId,
             ["parent_chain"] = new JsonArray([.. ShowLineage.Chain(t, search.Trials).Skip(1).Select(c => (JsonNode?)c.Id)]),
             ["promoted_to"] = new JsonArray([.. ShowLineage.Children(t, search.Trials).Select(c => (JsonNode?)c.Id)]),

@@ -1,9 +1,11 @@
 using System.Globalization;
 using Foldwise.Cli.Output;
 using Foldwise.Cli.Report;
+using Foldwise.Core.Blending;
 using Foldwise.Core.Schedules;
 using Foldwise.Core.Screening;
 using Foldwise.Core.Search;
+using Foldwise.Core.Spaces;
 using Spectre.Console;
 
 namespace Foldwise.Cli.Commands;
@@ -18,6 +20,11 @@ public static class ShowView
         ? $"{Tuning.KeptModelFiles.FolderName}/{kept.Hash}.fwm ({kept.Folds} fold models, {(kept.Bytes / 1e6).ToString("F2", Invariant)} MB, blend weight {kept.Weight.ToString("F4", Invariant)})"
         : search.Kept is null ? "none: the search kept no models ('foldwise blend STORE' keeps the blend's)" : "none: not a member of the kept blend";
 
+    /// <summary>The trial's place in the stored blend.</summary>
+    internal static string BlendText(BlendSummary blend, TrialRecord t) => blend.Members.FirstOrDefault(m => m.TrialId == t.Id) is { } member
+        ? member.Weight > 0 ? $"member with weight {member.Weight.ToString("F4", Invariant)}." : "pooled, given no weight."
+        : "not pooled.";
+
     public static void Render(IAnsiConsole console, StoredSearch search, TrialRecord t)
     {
         string metric = search.Metric.Name;
@@ -26,8 +33,9 @@ public static class ShowView
         void Fact(string name, string value) => facts.AddRow(name, Markup.Escape(value));
 
         // No bracket: a schedule without brackets (plain ASHA, full budget).
-        int? bracket = BracketNumbers.For(search.Definition.Schedule).Of(t.Bracket);
-        Fact("rung", $"{t.Rung}{(bracket is { } b ? $" (bracket {b})" : "")}, {t.Budget} rounds");
+        int? bracket = BracketNumbers.For(search.Definition).Of(t.Family, t.Bracket);
+        string unit = FamilyDescriptors.UnitOf(t.Family).Many;
+        Fact("rung", $"{t.Rung}{(bracket is { } b ? $" (bracket {b})" : "")}, {t.Budget} {unit}");
         Fact("proposed by", t.ParentId is { } p ? $"{t.Proposer} of trial {p}" : t.Proposer);
         var chain = ShowLineage.Chain(t, search.Trials);
         if (chain.Count > 1)
@@ -56,6 +64,11 @@ public static class ShowView
         Fact("duration", t.Duration is { } d ? $"{d.TotalSeconds.ToString("F1", Invariant)} s" : "");
         Fact("attempts", $"{t.Attempt} ({t.Failures} lost)");
         Fact("kept models", KeptText(search, t));
+        if (search.Blend is { } blend)
+        {
+            Fact("blend", BlendText(blend, t) + " " + BlendView.CarriedBy(blend, search.Definition.Families.Select(f => f.Family)));
+        }
+
         foreach (string lost in t.LostAttempts)
         {
             Fact("  lost attempt", lost);

@@ -11,10 +11,10 @@ public static class TrialJson
 {
     private static readonly JsonSerializerOptions Indented = new() { WriteIndented = true };
 
-    /// <param name="schedule">Numbers the brackets as plan does (<see cref="BracketNumbers"/>).</param>
-    public static string Write(IEnumerable<TrialRecord> trials, ScheduleOptions schedule)
+    /// <param name="definition">Numbers the brackets as plan does (<see cref="BracketNumbers"/>).</param>
+    public static string Write(IEnumerable<TrialRecord> trials, SearchDefinition definition)
     {
-        var brackets = BracketNumbers.For(schedule);
+        var brackets = BracketNumbers.For(definition);
         var array = new JsonArray();
         foreach (var t in trials)
         {
@@ -32,7 +32,7 @@ public static class TrialJson
                 ["score"] = t.Score,
                 ["fold_scores"] = new JsonArray([.. t.FoldScores.Select(s => (JsonNode?)s)]),
                 ["rung"] = t.Rung,
-                ["bracket"] = brackets.Of(t.Bracket),
+                ["bracket"] = brackets.Of(t.Family, t.Bracket),
                 ["budget"] = t.Budget,
                 ["parent"] = t.ParentId,
                 ["proposer"] = t.Proposer,

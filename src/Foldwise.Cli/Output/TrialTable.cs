@@ -14,7 +14,7 @@ public static class TrialTable
     {
         var spaces = definition.Families.ToDictionary(f => f.Family, f => f.Space);
         // A schedule without brackets (plain ASHA, full budget) stores 0: the column would say nothing.
-        var brackets = BracketNumbers.For(definition.Schedule);
+        var brackets = BracketNumbers.For(definition);
         bool bracketed = trials.Any(t => t.Bracket > 0);
         string[] columns = ["trial", "family", "state", "rung", .. bracketed ? ["bracket"] : Array.Empty<string>(), "rounds", $"OOF {metric.Name}", "fold sd", "from", "machine/slot", "secs"];
         var table = new Table().Border(TableBorder.Simple).AddColumns(columns);
@@ -31,7 +31,7 @@ public static class TrialTable
                 t.Family,
                 t.State.ToString().ToLowerInvariant(),
                 t.Rung.ToString(),
-                .. bracketed ? [brackets.Of(t.Bracket)?.ToString() ?? ""] : Array.Empty<string>(),
+                .. bracketed ? [brackets.Of(t.Family, t.Bracket)?.ToString() ?? ""] : Array.Empty<string>(),
                 t.Budget.ToString(),
                 t.Score?.ToString("F5") ?? "",
                 t.FoldScores.Length > 1 ? BlendView.Spread(t.FoldScores).ToString("F4") : "",
@@ -52,10 +52,10 @@ public static class TrialTable
                            $"{trials.Count(t => t.State == TrialState.Running)} running, {trials.Count(t => t.State == TrialState.Queued)} queued, " +
                            $"{trials.Count(t => t.State == TrialState.Failed)} failed.");
         var schedule = definition.Schedule;
-        if (wide && schedule.RateScaling > 0 && trials.Any(t => t.Budget < schedule.FullBudget))
+        if (wide && schedule.RateScaling > 0 && trials.Any(t => t.Budget < definition.BudgetOf(t.Family).FullBudget))
         {
             console.MarkupLine(Markup.Escape(
-                $"Parameters are as drawn; a trial below {schedule.FullBudget} rounds ran learning_rate × ({schedule.FullBudget} / rounds)" +
+                $"Parameters are as drawn; a trial below its family's full budget ({FamilyRungs.Describe(definition)}) ran learning_rate × (full budget / budget)" +
                 $"{(schedule.RateScaling == 1 ? "" : $"^{schedule.RateScaling:G3}")}, at most {ShortRungRate.Ceiling:G} (schedule.rate_scaling)."));
         }
     }

@@ -15,13 +15,15 @@ public static class ReportBuilder
         using var store = SearchStore.OpenReadOnly(Path.GetFullPath(StoreFile.Resolve(storeFileOrFolder)));
         var search = StoredSearch.Load(store);
         double[]? blended = BlendedOutOfFold(store, search.Blend);
+        var pooled = search.Blend?.Members.Select(m => store.LoadVectors(m.TrialId)?.OutOfFold
+            ?? throw new StoreException($"{store.FilePath}: blend member {m.TrialId} has no stored predictions")).ToList();
         return (search,
         [
             new ReportPart(
                 "found",
                 "What the search found",
                 "How far candidates got, how large a difference the folds can resolve, and what the blend made of the best trials.",
-                [RungReachChart.Build(search), NoiseFloorChart.Build(search), BlendWeightsChart.Build(search), OutOfFoldChart.Build(search, blended)]),
+                [RungReachChart.Build(search), NoiseFloorChart.Build(search), BlendWeightsChart.Build(search), CorrelationTable.Build(search, pooled), OutOfFoldChart.Build(search, blended)]),
             new ReportPart(
                 "ranges",
                 "Were the definition's ranges well placed?",

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Net;
 using System.Text;
 using System.Text.Json;
+using Foldwise.Cli.Output;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Search;
 
@@ -92,7 +93,7 @@ public static class ReportPage
         string blend = search.Blend is { } b ? string.Create(CultureInfo.InvariantCulture, $"; blend nested estimate {b.NestedScore:F5}") : "; no blend yet";
         return WebUtility.HtmlEncode(string.Create(CultureInfo.InvariantCulture,
             $"{t.Count} trials ({done} done, {t.Count(x => x.State == TrialState.Failed)} failed) of {string.Join(" and ", search.Definition.Families.Select(f => f.Family))} " +
-            $"by {DefinitionWords.Of(schedule.Kind)} with {DefinitionWords.Of(schedule.Proposer)}, {schedule.FirstRung} to {schedule.FullBudget} rounds, " +
+            $"by {DefinitionWords.Of(schedule.Kind)} with {DefinitionWords.Of(schedule.Proposer)}, {FamilyRungs.Describe(search.Definition)}, " +
             $"{search.Definition.Folds}-fold {search.Metric.Name}, best single trial {best}{blend}; " +
             $"{(search.Header.Finished ? "finished" : "not finished")} after {TimeSpan.FromSeconds(Math.Round(search.Header.SpentSeconds))}. Written {written:yyyy-MM-dd HH:mm} UTC from {search.StorePath}."));
     }

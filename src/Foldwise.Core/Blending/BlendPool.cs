@@ -10,14 +10,19 @@ public static class BlendPool
     /// <paramref name="fullBudget"/>, best score first (lower is better), ties to the lower id.
     /// Families come in ordinal name order; a done trial without a finite score is left out.
     /// </summary>
-    public static IReadOnlyList<TrialRecord> Select(IEnumerable<TrialRecord> trials, int perFamily, int fullBudget)
+    public static IReadOnlyList<TrialRecord> Select(IEnumerable<TrialRecord> trials, int perFamily, int fullBudget) =>
+        Select(trials, perFamily, _ => fullBudget);
+
+    /// <summary>The same with each family's own full budget (<see cref="Definition.SearchDefinition.BudgetOf"/>).</summary>
+    public static IReadOnlyList<TrialRecord> Select(IEnumerable<TrialRecord> trials, int perFamily, Func<string, int> fullBudgetOf)
     {
+        ArgumentNullException.ThrowIfNull(fullBudgetOf);
         ArgumentNullException.ThrowIfNull(trials);
         ArgumentOutOfRangeException.ThrowIfLessThan(perFamily, 1);
         return
         [
             .. trials
-                .Where(t => t.State == TrialState.Done && t.Budget == fullBudget && t.Score is { } s && double.IsFinite(s))
+                .Where(t => t.State == TrialState.Done && t.Budget == fullBudgetOf(t.Family) && t.Score is { } s && double.IsFinite(s))
                 .GroupBy(t => t.Family, StringComparer.Ordinal)
                 .OrderBy(g => g.Key, StringComparer.Ordinal)
                 .SelectMany(g => g.OrderBy(t => t.Score!.Value).ThenBy(t => t.Id).Take(perFamily)),

@@ -56,13 +56,17 @@ public static class DefinitionReader
 
         var check = new DefinitionCheck(sourcePath, acceptRetired);
         var root = check.Object(DefinitionTree.Parse(utf8, sourcePath), DefinitionNames.RootKeys);
+        var scheduleNode = root.Get("schedule")?.Value;
+        var schedule = scheduleNode is null ? new ScheduleOptions() : ScheduleReader.Read(check, scheduleNode);
+        var fallback = SharedBudget(check, scheduleNode, schedule);
         var definition = new SearchDefinition
         {
             Name = root.Get("name") is { } name ? Name(check, name.Value) : DefaultName(sourcePath),
             Data = Data(check, check.Require(root, "data").Value, Path.GetFullPath(baseDirectory)),
             Families = root.Get("families") is { } families
-                ? new FamiliesReader(check, builtIn).Read(families.Value)
-                : [.. builtIn.Where(f => FamilyNames.Default.Contains(f.Family))],
+                ? new FamiliesReader(check, builtIn, fallback).Read(families.Value)
+                : [.. builtIn.Where(f => FamilyNames.Default.Contains(f.Family)).Select(f => f with { Budget = fallback(f.Family) })],
+            Schedule = schedule,
             Budget = root.Get("budget") is { } budget ? Budget(check, budget.Value) : new SearchBudget(DefinitionDefaults.Trials, null),
         };
 
@@ -90,9 +94,9 @@ public static class DefinitionReader
             };
         }
 
-        if (root.Get("schedule") is { } schedule)
+        if (scheduleNode is not null && schedule.Brackets > 1)
         {
-            definition = definition with { Schedule = ScheduleReader.Read(check, schedule.Value) };
+            CheckBrackets(check, scheduleNode, definition);
         }
 
         if (root.Get("blend") is { } blend)
@@ -101,6 +105,35 @@ public static class DefinitionReader
         }
 
         return definition;
+    }
+
+    /// <summary>
+    /// A family's rungs when its own object gives none: what <c>schedule</c> wrote (it then speaks for every family, as
+    /// definitions did before families had budgets of their own), else the family's descriptor.
+    /// </summary>
+    private static Func<string, FamilyBudget> SharedBudget(DefinitionCheck check, DefinitionNode? scheduleNode, ScheduleOptions schedule)
+    {
+        var written = scheduleNode is null ? null : check.Object(scheduleNode, DefinitionNames.ScheduleKeys);
+        bool firstWritten = written?.Get("first_rung") is not null;
+        bool fullWritten = written?.Get("full_budget") is not null;
+        return family => FamilyDescriptors.Find(family) is { } d
+            ? new FamilyBudget(firstWritten ? schedule.FirstRung : d.FirstRung, fullWritten ? schedule.FullBudget : d.FullBudget)
+            : new FamilyBudget(schedule.FirstRung, schedule.FullBudget);
+    }
+
+    /// <summary>Every family has at least as many rungs as ASHA has brackets.</summary>
+    private static void CheckBrackets(DefinitionCheck check, DefinitionNode scheduleNode, SearchDefinition definition)
+    {
+        var given = check.Object(scheduleNode, DefinitionNames.ScheduleKeys).Get("brackets");
+        foreach (var family in definition.Families)
+        {
+            var budget = family.BudgetUnder(definition.Schedule);
+            var rungs = Schedules.RungBudgets.For(budget.FirstRung, budget.FullBudget, definition.Schedule.Eta);
+            if (definition.Schedule.Brackets > rungs.Length && given is not null)
+            {
+                throw check.Fail(given.Value, $"'schedule.brackets' ({definition.Schedule.Brackets}) is more than {family.Family}'s {rungs.Length} rungs ({string.Join(", ", rungs)} {FamilyDescriptors.UnitOf(family.Family).Many})");
+            }
+        }
     }
 
     private static string Name(DefinitionCheck check, DefinitionNode node)

@@ -58,7 +58,16 @@ public static class DefinitionWriter
             {
                 foreach (var family in definition.Families)
                 {
-                    Section(json, family.Family, () => Space(json, family.Space));
+                    Section(json, family.Family, () =>
+                    {
+                        if (family.Budget is { } budget)
+                        {
+                            json.WriteNumber("first_rung", budget.FirstRung);
+                            json.WriteNumber("full_budget", budget.FullBudget);
+                        }
+
+                        Space(json, family.Space);
+                    });
                 }
             });
             var schedule = definition.Schedule;

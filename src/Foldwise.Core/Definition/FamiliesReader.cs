@@ -4,11 +4,15 @@ using Foldwise.Core.Spaces;
 namespace Foldwise.Core.Definition;
 
 /// <summary>
-/// Reads <c>families</c>: each key a built-in family, each value an object naming only the parameters
-/// it changes; every other parameter keeps the family's default range, in the default order.
+/// Reads <c>families</c>: each key a built-in family, each value an object naming only the parameters it changes
+/// (every other parameter keeps the family's default range, in the default order) and, optionally, the family's own
+/// <c>first_rung</c> and <c>full_budget</c> in its budget unit; what it leaves out comes from <paramref name="fallback"/>.
 /// </summary>
-internal sealed class FamiliesReader(DefinitionCheck check, IReadOnlyList<FamilySearch> builtIn)
+internal sealed class FamiliesReader(DefinitionCheck check, IReadOnlyList<FamilySearch> builtIn, Func<string, FamilyBudget> fallback)
 {
+    /// <summary>The keys of a family's object that are not parameters.</summary>
+    public static readonly string[] BudgetKeys = ["first_rung", "full_budget"];
+
     public ImmutableArray<FamilySearch> Read(DefinitionNode node)
     {
         string[] known = [.. builtIn.Select(f => f.Family)];
@@ -18,15 +22,29 @@ internal sealed class FamiliesReader(DefinitionCheck check, IReadOnlyList<Family
             throw check.Fail(node, $"'families' names no family; add one or more of {string.Join(", ", known)}");
         }
 
-        return [.. families.Members.Select(m => new FamilySearch(m.Key, Space(m.Value, builtIn.First(f => f.Family == m.Key).Space)))];
+        return [.. families.Members.Select(m => Family(m.Key, m.Value, builtIn.First(f => f.Family == m.Key).Space))];
     }
 
-    private ParameterSpace Space(DefinitionNode node, ParameterSpace standard)
+    private FamilySearch Family(string family, DefinitionNode node, ParameterSpace standard)
     {
-        string family = node.Path["families.".Length..];
-        var names = standard.Ranges.Select(r => r.Name).ToArray();
+        string[] names = [.. standard.Ranges.Select(r => r.Name), .. BudgetKeys];
         var given = check.Object(node, names, "parameter", $"{family}'s parameters");
         var ranges = new RangeReader(check, FamilyDescriptors.Find(family));
-        return new ParameterSpace([.. standard.Ranges.Select(r => given.Get(r.Name) is { } m ? ranges.Read(m.Value, r) : r)]);
+        var space = new ParameterSpace([.. standard.Ranges.Select(r => given.Get(r.Name) is { } m ? ranges.Read(m.Value, r) : r)]);
+
+        var standardBudget = fallback(family);
+        var first = given.Get("first_rung")?.Value;
+        var full = given.Get("full_budget")?.Value;
+        var budget = new FamilyBudget(
+            first is null ? standardBudget.FirstRung : check.Whole(first, 1),
+            full is null ? standardBudget.FullBudget : check.Whole(full, 1));
+        if (budget.FullBudget < budget.FirstRung)
+        {
+            string unit = FamilyDescriptors.UnitOf(family).Many;
+            throw check.Fail(full ?? first!, $"'{node.Path}.full_budget' ({budget.FullBudget}{(full is null ? ", from the schedule or the family's default" : "")}) " +
+                                             $"is below its first_rung ({budget.FirstRung}{(first is null ? ", from the schedule or the family's default" : "")}) {unit}");
+        }
+
+        return new FamilySearch(family, space, budget);
     }
 }

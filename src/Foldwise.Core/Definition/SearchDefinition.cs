@@ -28,4 +28,8 @@ public sealed record SearchDefinition
     public required SearchBudget Budget { get; init; }
 
     public BlendOptions Blend { get; init; } = new();
+
+    /// <summary>A family's rungs in its own unit; a family the search does not name takes the schedule's range.</summary>
+    public FamilyBudget BudgetOf(string family) =>
+        Families.FirstOrDefault(f => f.Family == family)?.BudgetUnder(Schedule) ?? new FamilyBudget(Schedule.FirstRung, Schedule.FullBudget);
 }

@@ -7,7 +7,7 @@ namespace Foldwise.Core.Schedules;
 
 /// <summary>
 /// Asynchronous successive halving (Li et al., MLSys 2020). Rungs sit at <see cref="RungBudgets"/>; each family has
-/// its own rungs. Asked for a plan, it scans rungs from the top down and promotes the first result that is in the
+/// its own rungs, in its own budget unit (<see cref="FamilySearch.BudgetUnder"/>). Asked for a plan, it scans rungs from the top down and promotes the first result that is in the
 /// top ⌊n_k/η⌋ of its rung and not yet promoted (families in definition order within a rung); when nothing can be
 /// promoted it starts a new candidate at rung 0 for the family whose turn it is. It never waits and never runs out.
 /// With more than one bracket (<see cref="AshaBrackets"/>) a new candidate starts at its bracket's first rung, and
@@ -17,9 +17,13 @@ namespace Foldwise.Core.Schedules;
 public sealed class AshaSchedule : ISchedule
 {
     private readonly CandidateSource _source;
-    private readonly ImmutableArray<int> _budgets;
+    /// <summary>[family]: the family's rung budgets.</summary>
+    private readonly ImmutableArray<int>[] _budgets;
     private readonly int _eta;
-    private readonly AshaBrackets _brackets;
+
+    /// <summary>[family]: the family's brackets (as many for every family; their costs follow the family's rungs).</summary>
+    private readonly AshaBrackets[] _brackets;
+    private readonly int _bracketCount;
 
     /// <summary>[bracket][family][rung]; a bracket's rungs below its first stay empty.</summary>
     private readonly AshaRung[][][] _rungs;
@@ -29,16 +33,19 @@ public sealed class AshaSchedule : ISchedule
 
     public AshaSchedule(ImmutableArray<FamilySearch> families, ScheduleOptions options, IProposer proposer, int seed)
     {
-        _budgets = RungBudgets.For(options.FirstRung, options.FullBudget, options.Eta);
+        ArgumentNullException.ThrowIfNull(options);
+        _budgets = [.. families.Select(f => f.BudgetUnder(options)).Select(b => RungBudgets.For(b.FirstRung, b.FullBudget, options.Eta))];
         _eta = options.Eta;
         _source = new CandidateSource(families, proposer, seed);
-        _brackets = AshaBrackets.For(_budgets, _eta, options.Brackets);
-        _rungs = [.. Enumerable.Range(0, _brackets.Count).Select(_ => Enumerable.Range(0, _source.Count)
-            .Select(_ => Enumerable.Range(0, _budgets.Length).Select(_ => new AshaRung()).ToArray()).ToArray())];
-        _started = [.. Enumerable.Range(0, _source.Count).Select(_ => new int[_brackets.Count])];
+        _brackets = [.. _budgets.Select(b => AshaBrackets.For(b, _eta, options.Brackets))];
+        _bracketCount = options.Brackets;
+        _rungs = [.. Enumerable.Range(0, _bracketCount).Select(_ => Enumerable.Range(0, _source.Count)
+            .Select(f => Enumerable.Range(0, _budgets[f].Length).Select(_ => new AshaRung()).ToArray()).ToArray())];
+        _started = [.. Enumerable.Range(0, _source.Count).Select(_ => new int[_bracketCount])];
     }
 
-    public ImmutableArray<int> Budgets => _budgets;
+    /// <summary>A family's rung budgets, by its place in the definition.</summary>
+    public ImmutableArray<int> BudgetsOf(int family) => _budgets[family];
 
     public bool Exhausted => false;
 
@@ -47,7 +54,7 @@ public sealed class AshaSchedule : ISchedule
         var (family, change) = _source.Observe(trial);
         // Bracket 0 on a trial means plain ASHA (one bracket, or a store written before brackets): the first bracket.
         int bracket = trial.Bracket <= 1 ? 0 : trial.Bracket - 1;
-        if (family < 0 || bracket >= _brackets.Count || trial.Rung < bracket || trial.Rung >= _budgets.Length)
+        if (family < 0 || bracket >= _bracketCount || trial.Rung < bracket || trial.Rung >= _budgets[family].Length)
         {
             return;
         }
@@ -71,24 +78,25 @@ public sealed class AshaSchedule : ISchedule
 
     public TrialPlan? NextPlan()
     {
-        for (int k = _budgets.Length - 2; k >= 0; k--)
+        int top = _budgets.Max(b => b.Length);
+        for (int k = top - 2; k >= 0; k--)
         {
-            for (int b = 0; b < _brackets.Count && b <= k; b++)
+            for (int b = 0; b < _bracketCount && b <= k; b++)
             {
                 for (int f = 0; f < _source.Count; f++)
                 {
-                    if (_rungs[b][f][k].TryPromotable(_eta, out int parent, out var parameters))
+                    if (k < _budgets[f].Length - 1 && _rungs[b][f][k].TryPromotable(_eta, out int parent, out var parameters))
                     {
-                        return new TrialPlan(_source[f].Family, parameters, _budgets[k + 1], k + 1, parent, Promotion.ProposerName, BracketLabel(b));
+                        return new TrialPlan(_source[f].Family, parameters, _budgets[f][k + 1], k + 1, parent, Promotion.ProposerName, BracketLabel(b));
                     }
                 }
             }
         }
 
         int family = _source.NextFamily();
-        int start = _brackets.Next(_started[family]);
-        return _source.NewCandidate(family, _budgets[start], BracketLabel(start), rung: start);
+        int start = _brackets[family].Next(_started[family]);
+        return _source.NewCandidate(family, _budgets[family][start], BracketLabel(start), rung: start);
     }
 
-    private int BracketLabel(int bracket) => _brackets.Count == 1 ? 0 : bracket + 1;
+    private int BracketLabel(int bracket) => _bracketCount == 1 ? 0 : bracket + 1;
 }

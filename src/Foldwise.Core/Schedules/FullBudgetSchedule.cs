@@ -12,18 +12,23 @@ namespace Foldwise.Core.Schedules;
 public sealed class FullBudgetSchedule : ISchedule
 {
     private readonly CandidateSource _source;
-    private readonly int _budget;
+    /// <summary>[family]: its full budget.</summary>
+    private readonly int[] _budgets;
 
     public FullBudgetSchedule(ImmutableArray<FamilySearch> families, ScheduleOptions options, IProposer proposer, int seed)
     {
         ScheduleChecks.Validate(options);
         _source = new CandidateSource(families, proposer, seed);
-        _budget = options.FullBudget;
+        _budgets = [.. families.Select(f => f.BudgetUnder(options).FullBudget)];
     }
 
     public bool Exhausted => false;
 
     public void Observe(TrialRecord trial) => _source.Observe(trial);
 
-    public TrialPlan? NextPlan() => _source.NewCandidate(_source.NextFamily(), _budget);
+    public TrialPlan? NextPlan()
+    {
+        int family = _source.NextFamily();
+        return _source.NewCandidate(family, _budgets[family]);
+    }
 }

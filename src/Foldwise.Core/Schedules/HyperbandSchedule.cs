@@ -16,22 +16,26 @@ namespace Foldwise.Core.Schedules;
 public sealed class HyperbandSchedule : ISchedule
 {
     private readonly CandidateSource _source;
-    private readonly HyperbandPlan _plan;
+    /// <summary>[family]: the family's brackets over its own rungs.</summary>
+    private readonly HyperbandPlan[] _plans;
     private readonly Dictionary<int, BracketRun[]> _runs = [];
     private int _current = 1;
 
     public HyperbandSchedule(ImmutableArray<FamilySearch> families, ScheduleOptions options, IProposer proposer, int seed)
     {
-        _plan = HyperbandPlan.For(options.FirstRung, options.FullBudget, options.Eta);
+        ArgumentNullException.ThrowIfNull(options);
+        _plans = [.. families.Select(f => f.BudgetUnder(options)).Select(b => HyperbandPlan.For(b.FirstRung, b.FullBudget, options.Eta))];
         _source = new CandidateSource(families, proposer, seed);
     }
-
-    public HyperbandPlan Plan => _plan;
 
     public bool Exhausted => false;
 
     /// <summary>The bracket of a trial ordinal: 1 → s_max, 2 → s_max − 1, …, wrapping after s = 0.</summary>
-    public HyperbandBracket BracketOf(int ordinal) => _plan.Brackets[(ordinal - 1) % _plan.Brackets.Length];
+    /// <summary>The bracket the first family runs as bracket <paramref name="ordinal"/>.</summary>
+    public HyperbandBracket BracketOf(int ordinal) => BracketOf(0, ordinal);
+
+    /// <summary>The bracket <paramref name="family"/> (its place in the definition) runs as bracket <paramref name="ordinal"/>: each family cycles through its own plan.</summary>
+    public HyperbandBracket BracketOf(int family, int ordinal) => _plans[family].Brackets[(ordinal - 1) % _plans[family].Brackets.Length];
 
     public void Observe(TrialRecord trial)
     {
@@ -90,11 +94,10 @@ public sealed class HyperbandSchedule : ISchedule
     {
         if (!_runs.TryGetValue(ordinal, out var runs))
         {
-            var bracket = BracketOf(ordinal);
             runs = new BracketRun[_source.Count];
             for (int f = 0; f < runs.Length; f++)
             {
-                runs[f] = new BracketRun(bracket);
+                runs[f] = new BracketRun(BracketOf(f, ordinal));
             }
 
             _runs.Add(ordinal, runs);

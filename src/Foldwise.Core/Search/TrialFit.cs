@@ -21,7 +21,7 @@ public sealed record TrialFit(ParameterSet Run, int Budget, int Seed)
             root = up;
         }
 
-        var run = definition.Schedule.ShortRungRate.For(trial.Parameters, trial.Budget, definition.Schedule.FullBudget);
+        var run = definition.Schedule.ShortRungRate.For(trial.Parameters, trial.Budget, definition.BudgetOf(trial.Family).FullBudget);
         return new TrialFit(run, trial.Budget, new SearchSeeds(definition.Seed).Trial(root.Id));
     }
 

@@ -109,6 +109,9 @@ public static class FamilyDescriptors
     /// <summary>Every family a definition may name, in the order searches list them.</summary>
     public static ImmutableArray<FamilyDescriptor> All { get; } = [LightGbm, FastTree, Forest, Gam, Linear];
 
+    /// <summary>What a family's budget counts; boosting rounds for a name that is not built in.</summary>
+    public static BudgetUnit UnitOf(string family) => Find(family)?.Unit ?? BudgetUnit.Rounds;
+
     /// <summary>The descriptor of a built-in family, or null for any other name.</summary>
     public static FamilyDescriptor? Find(string family) => All.FirstOrDefault(d => d.Name == family);
 

@@ -44,7 +44,9 @@ public sealed partial class ReportPageTests(ITestOutputHelper output) : IDisposa
 
         // And it opens with the project's own views: how far candidates got, the noise floor, the blend and its diversity, its fit
         var order = ChartSectionTag().Matches(html).Select(m => m.Groups["id"].Value).ToList();
-        Assert.Equal(["rung-reach", "noise-floor", "blend-weights", "oof-fit"], order.Take(4));
+        Assert.Equal(["rung-reach", "noise-floor", "blend-weights", "oof-correlations", "oof-fit"], order.Take(5));
+        Assert.Equal(new Dictionary<string, int> { ["members"] = 3 }, charts["oof-correlations"]);
+        Assert.Contains("Mean correlation of out-of-fold predictions between members of one family", html);
         Assert.Contains("2 of 3 pool members from 2 of 2 families carry weight, worth 1.7 equally weighted members", html);
 
         // And the familiar views follow under the project's questions, not as the lead and not under generic titles
@@ -78,7 +80,7 @@ public sealed partial class ReportPageTests(ITestOutputHelper output) : IDisposa
         Assert.Empty(browser.ConsoleLines);
         Assert.True(new FileInfo(shot).Length > 20_000, "the screenshot is nearly empty");
         Assert.Equal(charts.Count, Regex.Count(browser.Dom, "<section class=\"chart[^\"]*\" id=\"[^\"]+\""));
-        Assert.Equal(charts.Count + 1, Regex.Count(browser.Dom, "<svg ")); // the OOF chart holds two panels
+        Assert.Equal(charts.Count, Regex.Count(browser.Dom, "<svg ")); // the OOF chart holds two panels, the correlation table none
     }
 
     [Fact]
