@@ -47,6 +47,13 @@ internal static class FoldFitter
         return Score(loaded, SparseViews.Rows(ml, inputs.Test, [.. Enumerable.Range(0, inputs.Test.RowCount)], labels: null), inputs.Test.RowCount, TrainingMean(job));
     }
 
+    /// <summary>
+    /// Forest, GAM and linear fits skip the lock: run side by side in one process they predict bit for bit what they
+    /// predict alone (ConcurrentFitTests), and behind the lock a worker's second slot waited for the first slot's fit
+    /// (two 100-tree forest folds side by side finished at 0.40 s and 0.80 s against 0.36 s alone, seen 2026-12-05).
+    /// </summary>
+    private static bool RunsBesideOthers(string family) => family is FamilyNames.Forest or FamilyNames.Gam or FamilyNames.Linear;
+
     private static KeptFold Run(string family, FamilyInput input, FoldJob job, Func<MLContext, IDataView, ITransformer> train, bool keep, CancellationToken cancellation)
     {
         Check(family, job);
@@ -62,13 +69,26 @@ internal static class FoldFitter
         var trainView = SparseViews.Rows(ml, inputs.Train, job.TrainRows, centred);
 
         // ML.NET 5's public API offers no way to interrupt a fit, so cancellation is honoured around it.
-        lock (OneFitAtATime)
+        bool locked = !RunsBesideOthers(family);
+        if (locked)
+        {
+            OneFitAtATime.Enter();
+        }
+
+        try
         {
             var model = train(ml, trainView);
             cancellation.ThrowIfCancellationRequested();
             var validation = Score(model, SparseViews.Rows(ml, inputs.Train, job.ValidationRows, labels: null), job.ValidationRows.Length, offset);
             var test = job.PredictsTest ? Score(model, SparseViews.Test(inputs.Test), inputs.Test.RowCount, offset) : [];
             return new KeptFold(new FoldPrediction(validation, test), keep ? Save(ml, model, trainView.Schema) : []);
+        }
+        finally
+        {
+            if (locked)
+            {
+                OneFitAtATime.Exit();
+            }
         }
     }
 

@@ -31,6 +31,24 @@ public sealed class ConcurrentFitTests
         Assert.All(concurrent, c => Assert.Equal(sequential, c));
     }
 
+    [Fact]
+    public void Forest_fits_beside_FastTree_fits_match_their_sequential_fits()
+    {
+        // Given a forest job and a FastTree job with their sequential fits (the fit path locks FastTree, not forest)
+        var data = TinyTables.Data();
+        var forest = TinyTables.Job(data, FamilyNames.Forest, TinyTables.Parameters(FamilyNames.Forest, rowFraction: 0.7), budget: 40);
+        var boosted = TinyTables.Job(data, FamilyNames.FastTree, TinyTables.Parameters(FamilyNames.FastTree, rowFraction: 0.7), budget: 40);
+        var (forestAlone, boostedAlone) = (Fit(FamilyNames.Forest, forest), Fit(FamilyNames.FastTree, boosted));
+
+        // When four of each run side by side
+        var concurrent = new double[8][];
+        Parallel.For(0, concurrent.Length, new ParallelOptions { MaxDegreeOfParallelism = 4 }, i => concurrent[i] = i % 2 == 0 ? Fit(FamilyNames.Forest, forest) : Fit(FamilyNames.FastTree, boosted));
+
+        // Then each predicts exactly what it did alone
+        Assert.All(concurrent.Where((_, i) => i % 2 == 0), c => Assert.Equal(forestAlone, c));
+        Assert.All(concurrent.Where((_, i) => i % 2 == 1), c => Assert.Equal(boostedAlone, c));
+    }
+
     private static double[] Fit(string family, FoldJob job)
     {
         var ml = new MLContext(job.Seed);
@@ -39,6 +57,7 @@ public sealed class ConcurrentFitTests
         {
             FamilyNames.Forest => ml.Regression.Trainers.FastForest(ForestLearner.Options(job)).Fit(rows),
             FamilyNames.Gam => ml.Regression.Trainers.Gam(GamLearner.Options(job)).Fit(rows),
+            FamilyNames.FastTree => ml.Regression.Trainers.FastTree(FastTreeLearner.Options(job)).Fit(rows),
             _ => ml.Regression.Trainers.Sdca(LinearLearner.Options(job)).Fit(rows),
         };
         var held = SparseViews.Rows(ml, job.Data.Train, job.ValidationRows, labels: null);
