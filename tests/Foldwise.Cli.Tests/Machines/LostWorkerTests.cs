@@ -21,9 +21,10 @@ public sealed class LostWorkerTests
         using var first = Worker(workspace, port, "w1");
         Assert.True(await first.WaitForLineAsync(WorkerEvents.Is<SlotTrialScored>, TimeSpan.FromSeconds(60)), first.Output + coordinator.Output);
 
-        // When a second worker joins late, and the first is killed while it holds a lease
+        // When a second worker joins late, and the first is killed while it holds a lease (frozen first, so the trial
+        // it runs cannot finish between the look at the store and the kill)
         using var late = Worker(workspace, port, "w2");
-        Assert.True(await WaitUntilRunningOn(workspace.Out, "w1", TimeSpan.FromSeconds(30)), "w1 never held a lease");
+        Assert.True(await FreezeWhileRunning(first, workspace.Out, "w1", TimeSpan.FromSeconds(60)), "w1 was never caught holding a lease");
         first.Kill();
 
         // Then the search still finishes, every trial done once, the lost attempt on record
@@ -44,12 +45,49 @@ public sealed class LostWorkerTests
             "worker", "--join", $"127.0.0.1:{port}", "--slots", "1", "--threads", "1", "--name", name,
             "--cache", Path.Combine(workspace.Root, "cache-" + name), "--json");
 
+    /// <summary>
+    /// Stops the worker's process (SIGSTOP) once the store shows it running a trial, and keeps it stopped if the store
+    /// still shows that after in-flight messages have landed; otherwise lets it go on (SIGCONT) and waits again.
+    /// </summary>
+    private static async Task<bool> FreezeWhileRunning(FoldwiseProcess worker, string outDir, string name, TimeSpan timeout)
+    {
+        var deadline = DateTime.UtcNow + timeout;
+        while (DateTime.UtcNow < deadline)
+        {
+            if (!await WaitUntilRunningOn(outDir, name, deadline - DateTime.UtcNow))
+            {
+                return false;
+            }
+
+            await SignalAsync(worker.Id, "-STOP");
+            await Task.Delay(500);
+            if (IsRunningOn(outDir, name))
+            {
+                return true;
+            }
+
+            await SignalAsync(worker.Id, "-CONT");
+        }
+
+        return false;
+    }
+
+    private static bool IsRunningOn(string outDir, string worker) =>
+        MachineDefinition.History(outDir).Any(t => (string?)t!["state"] == "running" && (string?)t["worker"] == worker);
+
+    private static async Task SignalAsync(int pid, string signal)
+    {
+        using var kill = System.Diagnostics.Process.Start("kill", [signal, pid.ToString(System.Globalization.CultureInfo.InvariantCulture)]);
+        await kill.WaitForExitAsync();
+        Assert.Equal(0, kill.ExitCode);
+    }
+
     private static async Task<bool> WaitUntilRunningOn(string outDir, string worker, TimeSpan timeout)
     {
         var deadline = DateTime.UtcNow + timeout;
         while (DateTime.UtcNow < deadline)
         {
-            if (MachineDefinition.History(outDir).Any(t => (string?)t!["state"] == "running" && (string?)t["worker"] == worker))
+            if (IsRunningOn(outDir, worker))
             {
                 return true;
             }
