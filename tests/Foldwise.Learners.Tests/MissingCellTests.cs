@@ -121,10 +121,11 @@ public sealed class MissingCellTests
             [new SparseColumn([.. column], [.. column.Select(r => features[r])])], [.. labels.Select(y => (double)y)]);
         var data = TrialData.From(table, table, new FoldPlan(2, 0, [.. Enumerable.Range(0, Rows).Select(r => r % 2)]), Metric.Rmse);
         var learner = LearnerCatalog.BuiltIn.Get(family);
-        var parameters = TinyTables.Parameters(family);
+        var inputs = data.InputsFor(data.Folds.TrainRows(0), 7);
+        var parameters = TinyTables.Parameters(family, features: inputs.ColumnCount);
 
         // When one fold is fitted
-        var prediction = learner.Fit(TinyTables.Job(data, family, parameters, budget: 100) with { Inputs = data.InputsFor(data.Folds.TrainRows(0), 7) }, CancellationToken.None);
+        var prediction = learner.Fit(TinyTables.Job(data, family, parameters, budget: 100) with { Inputs = inputs }, CancellationToken.None);
 
         // Then rows with a missing x are predicted near 10 and rows with x = 0 near 0
         Assert.InRange(prediction.Test[1], 9, 11);

@@ -52,7 +52,8 @@ internal static class TinyTables
         TrialData.From(Table(rows, seed: 11, withTarget: true), Table(testRows, seed: 12, withTarget: false), RoundRobin(rows, folds), Metric.Rmsle);
 
     /// <summary>Values for every parameter of the family's default space; row_fraction as asked where the family has it.</summary>
-    public static ParameterSet Parameters(string family, double rowFraction = 1.0)
+    /// <param name="features">The columns the learner reads: GAM's rate is shared among them.</param>
+    public static ParameterSet Parameters(string family, double rowFraction = 1.0, int features = Features)
     {
         var chosen = new Dictionary<string, double>
         {
@@ -67,6 +68,12 @@ internal static class TinyTables
         if (family == FamilyNames.Linear)
         {
             chosen["l2"] = 1e-3;
+        }
+
+        if (family == FamilyNames.Gam)
+        {
+            // GAM's rate is a whole iteration's step, shared among the features: 0.1 for each feature here.
+            chosen["learning_rate"] = 0.1 * features;
         }
 
         // A parameter not listed takes its default range's low end, so a new family needs no line here.

@@ -67,8 +67,9 @@ public static class FamilyDescriptors
         InDefaultSet: false);
 
     /// <summary>
-    /// ML.NET's GAM (one shallow tree per feature and iteration), budget = boosting iterations. ML.NET's own default
-    /// rate is 0.002 over 9,500 iterations; the searched budgets (40 to 1,000) are far shorter, so the rates are higher.
+    /// ML.NET's GAM (one shallow tree per feature and iteration), budget = boosting iterations. <c>learning_rate</c> is
+    /// the step of a whole iteration, which the learner shares among the features (GamLearner); ML.NET's own default
+    /// is 0.002 per feature over 9,500 iterations, and the searched budgets (40 to 1,000) are far shorter.
     /// </summary>
     public static FamilyDescriptor Gam { get; } = new(
         FamilyNames.Gam,
