@@ -4,6 +4,8 @@ namespace Foldwise.Core.Blending;
 /// Which trials predict the test table: only those the blend may weight. The blend pool takes full-budget trials
 /// (<see cref="BlendPool"/>); when none has finished, the blend falls back to the furthest budget reached, so until a
 /// full-budget trial is done every trial predicts the test table. Below the full budget that saves the test scoring.
+/// Budgets are each family's own: the coordinator asks with the trial's family's full budget and whether that family
+/// has a full-budget trial done.
 /// </summary>
 public static class TestPredictions
 {

@@ -20,6 +20,7 @@ public sealed class SearchCoordinator
     private readonly Dictionary<int, TrialRecord> trials = [];
     private readonly SortedSet<int> queued = [];
     private readonly Dictionary<int, TrialRecord> running = [];
+    private readonly HashSet<string> familiesAtFullBudget = new(StringComparer.Ordinal);
 
     private readonly LeaseTable leases = new();
     private readonly WorkerQuarantine quarantine;
@@ -28,7 +29,6 @@ public sealed class SearchCoordinator
     private readonly DateTimeOffset sessionStart;
     private int nextId = 1;
     private bool stopRequested;
-    private bool fullBudgetDone;
     private StopReason? stopping;
 
     /// <param name="history">Trials from the store when resuming, in any order; running ones are queued again.</param>
@@ -311,15 +311,7 @@ public sealed class SearchCoordinator
             return;
         }
 
-        var other = live[0];
-        CommitLocked(trial with
-        {
-            Worker = other.Worker,
-            Slot = other.Slot,
-            Started = other.Started,
-            LeaseExpires = other.Expires,
-            LostAttempts = trial.LostAttempts.Add($"attempt {hold.Attempt}: {reason} (attempt {other.Attempt} carries on)"),
-        });
+        CommitLocked(AttemptLoss.CarriedOn(trial, hold.Attempt, reason, live[0]));
     }
 
     /// <summary>An idle slot's backup copy of the most overdue trial, when the straggler watch names one.</summary>
@@ -347,22 +339,8 @@ public sealed class SearchCoordinator
     private LeaseHold? HoldLocked(int trialId, int attempt) =>
         running.ContainsKey(trialId) ? leases.Find(trialId, attempt) : null;
 
-    private TrialRecord LoseAttempt(TrialRecord trial, string reason, bool counts, int? attempt = null)
-    {
-        int failures = trial.Failures + (counts ? 1 : 0);
-        bool failed = failures >= options.MaxAttempts;
-        return trial with
-        {
-            State = failed ? TrialState.Failed : TrialState.Queued,
-            Failures = failures,
-            LostAttempts = trial.LostAttempts.Add($"attempt {attempt ?? trial.Attempt}: {reason}"),
-            FailureReason = failed ? $"gave up after {failures} lost attempts; last: {reason}" : null,
-            Finished = failed ? time.GetUtcNow() : null,
-            LeaseExpires = null,
-            Worker = failed ? trial.Worker : null,
-            Slot = failed ? trial.Slot : null,
-        };
-    }
+    private TrialRecord LoseAttempt(TrialRecord trial, string reason, bool counts, int? attempt = null) =>
+        AttemptLoss.Apply(trial, reason, counts, options.MaxAttempts, time.GetUtcNow(), attempt);
 
     /// <summary>Journal first, then memory: a record the journal refused never becomes the coordinator's truth.</summary>
     private void CommitLocked(TrialRecord trial)
@@ -375,7 +353,11 @@ public sealed class SearchCoordinator
     private void ApplyLocked(TrialRecord trial)
     {
         trials[trial.Id] = trial;
-        fullBudgetDone |= trial.State == TrialState.Done && trial.Budget >= definition.Schedule.FullBudget;
+        if (trial.State == TrialState.Done && trial.Budget >= definition.BudgetOf(trial.Family).FullBudget)
+        {
+            familiesAtFullBudget.Add(trial.Family);
+        }
+
         nextId = Math.Max(nextId, trial.Id + 1);
         queued.Remove(trial.Id);
         running.Remove(trial.Id);
@@ -415,7 +397,7 @@ public sealed class SearchCoordinator
     private LeaseGrant Granted(TrialRecord trial)
     {
         var fit = TrialFit.For(trial, trials, definition);
-        return new(LeaseKind.Granted, trial, fit.Seed, fit.Run, PredictsTest: TestPredictions.Wanted(trial.Budget, definition.Schedule.FullBudget, fullBudgetDone));
+        return new(LeaseKind.Granted, trial, fit.Seed, fit.Run, PredictsTest: TestPredictions.Wanted(trial.Budget, definition.BudgetOf(trial.Family).FullBudget, familiesAtFullBudget.Contains(trial.Family)));
     }
 
     private double SpentSecondsLocked(DateTimeOffset now) => spentBefore + (now - sessionStart).TotalSeconds;

@@ -203,6 +203,38 @@ public sealed class SearchCoordinatorTests
     }
 
     [Fact]
+    public void Each_family_predicts_the_test_table_by_its_own_full_budget()
+    {
+        // Given LightGBM at the schedule's 400 rounds and a forest whose own full budget is 300 trees
+        var definition = Definition(trials: 10) with
+        {
+            Families =
+            [
+                new FamilySearch(FamilyNames.LightGbm, DefaultSpaces.LightGbm),
+                new FamilySearch(FamilyNames.Forest, DefaultSpaces.Forest, new FamilyBudget(10, 300)),
+            ],
+        };
+        var coordinator = new SearchCoordinator(definition, schedule, journal, time, new CoordinatorOptions { LeaseDuration = TimeSpan.FromSeconds(30) });
+
+        // When a full-budget LightGBM trial is done, then a forest trial at 300 trees and a short one are leased
+        schedule.Budget = definition.Schedule.FullBudget;
+        var lightgbm = coordinator.Lease("w1", "0");
+        Assert.True(coordinator.Complete(lightgbm.Trial!.Id, lightgbm.Trial.Attempt, 0.4, [0.4]));
+        (schedule.Family, schedule.Budget) = (FamilyNames.Forest, 300);
+        var forestFull = coordinator.Lease("w1", "0");
+        schedule.Budget = 10;
+        var forestShort = coordinator.Lease("w1", "1");
+
+        // Then the forest's 300 trees are its full budget, and its short trial still predicts (no forest trial is done)
+        Assert.True(forestFull.PredictsTest);
+        Assert.True(forestShort.PredictsTest);
+
+        // And once that forest trial is done, a short forest trial skips the test table
+        Assert.True(coordinator.Complete(forestFull.Trial!.Id, forestFull.Trial.Attempt, 0.5, [0.5]));
+        Assert.False(coordinator.Lease("w1", "0").PredictsTest);
+    }
+
+    [Fact]
     public void A_trial_below_the_full_budget_predicts_the_test_table_only_until_a_full_budget_trial_is_done()
     {
         // Given a search whose full budget is 400 rounds

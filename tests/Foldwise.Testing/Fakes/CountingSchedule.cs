@@ -18,6 +18,9 @@ public sealed class CountingSchedule(string family = FamilyNames.LightGbm, int b
     /// <summary>The budget of the trials proposed from now on.</summary>
     public int Budget { get; set; } = budget;
 
+    /// <summary>The family of the trials proposed from now on.</summary>
+    public string Family { get; set; } = family;
+
     public void Observe(TrialRecord trial) => Observed.Add(trial);
 
     public TrialPlan? NextPlan()
@@ -28,6 +31,6 @@ public sealed class CountingSchedule(string family = FamilyNames.LightGbm, int b
         }
 
         proposed++;
-        return new TrialPlan(family, ParameterSet.Of([new("x", proposed)]), Budget, 0, null, "counting");
+        return new TrialPlan(Family, ParameterSet.Of([new("x", proposed)]), Budget, 0, null, "counting");
     }
 }
