@@ -6,15 +6,12 @@ namespace Foldwise.Cli.Output;
 
 /// <summary>
 /// Shows a long preparation step's progress: on a terminal one line rewritten in place and wiped before the next
-/// output; otherwise a plain line at most every <see cref="PlainInterval"/>, so a log shows the step is alive.
+/// output; otherwise a plain line at most every <see cref="StepThrottle.Interval"/>, so a log shows the step is alive.
 /// </summary>
 internal sealed class StepLine(IAnsiConsole console)
 {
-    public static readonly TimeSpan PlainInterval = TimeSpan.FromSeconds(10);
-
+    private readonly StepThrottle plain = new();
     private int shownWidth;
-    private TimeSpan? lastPlain;
-    private (PreparationStep, string)? lastStep;
 
     private bool InPlace => console.Profile.Capabilities.Interactive && console.Profile.Capabilities.Ansi;
 
@@ -28,14 +25,8 @@ internal sealed class StepLine(IAnsiConsole console)
             return;
         }
 
-        if (lastStep != (step.Step, step.Subject))
+        if (plain.Due(step))
         {
-            (lastStep, lastPlain) = ((step.Step, step.Subject), null);
-        }
-
-        if (lastPlain is null || step.Elapsed - lastPlain >= PlainInterval)
-        {
-            lastPlain = step.Elapsed;
             console.Profile.Out.Writer.WriteLine(text);
         }
     }

@@ -8,16 +8,14 @@ namespace Foldwise.Cli.Output;
 /// </summary>
 public sealed class WorkerLines(TextWriter output) : IProgress<SearchEvent>
 {
-    /// <summary>A fetch's progress is shown at most this often: a worker's screen is a plain log.</summary>
-    public static readonly TimeSpan StepInterval = TimeSpan.FromSeconds(5);
-
-    private TimeSpan? lastStep;
+    // A worker's screen is a plain log: a fetch's progress is shown at most every StepThrottle.Interval.
+    private readonly StepThrottle steps = new();
 
     public void Report(SearchEvent value)
     {
         string? line = value switch
         {
-            StepProgress p => PacedStep(p),
+            StepProgress p when steps.Due(p) => StepLine.Describe(p),
             SlotFoldFitted f when f.IsLong => $"Slot {f.Slot}: trial {f.TrialId} fold {f.Fold + 1} of {f.Folds} fitted after {f.Elapsed.TotalSeconds:F0} s",
             WorkerStarting s => $"Worker {s.Name} joining {s.Join} from {s.Advertise}" + (s.MutualTls ? " (mutual TLS)" : " (no certificate)") + "; Ctrl-C to leave",
             WorkerJoined j => $"Joined the cluster at {j.Join} as {j.Name} with {j.Slots} slot(s), {j.Threads} thread(s) each",
@@ -47,16 +45,5 @@ public sealed class WorkerLines(TextWriter output) : IProgress<SearchEvent>
                 output.WriteLine(line);
             }
         }
-    }
-
-    private string? PacedStep(StepProgress step)
-    {
-        if (lastStep is { } last && step.Elapsed > last && step.Elapsed - last < StepInterval)
-        {
-            return null;
-        }
-
-        lastStep = step.Elapsed;
-        return StepLine.Describe(step);
     }
 }
