@@ -34,15 +34,13 @@ if (options.Part != "report")
 
     // Test predictions are part of every trial but not of the comparison: a 50-row test slice keeps them cheap
     // (a CSV table's test file is given small instead: its category columns are aligned with the whole test table).
-    var testRows = test.ToRows();
-    var testSlice = options.Csv is not null || testRows.RowCount <= 50 ? testRows : new Foldwise.Core.Data.SparseRowMatrix(50, testRows.ColumnCount, testRows.RowStarts[..51],
-        testRows.ColumnIndices[..testRows.RowStarts[50]], testRows.Values[..testRows.RowStarts[50]]);
     double randomCompute = (double)options.RandomTrials * options.FullBudget * train.RowCount;
     foreach (int seed in options.SeedList)
     {
         var metric = Metric.Rmsle;
         var folds = StratifiedFoldPlanner.Create([.. train.Target.Select(metric.Forward)], 5, new SearchSeeds(seed).FoldPlan);
-        var data = TrialData.From(train, test, folds, metric) with { Test = testSlice };
+        var whole = TrialData.From(train, test, folds, metric);
+        var data = options.Csv is not null ? whole : TestSlice.First(whole, 50);
         string randomPath = Path.Combine(options.Out, options.RandomFile(seed));
         var random = Trace.ReadIfComplete(randomPath, options.RandomTrials);
         if (options.Part == "costs")
