@@ -47,7 +47,7 @@ public static class KeptScoring
         var read = clock.Elapsed;
 
         var metric = Metric.For(definition.Metric);
-        var data = TrialData.From(train, rows, header.Folds, metric);
+        var data = TrialData.From(train, rows, header.Folds, metric) with { LevelCodeFamilies = definition.LevelCodeFamilies() };
         var trials = store.LoadTrials().ToDictionary(t => t.Id);
         var predictions = kept.Members.Select((member, i) => Member(data, trials, definition, member, models[i], threads)).ToList();
         var blended = BlendStage.Combine([.. kept.Members.Select(m => m.Weight)], predictions);
@@ -74,7 +74,7 @@ public static class KeptScoring
         {
             var trainRows = folds.TrainRows(f);
             int seed = SearchSeeds.Fold(fit.Seed, f);
-            var job = new FoldJob(data, f, trainRows, folds.ValidationRows(f), fit.Run, fit.Budget, seed, threads, data.InputsFor(trainRows, seed));
+            var job = new FoldJob(data, f, trainRows, folds.ValidationRows(f), fit.Run, fit.Budget, seed, threads, data.InputsFor(trainRows, seed, member.Family));
             var prediction = keeper.PredictKept(job, models[f]);
             for (int i = 0; i < mean.Length; i++)
             {
