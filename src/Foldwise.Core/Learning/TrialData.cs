@@ -32,8 +32,11 @@ public sealed record TrialData(
     public ImmutableArray<string> LevelCodeFamilies { get; init; } = FamilyDescriptors.LevelCodeFamilies;
 
     /// <summary>One fold's inputs for <paramref name="family"/>, encoded from that fold's training rows only.</summary>
-    public FoldInputs InputsFor(ImmutableArray<int> trainRows, int seed, string family) =>
-        FoldEncoder.Prepare(this, trainRows, seed, EncodingOptions.Default, FewLevelsFor(family));
+    public FoldInputs InputsFor(ImmutableArray<int> trainRows, int seed, string family) => InputsFor(trainRows, seed, FewLevelsFor(family));
+
+    /// <summary>One fold's inputs with few-level category columns in the form <paramref name="fewLevels"/>, encoded from that fold's training rows only.</summary>
+    public FoldInputs InputsFor(ImmutableArray<int> trainRows, int seed, CategoryEncodingKind fewLevels) =>
+        FoldEncoder.Prepare(this, trainRows, seed, EncodingOptions.Default, fewLevels);
 
     /// <summary>What a few-level category column becomes for <paramref name="family"/>.</summary>
     public CategoryEncodingKind FewLevelsFor(string family) =>

@@ -82,6 +82,21 @@ public sealed class FoldEncoderTests
     }
 
     [Fact]
+    public void The_test_rows_cells_do_not_depend_on_the_seed()
+    {
+        // Given a target-mean encoded column and fold 0's training rows
+        var (data, trainRows, _) = Scenario(TargetMean);
+
+        // When the fold is encoded with two seeds
+        var one = FoldEncoder.Prepare(data, trainRows, seed: 7, TargetMean);
+        var other = FoldEncoder.Prepare(data, trainRows, seed: 8, TargetMean);
+
+        // Then the seed moved the training rows' inner-fold means but no test cell (kept scoring shares one fold's encoded new rows across seeds)
+        Assert.NotEqual(one.Train.Values, other.Train.Values);
+        AssertSameCells(one.Test, other.Test);
+    }
+
+    [Fact]
     public void Gives_kept_levels_missing_and_other_an_indicator_each_and_sends_rare_and_unseen_levels_to_other()
     {
         // Given levels a (3 rows), b (3 rows), rare c (1 row) and gaps, with a minimum count of 2
