@@ -7,8 +7,8 @@ using Foldwise.Core.Search;
 namespace Foldwise.Tuning;
 
 /// <summary>
-/// Predicts the new rows with every kept member's fold models. Each fold's inputs are prepared once
-/// (<see cref="SharedFoldInputs"/>); the (fold, member) predictions are handed out fold by fold to up to
+/// Predicts the new rows with every kept member's fold models. Each fold's inputs are prepared once for each form of
+/// few-level category columns the members' families read (<see cref="SharedFoldInputs"/>); the (fold, member) predictions are handed out fold by fold to up to
 /// <c>threads</c> threads, so only the folds being scored hold their encoded rows; each member's fold predictions
 /// are then averaged in fold order, so the result is the same, bit for bit, at any thread count.
 /// </summary>
@@ -28,8 +28,10 @@ internal static class KeptFoldScoring
             predictions[m] = new double[foldCount][];
         }
 
-        // A fold's inputs are encoded by the first thread that needs them and dropped once its last member is scored.
-        var encodings = new Lazy<SharedFoldInputs>?[foldCount];
+        // A fold's inputs (one set per form of few-level columns) are encoded by the first thread that needs them and
+        // dropped once its last member is scored.
+        var forms = scorers.Select(s => s.FewLevels).Distinct().ToArray();
+        var encodings = new Lazy<SharedFoldInputs>[]?[foldCount];
         var left = new int[foldCount];
         long encodeTicks = 0;
         long predictTicks = 0;
@@ -37,13 +39,13 @@ internal static class KeptFoldScoring
         {
             int fold = f;
             left[f] = members;
-            encodings[f] = new(() =>
+            encodings[f] = [.. forms.Select(form => new Lazy<SharedFoldInputs>(() =>
             {
                 long start = Stopwatch.GetTimestamp();
-                var shared = SharedFoldInputs.Encode(data, folds.TrainRows(fold), FoldSeed(scorers[0], fold));
+                var shared = SharedFoldInputs.Encode(data, folds.TrainRows(fold), FoldSeed(scorers.First(s => s.FewLevels == form), fold), form);
                 Interlocked.Add(ref encodeTicks, Stopwatch.GetTimestamp() - start);
                 return shared;
-            });
+            }))];
         }
 
         // LightGBM keeps one thread count per process: every prediction here uses the same one.
@@ -57,7 +59,7 @@ internal static class KeptFoldScoring
                 int m = item % members;
                 var scorer = scorers[m];
                 int seed = FoldSeed(scorer, f);
-                var shared = encodings[f]!.Value;
+                var shared = encodings[f]![Array.IndexOf(forms, scorer.FewLevels)].Value;
                 long start = Stopwatch.GetTimestamp();
                 var inputs = shared.For(seed);
                 long encoded = Stopwatch.GetTimestamp();

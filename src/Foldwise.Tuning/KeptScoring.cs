@@ -48,9 +48,9 @@ public static class KeptScoring
         var read = clock.Elapsed;
 
         var metric = Metric.For(definition.Metric);
-        var data = TrialData.From(train, rows, header.Folds, metric);
+        var data = TrialData.From(train, rows, header.Folds, metric) with { LevelCodeFamilies = definition.LevelCodeFamilies() };
         var trials = store.LoadTrials().ToDictionary(t => t.Id);
-        var scorers = kept.Members.Select((member, i) => Scorer(trials, definition, member, models[i], data.Folds.FoldCount)).ToList();
+        var scorers = kept.Members.Select((member, i) => Scorer(trials, definition, member, models[i], data.Folds.FoldCount, data.FewLevelsFor(member.Family))).ToList();
         var prepared = clock.Elapsed;
 
         var (predictions, work) = KeptFoldScoring.Predict(data, scorers, threads);
@@ -62,13 +62,13 @@ public static class KeptScoring
         return new ScoringSummary(Path.GetFullPath(outPath), rows.RowCount, kept, read, prepared - read, scored - prepared, took - scored, took, work);
     }
 
-    private static KeptScorer Scorer(Dictionary<int, TrialRecord> trials, Core.Definition.SearchDefinition definition, KeptMember member, IReadOnlyList<byte[]> models, int folds)
+    private static KeptScorer Scorer(Dictionary<int, TrialRecord> trials, Core.Definition.SearchDefinition definition, KeptMember member, IReadOnlyList<byte[]> models, int folds, Core.Encodings.CategoryEncodingKind fewLevels)
     {
         var keeper = LearnerCatalog.BuiltIn.Get(member.Family) as IKeepsModels
             ?? throw new InvalidOperationException($"the {member.Family} family cannot use kept models");
         var trial = trials.GetValueOrDefault(member.TrialId) ?? throw new StoreException($"the kept trial {member.TrialId} is missing from the store");
         return models.Count == folds
-            ? new KeptScorer(keeper, TrialFit.Refit(trial, trials, definition), models)
+            ? new KeptScorer(keeper, TrialFit.Refit(trial, trials, definition), models, fewLevels)
             : throw new InvalidOperationException($"trial {member.TrialId} kept {models.Count} fold models for {folds} folds");
     }
 }

@@ -30,7 +30,7 @@ public sealed class CategoryInputTests
 
         // When one fold is fitted on its encoded inputs
         var trainRows = data.Folds.TrainRows(0);
-        var job = TinyTables.Job(data, family, TinyTables.Parameters(family), budget: 100) with { Inputs = data.InputsFor(trainRows, 7) };
+        var job = TinyTables.Job(data, family, TinyTables.Parameters(family), budget: 100) with { Inputs = data.InputsFor(trainRows, 7, family) };
         var prediction = learner.Fit(job, CancellationToken.None);
 
         // Then each level's rows are predicted near that level's target, which only the encoding can tell apart

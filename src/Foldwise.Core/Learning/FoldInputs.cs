@@ -33,6 +33,12 @@ public sealed class FoldInputs
 
     public int ColumnCount => Train.ColumnCount;
 
+    /// <summary>
+    /// Columns holding a category's slot code (<see cref="CategoryEncodingKind.LevelCodes"/>), ascending: the learner
+    /// declares them categorical. Empty when every category column reached these inputs in another form.
+    /// </summary>
+    public ImmutableArray<int> LevelCodeColumns { get; init; } = [];
+
     /// <summary>True when some cell of either table is missing (NaN).</summary>
     public bool HasMissing => ContainsNaN(Train.Values) || ContainsNaN(Test.Values);
 
@@ -65,7 +71,7 @@ public sealed class FoldInputs
             case FamilyInput.Scaled:
                 var imputed = Imputed(trainRows);
                 var scaling = ColumnScaling.Learn(imputed.Train, trainRows);
-                return new FoldInputs(scaling.Apply(imputed.Train), scaling.Apply(imputed.Test));
+                return new FoldInputs(scaling.Apply(imputed.Train), scaling.Apply(imputed.Test)) { LevelCodeColumns = imputed.LevelCodeColumns };
             default:
                 throw new ArgumentOutOfRangeException(nameof(input), input, "unknown family input");
         }

@@ -3,6 +3,7 @@ using Foldwise.Core.Data;
 using Foldwise.Core.Encodings;
 using Foldwise.Core.Folds;
 using Foldwise.Core.Metrics;
+using Foldwise.Core.Spaces;
 
 namespace Foldwise.Core.Learning;
 
@@ -22,6 +23,22 @@ public sealed record TrialData(
     public static TrialData From(FeatureTable train, FeatureTable test, FoldPlan folds, Metric metric) =>
         new(train.ToRows(), [.. train.Target.Select(metric.Forward)], test.ToRows(), folds, metric, TrialCategories.From(train, test, EncodingOptions.Default));
 
-    /// <summary>One fold's learner inputs, encoded from that fold's training rows only.</summary>
-    public FoldInputs InputsFor(ImmutableArray<int> trainRows, int seed) => FoldEncoder.Prepare(this, trainRows, seed, EncodingOptions.Default);
+    /// <summary>
+    /// Families that read each few-level category column as one column of level codes and split on it themselves
+    /// (<see cref="CategoryEncodingKind.LevelCodes"/>); every other family reads indicator columns. By default the
+    /// families whose descriptor reads level codes first (<see cref="FamilyDescriptor.FewLevelForms"/>); a search's
+    /// definition may choose otherwise.
+    /// </summary>
+    public ImmutableArray<string> LevelCodeFamilies { get; init; } = FamilyDescriptors.LevelCodeFamilies;
+
+    /// <summary>One fold's inputs for <paramref name="family"/>, encoded from that fold's training rows only.</summary>
+    public FoldInputs InputsFor(ImmutableArray<int> trainRows, int seed, string family) => InputsFor(trainRows, seed, FewLevelsFor(family));
+
+    /// <summary>One fold's inputs with few-level category columns in the form <paramref name="fewLevels"/>, encoded from that fold's training rows only.</summary>
+    public FoldInputs InputsFor(ImmutableArray<int> trainRows, int seed, CategoryEncodingKind fewLevels) =>
+        FoldEncoder.Prepare(this, trainRows, seed, EncodingOptions.Default, fewLevels);
+
+    /// <summary>What a few-level category column becomes for <paramref name="family"/>.</summary>
+    public CategoryEncodingKind FewLevelsFor(string family) =>
+        LevelCodeFamilies.Contains(family) ? CategoryEncodingKind.LevelCodes : CategoryEncodingKind.Indicators;
 }
