@@ -28,12 +28,12 @@ internal static class FoldModelCost
         var target = train.Target.Select(Metric.Rmsle.Forward).ToArray();
         var data = TrialData.From(train, rows, StratifiedFoldPlanner.Create(target, 5, seed), Metric.Rmsle);
         var trainRows = data.Folds.TrainRows(0);
-        var inputs = data.InputsFor(trainRows, seed);
         Console.WriteLine($"fold 0 of the full demo: {trainRows.Length} training rows x {train.FeatureCount} columns; {rows.RowCount:N0} new rows; one thread");
         Console.WriteLine("family     budget   fit s   model MB  KB/round   kept model scores the new rows   largest difference from the fit's own | load");
         foreach (var (family, budget) in fits)
         {
             var keeper = (IKeepsModels)LearnerCatalog.BuiltIn.Get(family);
+            var inputs = data.InputsFor(trainRows, seed, family);
             var job = new FoldJob(data, 0, trainRows, data.Folds.ValidationRows(0), Middle(DefaultSpaces.For(family)), budget, seed, 1, inputs, PredictsTest: false);
             var clock = Stopwatch.StartNew();
             var kept = keeper.FitAndKeep(job, CancellationToken.None);
