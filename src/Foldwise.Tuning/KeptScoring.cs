@@ -74,7 +74,7 @@ public static class KeptScoring
         {
             var trainRows = folds.TrainRows(f);
             int seed = SearchSeeds.Fold(fit.Seed, f);
-            var job = new FoldJob(data, f, trainRows, folds.ValidationRows(f), fit.Run, fit.Budget, seed, threads, data.InputsFor(trainRows, seed));
+            var job = new FoldJob(data, f, trainRows, folds.ValidationRows(f), fit.Run, fit.Budget, seed, threads, data.InputsFor(f));
             var prediction = keeper.PredictKept(job, models[f]);
             for (int i = 0; i < mean.Length; i++)
             {

@@ -33,6 +33,12 @@ public sealed class FoldInputs
 
     public int ColumnCount => Train.ColumnCount;
 
+    /// <summary>
+    /// The fold of its table's plan these inputs were encoded for by <see cref="TrialData.InputsFor"/>; null when
+    /// built another way. Every trial of that fold reads inputs equal to these.
+    /// </summary>
+    public int? PlanFold { get; init; }
+
     /// <summary>True when some cell of either table is missing (NaN).</summary>
     public bool HasMissing => ContainsNaN(Train.Values) || ContainsNaN(Test.Values);
 

@@ -3,6 +3,7 @@ using Foldwise.Core.Data;
 using Foldwise.Core.Encodings;
 using Foldwise.Core.Folds;
 using Foldwise.Core.Metrics;
+using Foldwise.Core.Search;
 
 namespace Foldwise.Core.Learning;
 
@@ -22,6 +23,13 @@ public sealed record TrialData(
     public static TrialData From(FeatureTable train, FeatureTable test, FoldPlan folds, Metric metric) =>
         new(train.ToRows(), [.. train.Target.Select(metric.Forward)], test.ToRows(), folds, metric, TrialCategories.From(train, test, EncodingOptions.Default));
 
-    /// <summary>One fold's learner inputs, encoded from that fold's training rows only.</summary>
-    public FoldInputs InputsFor(ImmutableArray<int> trainRows, int seed) => FoldEncoder.Prepare(this, trainRows, seed, EncodingOptions.Default);
+    /// <summary>
+    /// One fold's learner inputs, encoded from that fold's training rows only. They depend on the fold alone, never on
+    /// a trial, so every trial of the fold trains on the same inputs and its binned rows can be reused.
+    /// </summary>
+    public FoldInputs InputsFor(int fold)
+    {
+        var inputs = FoldEncoder.Prepare(this, Folds.TrainRows(fold), SearchSeeds.Encoding(Folds.Seed, fold), EncodingOptions.Default);
+        return new FoldInputs(inputs.Train, inputs.Test) { PlanFold = fold };
+    }
 }

@@ -105,7 +105,7 @@ public sealed class FoldEncoderTests
         var table = TinyTables.FromColumns([("x", [1, 2, 3, 4])], [1, 2, 3, 4]);
         var data = TrialData.From(table, table, new FoldPlan(2, 0, [0, 1, 0, 1]), Metric.Rmse);
 
-        var inputs = data.InputsFor([0, 2], seed: 1);
+        var inputs = data.InputsFor(fold: 1);
 
         Assert.Same(data.Train, inputs.Train);
         Assert.Same(data.Test, inputs.Test);
@@ -118,7 +118,7 @@ public sealed class FoldEncoderTests
         var table = TinyTables.FromColumns([("x", [0, 4, float.NaN, 2, 8]), ("z", [1, 1, 1, 1, float.NaN])], [1, 2, 3, 4, 5]);
         var data = TrialData.From(table, table, new FoldPlan(2, 0, [0, 0, 0, 0, 1]), Metric.Rmse);
 
-        var imputed = data.InputsFor([0, 1, 2, 3], seed: 1).Imputed([0, 1, 2, 3]);
+        var imputed = data.InputsFor(fold: 1).Imputed([0, 1, 2, 3]);
 
         // Then the gap takes 2 and a third column flags it; z, missing only outside the training rows, gets its median 1 and no flag
         Assert.Equal(3, imputed.ColumnCount);
