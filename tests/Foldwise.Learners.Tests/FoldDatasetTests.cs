@@ -10,22 +10,27 @@ public sealed class FoldDatasetTests
     [Fact]
     public void Lends_one_binned_fold_to_every_trial_of_that_fold()
     {
-        // Given two trials of fold 0 with different parameters, and one of fold 1
+        // Given two trials of fold 0 with different rates and row samples, one of fold 1, and one of fold 0 with a larger smallest leaf
         var data = TinyTables.Data(rows: 300, testRows: 50);
         var first = TinyTables.Job(data, FamilyNames.LightGbm, seed: 1);
-        var second = TinyTables.Job(data, FamilyNames.LightGbm, TinyTables.Parameters(FamilyNames.LightGbm, rowFraction: 0.6), seed: 2);
+        var parameters = TinyTables.Parameters(FamilyNames.LightGbm, rowFraction: 0.6).Values.SetItem("learning_rate", 0.3);
+        var second = TinyTables.Job(data, FamilyNames.LightGbm, new ParameterSet(parameters), seed: 2);
         var otherFold = first with { Fold = 1, TrainRows = data.Folds.TrainRows(1), ValidationRows = data.Folds.ValidationRows(1) };
+        var otherLeaf = first with { Parameters = new ParameterSet(parameters.SetItem("min_leaf_rows", 40)) };
 
         // When each borrows its fold's Datasets
         var (a, aHeld) = FoldDatasets.Borrow(first, NativeFoldRows.From(first));
         var (b, bHeld) = FoldDatasets.Borrow(second, NativeFoldRows.From(second));
         var (c, cHeld) = FoldDatasets.Borrow(otherFold, NativeFoldRows.From(otherFold));
-        using var disposeAll = new Disposer(a, aHeld, b, bHeld, c, cHeld);
+        var (d, dHeld) = FoldDatasets.Borrow(otherLeaf, NativeFoldRows.From(otherLeaf));
+        using var disposeAll = new Disposer(a, aHeld, b, bHeld, c, cHeld, d, dHeld);
 
-        // Then the two trials of fold 0 share one native Dataset each for training and held-out rows; fold 1 has its own
+        // Then the two trials of fold 0 share one native Dataset each for training and held-out rows; fold 1 has its
+        // own, and so has the larger leaf (LightGBM drops the features that cannot split under it while binning)
         Assert.Equal(a.Handle.DangerousGetHandle(), b.Handle.DangerousGetHandle());
         Assert.Equal(aHeld.Handle.DangerousGetHandle(), bHeld.Handle.DangerousGetHandle());
         Assert.NotEqual(a.Handle.DangerousGetHandle(), c.Handle.DangerousGetHandle());
+        Assert.NotEqual(a.Handle.DangerousGetHandle(), d.Handle.DangerousGetHandle());
     }
 
     [Fact]
@@ -74,13 +79,22 @@ public sealed class FoldDatasetTests
         using var model = LightGbmFoldModel.Start(job, scoreEachRound: false, CancellationToken.None);
         double[] before = model.HeldOutPredictions();
 
-        // When more folds than are kept are binned for other tables, so this fold is dropped
-        for (int i = 0; i <= FoldDatasets.Capacity; i++)
+        // When the kept folds may take almost nothing, and other tables' folds are binned, so this fold is dropped
+        long capacity = FoldDatasets.CapacityBytes;
+        FoldDatasets.CapacityBytes = 1;
+        try
         {
-            var other = TinyTables.Job(data with { }, FamilyNames.LightGbm);
-            var (train, held) = FoldDatasets.Borrow(other, NativeFoldRows.From(other));
-            train.Dispose();
-            held.Dispose();
+            for (int i = 0; i < 3; i++)
+            {
+                var other = TinyTables.Job(data with { }, FamilyNames.LightGbm);
+                var (train, held) = FoldDatasets.Borrow(other, NativeFoldRows.From(other));
+                train.Dispose();
+                held.Dispose();
+            }
+        }
+        finally
+        {
+            FoldDatasets.CapacityBytes = capacity;
         }
 
         // Then the model still trains on its rows and predicts

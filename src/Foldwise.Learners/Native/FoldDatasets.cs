@@ -3,16 +3,20 @@ using Foldwise.Core.Learning;
 namespace Foldwise.Learners.Native;
 
 /// <summary>
-/// The binned training and held-out rows of each fold, built once and lent to every trial of that fold. Binning
-/// depends only on the fold's inputs and the Dataset settings (<see cref="LightGbmParameters.ForDataset"/>), never on a
-/// trial's parameters, so a trial that reuses them trains exactly as on rows binned afresh (<c>FoldDatasetTests</c>).
-/// A job whose rows or inputs are not its plan's fold's own gets Datasets of its own. The most recently used
-/// <see cref="Capacity"/> folds are kept; a lent Dataset lives until its last borrower is disposed.
+/// The binned training and held-out rows of each fold, built once and lent to every trial of that fold with the
+/// same Dataset settings (<see cref="LightGbmParameters.ForDataset"/>: the bins and the smallest leaf, so a
+/// promotion always reuses its rung's rows). A trial that reuses them trains exactly as on rows binned afresh
+/// (<c>FoldDatasetTests</c>).
+/// A job whose rows or inputs are not its plan's fold's own gets Datasets of its own. The most recently used folds
+/// are kept up to about <see cref="CapacityBytes"/>; a lent Dataset lives until its last borrower is disposed.
 /// </summary>
 internal static class FoldDatasets
 {
-    /// <summary>Folds kept: two searches of the usual five folds with room to spare.</summary>
-    public const int Capacity = 12;
+    /// <summary>
+    /// Memory the kept folds may take, by <see cref="Estimate"/>: on the full-size demo a fold took about 12 MB (the
+    /// process's working set grew by 60 MB per five folds), so this keeps the folds of its last seven or so candidates.
+    /// </summary>
+    public static long CapacityBytes { get; set; } = 512L << 20;
 
     private static readonly object Sync = new();
     private static readonly LinkedList<Entry> Recent = [];
@@ -39,17 +43,11 @@ internal static class FoldDatasets
             Recent.Remove(entry);
             Recent.AddFirst(entry);
             entry.Users++;
-            while (Recent.Count > Capacity && Recent.Last!.Value is var oldest)
-            {
-                Recent.RemoveLast();
-                oldest.Evicted = true;
-                oldest.DisposeIfUnused();
-            }
         }
 
         try
         {
-            var (train, validation) = entry.Binned(() => Bin(job, inputs, parameters));
+            var (train, validation) = entry.Binned(() => Bin(job, inputs, parameters), Estimate(inputs));
             return (train.Borrow(), validation.Borrow());
         }
         catch
@@ -68,6 +66,12 @@ internal static class FoldDatasets
             {
                 entry.Users--;
                 entry.DisposeIfUnused();
+                while (Recent.Count > 1 && Recent.Sum(e => e.Bytes) > CapacityBytes && Recent.Last!.Value is var oldest)
+                {
+                    Recent.RemoveLast();
+                    oldest.Evicted = true;
+                    oldest.DisposeIfUnused();
+                }
             }
         }
     }
@@ -79,6 +83,10 @@ internal static class FoldDatasets
         bool ownInputs = job.Inputs is null || job.Inputs.PlanFold == job.Fold;
         return ownInputs && job.Fold < folds.FoldCount && job.TrainRows.SequenceEqual(folds.TrainRows(job.Fold)) && job.ValidationRows.SequenceEqual(folds.ValidationRows(job.Fold));
     }
+
+    /// <summary>What a fold's Datasets take, generously: 8 bytes a stored cell and 2 kB a column (its bin bounds).</summary>
+    public static long Estimate(NativeFoldRows inputs) =>
+        (8L * (inputs.Train.Values.Length + inputs.Validation.Values.Length)) + (2048L * inputs.Train.ColumnCount);
 
     private static (LightGbmDataset Train, LightGbmDataset Validation) Bin(FoldJob job, NativeFoldRows inputs, string parameters)
     {
@@ -116,11 +124,19 @@ internal static class FoldDatasets
 
         public bool Evicted { get; set; }
 
-        public (LightGbmDataset Train, LightGbmDataset Validation) Binned(Func<(LightGbmDataset, LightGbmDataset)> bin)
+        /// <summary>The Datasets' <see cref="Estimate"/> once binned, else 0.</summary>
+        public long Bytes { get; private set; }
+
+        public (LightGbmDataset Train, LightGbmDataset Validation) Binned(Func<(LightGbmDataset, LightGbmDataset)> bin, long bytes)
         {
             lock (building)
             {
-                binned ??= bin();
+                if (binned is null)
+                {
+                    binned = bin();
+                    Bytes = bytes;
+                }
+
                 return binned.Value;
             }
         }
