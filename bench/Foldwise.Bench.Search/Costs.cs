@@ -65,7 +65,7 @@ internal static class Costs
             var clock = Stopwatch.StartNew();
             var trainRows = data.Folds.TrainRows(f);
             int foldSeed = SearchSeeds.Fold(seed, f);
-            var job = new FoldJob(data, f, trainRows, data.Folds.ValidationRows(f), parameters, budget, foldSeed, threads, data.InputsFor(f));
+            var job = new FoldJob(data, f, trainRows, data.Folds.ValidationRows(f), parameters, budget, foldSeed, threads, data.InputsFor(f, FamilyNames.LightGbm));
             using var model = LightGbmFoldModel.Start(job, scoreEachRound: false, CancellationToken.None);
             prepare += clock.Elapsed.TotalSeconds;
             clock.Restart();

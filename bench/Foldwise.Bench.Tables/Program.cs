@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using System.Diagnostics;
 using System.Globalization;
 using Foldwise.Core.Data;
@@ -11,8 +12,9 @@ using Foldwise.Learners;
 
 // Two measurements of tables with categories and gaps:
 //   read DIR                      — reading a 50,000-row table with 10 text columns against the same table numeric-coded
-//   cv TRAIN.csv ID TARGET DIR    — a 5-fold LightGBM trial through TrialExecutor (categories encoded inside each fold);
-//                                   writes DIR/folds.csv and DIR/foldwise_oof.csv for bench/peers/category_peers.py
+//   cv TRAIN.csv ID TARGET DIR    — two 5-fold LightGBM trials through TrialExecutor on the same folds (categories encoded
+//                                   inside each fold), few-level columns as indicator columns and then as level codes;
+//                                   writes DIR/folds.csv and DIR/foldwise_oof.csv (the indicator trial's) for bench/peers/category_peers.py
 var invariant = CultureInfo.InvariantCulture;
 switch (args.FirstOrDefault())
 {
@@ -79,11 +81,19 @@ static void CrossValidate(string path, string id, string target, string director
         ["row_fraction"] = 1,
         ["l2"] = 0,
     });
-    clock.Restart();
-    var outcome = new TrialExecutor(new LightGbmLearner()).Run(data, parameters, rounds, seed: 1, threads: 1, CancellationToken.None);
-    Console.WriteLine($"foldwise lightgbm, {rounds} rounds, lr 0.05, 31 leaves, 20 rows per leaf: OOF RMSLE {outcome.Score:F5} " +
-        $"(folds {string.Join(" ", outcome.FoldScores.Select(s => s.ToString("F4", CultureInfo.InvariantCulture)))}) in {clock.Elapsed.TotalSeconds:F1} s");
+    // Both forms of a few-level category column on the same folds and settings, one after the other.
+    TrialOutcome? indicators = null;
+    foreach (var (name, families) in new[] { ("indicator columns", ImmutableArray<string>.Empty), ("level codes, LightGBM's category splits", [FamilyNames.LightGbm]) })
+    {
+        clock.Restart();
+        var outcome = new TrialExecutor(new LightGbmLearner()).Run(data with { LevelCodeFamilies = families }, parameters, rounds, seed: 1, threads: 1, CancellationToken.None);
+        indicators ??= outcome;
+        Console.WriteLine($"foldwise lightgbm, {name}: {rounds} rounds, lr 0.05, 31 leaves, 20 rows per leaf: OOF RMSLE {outcome.Score:F5} " +
+            $"(folds {string.Join(" ", outcome.FoldScores.Select(s => s.ToString("F4", CultureInfo.InvariantCulture)))}) in {clock.Elapsed.TotalSeconds:F1} s");
+    }
+
+    var oof = indicators!;
     Directory.CreateDirectory(directory);
     File.WriteAllLines(Path.Combine(directory, "folds.csv"), ["id,fold", .. Enumerable.Range(0, train.RowCount).Select(r => $"{train.Ids[r]},{folds.FoldOfRow[r]}")]);
-    File.WriteAllLines(Path.Combine(directory, "foldwise_oof.csv"), ["id,log1p_prediction", .. Enumerable.Range(0, train.RowCount).Select(r => $"{train.Ids[r]},{outcome.OutOfFold[r].ToString("R", CultureInfo.InvariantCulture)}")]);
+    File.WriteAllLines(Path.Combine(directory, "foldwise_oof.csv"), ["id,log1p_prediction", .. Enumerable.Range(0, train.RowCount).Select(r => $"{train.Ids[r]},{oof.OutOfFold[r].ToString("R", CultureInfo.InvariantCulture)}")]);
 }

@@ -9,15 +9,24 @@ internal static class CellParser
     private const NumberStyles Styles = NumberStyles.Float;
     private const int QuotedTextLimit = 40;
 
+    // 9,999,999 < 2^24: every whole number of up to 7 digits is exact in a float.
+    private const int MaxExactDigits = 7;
+
     /// <summary>
     /// A numeric feature cell: true with its value (NaN for a missing cell), or false when the cell holds text.
-    /// "0" (by far the most common cell) is recognised without parsing.
+    /// "0" (by far the most common cell) and other whole numbers of up to 7 digits are read without the general parser.
     /// </summary>
     public static bool TryFeature(ReadOnlySpan<char> cell, TableRules rules, string file, long line, int ordinal, string column, out float value)
     {
         if (cell.Length == 1 && cell[0] == '0')
         {
             value = 0f;
+            return true;
+        }
+
+        if (cell.Length <= MaxExactDigits && !cell.IsEmpty && !cell.ContainsAnyExceptInRange('0', '9'))
+        {
+            value = WholeNumber(cell);
             return true;
         }
 
@@ -36,6 +45,18 @@ internal static class CellParser
 
         value = float.NaN;
         return cell.IsWhiteSpace() || rules.IsMissing(cell);
+    }
+
+    /// <summary>The value of up to <see cref="MaxExactDigits"/> digits: below 2^24, so the float is exact and equals what the general parser gives.</summary>
+    private static float WholeNumber(ReadOnlySpan<char> digits)
+    {
+        int number = 0;
+        foreach (char digit in digits)
+        {
+            number = (number * 10) + (digit - '0');
+        }
+
+        return number;
     }
 
     public static double Target(ReadOnlySpan<char> cell, TableRules rules, string file, long line, int ordinal, string column)

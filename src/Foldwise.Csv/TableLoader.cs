@@ -72,6 +72,15 @@ internal static class TableLoader
             levels[f] = declared.Contains(names[f]) ? new LevelColumnBuilder() : null;
         }
 
+        // Where a row's fields can be skipped as zero cells: numeric feature columns (not id, target, ignored or category columns).
+        var featureOf = new int[layout.FieldCount];
+        Array.Fill(featureOf, -1);
+        for (int f = 0; f < ordinals.Length; f++)
+        {
+            featureOf[ordinals[f]] = f;
+        }
+
+        var plainUntil = PlainUntil(featureOf, levels);
         while (csv.Read())
         {
             // Sylvan numbers data records from 1; the header is line 1 of the file.
@@ -98,43 +107,79 @@ internal static class TableLoader
                 target.Add(ReadTarget(path, csv, layout.TargetOrdinal, line, targetColumn!, metric, rules));
             }
 
-            for (int f = 0; f < ordinals.Length; f++)
+            // A row without quotes is split here, skipping runs of zero cells (ZeroRun); a quoted one field by field.
+            var raw = TrimLineEnd(csv.GetRawRecordSpan());
+            if (raw.IndexOf('"') < 0)
             {
-                var cell = csv.GetFieldSpan(ordinals[f]);
-                if (levels[f] is { } text)
+                int at = 0;
+                for (int ordinal = 0; ordinal < layout.FieldCount; ordinal++)
                 {
-                    text.Add(cell, rules, line);
-                    continue;
-                }
-
-                if (CellParser.TryFeature(cell, rules, path, line, ordinals[f], names[f], out float value))
-                {
-                    if (value != 0f)
+                    int skipped = ZeroRun.Skip(raw, at, plainUntil[ordinal] - ordinal, out int next);
+                    if (skipped > 0)
                     {
-                        columns.Add(f, row, value);
-                        if (float.IsNaN(value))
-                        {
-                            gaps.Note(f, cell, line);
-                        }
+                        ordinal += skipped - 1;
+                        at = next;
+                        continue;
                     }
 
-                    continue;
+                    int length = raw[at..].IndexOf(',');
+                    var cell = length < 0 ? raw[at..] : raw.Slice(at, length);
+                    at += cell.Length + 1;
+                    if (featureOf[ordinal] is int f and >= 0 && Feature(f, cell, row, line))
+                    {
+                        plainUntil = PlainUntil(featureOf, levels);
+                    }
                 }
 
-                if (training is not null && training.Numeric.Contains(names[f]))
-                {
-                    throw new InputException(
-                        path, $"column '{names[f]}' holds only numbers in {training.Path} but the text {CellParser.Quote(cell)} here", line, ordinals[f] + 1);
-                }
-
-                // The first text cell: the column is a category column, its earlier numbers become levels.
-                text = new LevelColumnBuilder();
-                text.AddNumbers(row, columns.Rows(f), columns.Values(f));
-                text.NoteEarlierGaps(gaps.FirstEmptyLine[f], gaps.FirstWordLine[f], gaps.FirstWord[f]);
-                columns.Clear(f);
-                text.Add(cell, rules, line);
-                levels[f] = text;
+                continue;
             }
+
+            for (int f = 0; f < ordinals.Length; f++)
+            {
+                if (Feature(f, csv.GetFieldSpan(ordinals[f]), row, line))
+                {
+                    plainUntil = PlainUntil(featureOf, levels);
+                }
+            }
+        }
+
+        // Reads one feature cell; true when it turned a numeric column into a category column.
+        bool Feature(int f, ReadOnlySpan<char> cell, int row, long line)
+        {
+            if (levels[f] is { } text)
+            {
+                text.Add(cell, rules, line);
+                return false;
+            }
+
+            if (CellParser.TryFeature(cell, rules, path, line, ordinals[f], names[f], out float value))
+            {
+                if (value != 0f)
+                {
+                    columns.Add(f, row, value);
+                    if (float.IsNaN(value))
+                    {
+                        gaps.Note(f, cell, line);
+                    }
+                }
+
+                return false;
+            }
+
+            if (training is not null && training.Numeric.Contains(names[f]))
+            {
+                throw new InputException(
+                    path, $"column '{names[f]}' holds only numbers in {training.Path} but the text {CellParser.Quote(cell)} here", line, ordinals[f] + 1);
+            }
+
+            // The first text cell: the column is a category column, its earlier numbers become levels.
+            text = new LevelColumnBuilder();
+            text.AddNumbers(row, columns.Rows(f), columns.Values(f));
+            text.NoteEarlierGaps(gaps.FirstEmptyLine[f], gaps.FirstWordLine[f], gaps.FirstWord[f]);
+            columns.Clear(f);
+            text.Add(cell, rules, line);
+            levels[f] = text;
+            return true;
         }
 
         if (ids.Count == 0)
@@ -184,6 +229,30 @@ internal static class TableLoader
         }
 
         return new FeatureTable(path, ids, numericNames.ToImmutable(), numeric.ToImmutable(), target, categoryNames.ToImmutable(), categories.ToImmutable());
+    }
+
+    /// <summary>For each field, the first field at or after it that is not a numeric feature column: zero runs stop there.</summary>
+    private static int[] PlainUntil(int[] featureOf, LevelColumnBuilder?[] levels)
+    {
+        var until = new int[featureOf.Length + 1];
+        until[featureOf.Length] = featureOf.Length;
+        for (int o = featureOf.Length - 1; o >= 0; o--)
+        {
+            until[o] = featureOf[o] >= 0 && levels[featureOf[o]] is null ? until[o + 1] : o;
+        }
+
+        return until;
+    }
+
+    private static ReadOnlySpan<char> TrimLineEnd(ReadOnlySpan<char> record)
+    {
+        int end = record.Length;
+        while (end > 0 && record[end - 1] is '\n' or '\r')
+        {
+            end--;
+        }
+
+        return record[..end];
     }
 
     private static string ReadId(string path, CsvDataReader csv, int ordinal, long line, Dictionary<string, long> lineOfId, TableRules rules)

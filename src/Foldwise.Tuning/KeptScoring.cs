@@ -13,7 +13,8 @@ namespace Foldwise.Tuning;
 /// <summary>
 /// Scores a table of new rows with a search's kept blend: each member's fold models predict the rows, prepared per fold
 /// from the stored training table exactly as in the search (the same encodings, imputation and scaling, learnt from
-/// the fold's training rows), the fold models are averaged and the members weighted as the blend said. The file is
+/// the fold's training rows), the fold models are averaged and the members weighted as the blend said (see
+/// <see cref="KeptFoldScoring"/> for how the work is shared out). The file is
 /// written under the search's prediction header; nothing is written when any input is wrong.
 /// </summary>
 public static class KeptScoring
@@ -47,41 +48,27 @@ public static class KeptScoring
         var read = clock.Elapsed;
 
         var metric = Metric.For(definition.Metric);
-        var data = TrialData.From(train, rows, header.Folds, metric);
+        var data = TrialData.From(train, rows, header.Folds, metric) with { LevelCodeFamilies = definition.LevelCodeFamilies() };
         var trials = store.LoadTrials().ToDictionary(t => t.Id);
-        var predictions = kept.Members.Select((member, i) => Member(data, trials, definition, member, models[i], threads)).ToList();
+        var scorers = kept.Members.Select((member, i) => Scorer(trials, definition, member, models[i], data.Folds.FoldCount, data.FewLevelsFor(member.Family))).ToList();
+        var prepared = clock.Elapsed;
+
+        var (predictions, work) = KeptFoldScoring.Predict(data, scorers, threads);
+        var scored = clock.Elapsed;
+
         var blended = BlendStage.Combine([.. kept.Members.Select(m => m.Weight)], predictions);
         PredictionFile.Write(outPath, definition.Data.IdColumn, definition.Data.TargetColumn, rows.Ids, [.. blended.Select(metric.Inverse)]);
-        return new ScoringSummary(Path.GetFullPath(outPath), rows.RowCount, kept, read, clock.Elapsed);
+        var took = clock.Elapsed;
+        return new ScoringSummary(Path.GetFullPath(outPath), rows.RowCount, kept, read, prepared - read, scored - prepared, took - scored, took, work);
     }
 
-    /// <summary>One member's prediction of the rows: the mean of its fold models', each on its fold's own inputs.</summary>
-    private static double[] Member(TrialData data, Dictionary<int, TrialRecord> trials, Core.Definition.SearchDefinition definition, KeptMember member, IReadOnlyList<byte[]> models, int threads)
+    private static KeptScorer Scorer(Dictionary<int, TrialRecord> trials, Core.Definition.SearchDefinition definition, KeptMember member, IReadOnlyList<byte[]> models, int folds, Core.Encodings.CategoryEncodingKind fewLevels)
     {
         var keeper = LearnerCatalog.BuiltIn.Get(member.Family) as IKeepsModels
             ?? throw new InvalidOperationException($"the {member.Family} family cannot use kept models");
         var trial = trials.GetValueOrDefault(member.TrialId) ?? throw new StoreException($"the kept trial {member.TrialId} is missing from the store");
-        var fit = TrialFit.Refit(trial, trials, definition);
-        var folds = data.Folds;
-        if (models.Count != folds.FoldCount)
-        {
-            throw new InvalidOperationException($"trial {member.TrialId} kept {models.Count} fold models for {folds.FoldCount} folds");
-        }
-
-        // The same sum, in the same order, as the search's own test prediction (TrialExecutor).
-        var mean = new double[data.Test.RowCount];
-        for (int f = 0; f < folds.FoldCount; f++)
-        {
-            var trainRows = folds.TrainRows(f);
-            int seed = SearchSeeds.Fold(fit.Seed, f);
-            var job = new FoldJob(data, f, trainRows, folds.ValidationRows(f), fit.Run, fit.Budget, seed, threads, data.InputsFor(f));
-            var prediction = keeper.PredictKept(job, models[f]);
-            for (int i = 0; i < mean.Length; i++)
-            {
-                mean[i] += prediction[i] / folds.FoldCount;
-            }
-        }
-
-        return mean;
+        return models.Count == folds
+            ? new KeptScorer(keeper, TrialFit.Refit(trial, trials, definition), models, fewLevels)
+            : throw new InvalidOperationException($"trial {member.TrialId} kept {models.Count} fold models for {folds} folds");
     }
 }

@@ -91,7 +91,7 @@ public static class ModelKeeping
                 m => m.TrialId,
                 m => store.LoadVectors(m.TrialId)?.Test ?? throw new NotKeptException($"trial {m.TrialId}'s test predictions are missing from the store"));
             var data = TrialData.From(
-                TableFiles.Read(outDir, header.TrainHash, "training"), TableFiles.Read(outDir, header.TestHash, "test"), header.Folds, Metric.For(definition.Metric));
+                TableFiles.Read(outDir, header.TrainHash, "training"), TableFiles.Read(outDir, header.TestHash, "test"), header.Folds, Metric.For(definition.Metric)) with { LevelCodeFamilies = definition.LevelCodeFamilies() };
 
             // One thread per fit and the members side by side, as a worker's slots run (single-threaded fits, one per
             // core, were the fastest way to use a machine's cores in every case measured); the results do not depend on it.

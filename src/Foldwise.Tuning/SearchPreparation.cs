@@ -36,7 +36,7 @@ public static class SearchPreparation
         var report = TestLevelCount.Add(ColumnScreen.Screen(train, definition.Screening, Paced(PreparationStep.Screening, Path.GetFileName(definition.Data.Train), events)), train, test);
         var screenedTrain = ColumnScreen.Apply(report, train);
         var screenedTest = ColumnScreen.Apply(report, test);
-        events.Report(new ColumnsScreened(report, definition.Screening.MinNonZero));
+        events.Report(new ColumnsScreened(report, definition.Screening.MinNonZero, definition.Families));
         if (report.Kept.Length == 0 && report.Categories.Length == 0)
         {
             throw new InputException(definition.Data.Train, "screening dropped every feature column; nothing is left to learn from");

@@ -114,7 +114,8 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
         var history = store.LoadTrials();
         var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition), store, TimeProvider.System, Leases, history, header.SpentSeconds);
         var manifest = new SearchManifest(
-            header.SearchId, header.TrainHash, header.TestHash, header.Folds.FoldCount, header.Folds.Seed, [.. header.Folds.FoldOfRow], definition.Metric.ToString());
+            header.SearchId, header.TrainHash, header.TestHash, header.Folds.FoldCount, header.Folds.Seed, [.. header.Folds.FoldOfRow], definition.Metric.ToString(),
+            [.. definition.LevelCodeFamilies()]);
 
         using var linked = CancellationTokenSource.CreateLinkedTokenSource(cancellation, stopping.Abandon);
         using var stopRegistration = stopping.Stop.Register(coordinator.RequestStop);

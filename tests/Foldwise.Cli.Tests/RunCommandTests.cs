@@ -37,7 +37,8 @@ public sealed class RunCommandTests : IDisposable
         // Then the summary names the category column's levels and encoding, the test table's new level, and the gaps
         Assert.True(run.ExitCode == 0, run.Output);
         Assert.Contains("category region: 4 levels, each seen often enough to keep", run.Output, StringComparison.Ordinal);
-        Assert.Contains("one indicator column per kept level, 10.0% missing (a level of its own)", run.Output, StringComparison.Ordinal);
+        Assert.Contains("lightgbm: one column of level codes, grouped by LightGBM's own category splits; fasttree: one indicator column per kept level", run.Output, StringComparison.Ordinal);
+        Assert.Contains("10.0% missing", run.Output, StringComparison.Ordinal);
         Assert.Contains("the test table has 1 new level in 1 row", run.Output, StringComparison.Ordinal);
         Assert.Contains("f1: 12.5% missing", run.Output, StringComparison.Ordinal);
         Assert.Equal(4, File.ReadAllLines(Path.Combine(workspace.Out, "predictions.csv")).Length);

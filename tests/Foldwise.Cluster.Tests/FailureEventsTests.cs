@@ -26,7 +26,7 @@ public sealed class FailureEventsTests
         var events = new SyncEvents();
         var recorder = new MemoryRecorder();
         var session = new CoordinatorSession(
-            new SearchManifest("failures", "train", "test", 3, 1, [0, 1, 2], "Rmsle"),
+            new SearchManifest("failures", "train", "test", 3, 1, [0, 1, 2], "Rmsle", []),
             new SearchCoordinator(Definition, new CountingSchedule(), recorder, TimeProvider.System),
             recorder,
             events);

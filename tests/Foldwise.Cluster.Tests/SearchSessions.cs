@@ -33,7 +33,7 @@ internal static class SearchSessions
             Budget = new SearchBudget(trials, null),
         };
         var coordinator = new SearchCoordinator(definition, new CountingSchedule(), recorder, TimeProvider.System, leases);
-        var manifest = new SearchManifest($"{name}-{Guid.NewGuid():N}", trainHash, testHash, 3, 1, [.. folds.FoldOfRow], "Rmsle");
+        var manifest = new SearchManifest($"{name}-{Guid.NewGuid():N}", trainHash, testHash, 3, 1, [.. folds.FoldOfRow], "Rmsle", []);
         var session = new CoordinatorSession(manifest, coordinator, recorder, events, search);
         cluster.Coordinator.GetRequiredService<SessionRegistry>().Add(session);
         return session;

@@ -51,7 +51,7 @@ public sealed class StoreFaultTests
     }
 
     private static CoordinatorSession Session(MemoryRecorder recorder, IEnumerable<TrialRecord> history) => new(
-        new SearchManifest("full-disk", "train", "test", 3, 1, [0, 1, 2], "Rmsle"),
+        new SearchManifest("full-disk", "train", "test", 3, 1, [0, 1, 2], "Rmsle", []),
         new SearchCoordinator(Definition, new CountingSchedule(), recorder, TimeProvider.System, history: history),
         recorder);
 

@@ -10,23 +10,29 @@ namespace Foldwise.Learners.Tests;
 
 /// <summary>
 /// LightGBM on a table with text categories, encoded inside each fold, against scikit-learn's
-/// HistGradientBoostingRegressor with its own categorical splits (Debian python3-sklearn), same folds and settings:
+/// HistGradientBoostingRegressor (Debian python3-sklearn) with its own categorical splits and with one-hot columns, same folds and settings:
 /// reference/category_reference.json, written by reference/make_category_reference.py from reference/diamonds-2000.csv
 /// (2,000 rows of ggplot2's diamonds, MIT licence).
 /// </summary>
 public sealed class CategoryReferenceTests(ITestOutputHelper output)
 {
     /// <remarks>
-    /// Measured 2026-12-05: Foldwise 0.12195, scikit-learn 1.2.1 with one-hot columns 0.12127 (0.6 % apart), with its own
-    /// categorical splits 0.11709 (Foldwise 4.1 % behind). On 2,000 rows, grouping levels inside a split beats one
-    /// indicator per level; the check pins the engine against the same encoding tightly and the gap to native splits loosely.
+    /// Measured 2026-12-05 against scikit-learn 1.2.1's figures in the reference file (one-hot 0.12127, native categorical
+    /// 0.11709): Foldwise with indicator columns 0.12195 (0.6 % above one-hot), with level codes and LightGBM's own
+    /// category splits 0.11803 (0.8 % above native categorical). Each form is held to within 2 % of its own counterpart.
     /// </remarks>
-    [Fact]
-    public void Scores_within_two_percent_of_scikit_learns_boosting_on_one_hot_columns_and_five_of_its_native_categorical_splits()
+    [Theory]
+    [InlineData(true)]
+    [InlineData(false)]
+    public void Scores_within_two_percent_of_scikit_learns_boosting_with_the_same_kind_of_category_encoding(bool levelCodes)
     {
-        // Given diamonds with cut, color and clarity as text, log1p(price) scored, row r held out in fold r mod 5
+        // Given diamonds with cut, color and clarity as text, log1p(price) scored, row r held out in fold r mod 5, and
+        // LightGBM reading them as level codes (its own category splits) or as indicator columns
         var table = Diamonds();
-        var data = TrialData.From(table, table, new FoldPlan(5, 0, [.. Enumerable.Range(0, table.RowCount).Select(r => r % 5)]), Metric.Rmsle);
+        var data = TrialData.From(table, table, new FoldPlan(5, 0, [.. Enumerable.Range(0, table.RowCount).Select(r => r % 5)]), Metric.Rmsle)
+            with { LevelCodeFamilies = levelCodes ? [FamilyNames.LightGbm] : [] };
+
+        // scikit-learn 1.2.1 (Debian python3-sklearn) HistGradientBoostingRegressor fold scores, written by reference/make_category_reference.py
         var reference = JsonDocument.Parse(File.ReadAllBytes(Path.Combine(AppContext.BaseDirectory, "reference", "category_reference.json"))).RootElement;
         double native = reference.GetProperty("native_categorical_fold_scores").EnumerateArray().Average(e => e.GetDouble());
         double oneHot = reference.GetProperty("one_hot_fold_scores").EnumerateArray().Average(e => e.GetDouble());
@@ -38,11 +44,11 @@ public sealed class CategoryReferenceTests(ITestOutputHelper output)
         });
         var outcome = new TrialExecutor(LearnerCatalog.BuiltIn.Get(FamilyNames.LightGbm)).Run(data, parameters, budget: 200, seed: 3, threads: 1, CancellationToken.None);
 
-        // Then its mean fold RMSLE is at most 2 % above scikit-learn's on one-hot columns, and 5 % above its native categorical splits
+        // Then its mean fold RMSLE is at most 2 % above scikit-learn's with the same kind of encoding
         double ours = outcome.FoldScores.Average();
-        output.WriteLine($"Foldwise lightgbm {ours:F5}; scikit-learn native categorical {native:F5}, one-hot {oneHot:F5}");
-        Assert.True(ours <= 1.02 * oneHot, $"Foldwise {ours:F5} against scikit-learn's one-hot {oneHot:F5}");
-        Assert.True(ours <= 1.05 * native, $"Foldwise {ours:F5} against scikit-learn's native categorical {native:F5}");
+        double counterpart = levelCodes ? native : oneHot;
+        output.WriteLine($"Foldwise lightgbm ({(levelCodes ? "level codes" : "indicators")}) {ours:F5}; scikit-learn native categorical {native:F5}, one-hot {oneHot:F5}");
+        Assert.True(ours <= 1.02 * counterpart, $"Foldwise {ours:F5} against scikit-learn's {(levelCodes ? "native categorical" : "one-hot")} {counterpart:F5}");
     }
 
     /// <summary>Columns: carat, cut, color, clarity, depth, table, price, x, y, z, id (quoted text, plain numbers).</summary>

@@ -16,23 +16,25 @@ public sealed class SameResultsTests(QuickDemoRun run)
     /// present shape (800 × 400 at ~94 % zeros, region, sector and signing channel as text with some blank, 3,200 test
     /// rows; LightGBM through its C API). The drawn rates are those
     /// of every earlier pin (the proposals do not depend on the table); the scores and trial 6's parent moved with the table.
+    /// Since LightGBM reads few-level category columns as level codes (its own category splits), every LightGBM score
+    /// moved (all lower) and the FastTree scores, rates and parents stayed.
     /// </summary>
     private static readonly (int Id, string Family, int Budget, int Parent, double Score, double LearningRate)[] Pinned =
     [
-        (1, "lightgbm", 10, 0, 0.9981509237846948, 0.03825174661111661),
+        (1, "lightgbm", 10, 0, 0.9903792641285726, 0.03825174661111661),
         (2, "fasttree", 10, 0, 0.9227230223934788, 0.05612945601891969),
-        (3, "lightgbm", 10, 0, 0.9332876255413778, 0.07480987760228971),
+        (3, "lightgbm", 10, 0, 0.9256432877923599, 0.07480987760228971),
         (4, "fasttree", 10, 0, 1.0417428696841935, 0.010227135786265504),
-        (5, "lightgbm", 10, 0, 1.0257386437983975, 0.06541328683329678),
-        (6, "lightgbm", 30, 3, 0.8783486647831944, 0.07480987760228971),
+        (5, "lightgbm", 10, 0, 1.0072971503117834, 0.06541328683329678),
+        (6, "lightgbm", 30, 3, 0.866014327819857, 0.07480987760228971),
         (7, "fasttree", 10, 0, 0.8151794427766207, 0.27747637099356154),
         (8, "fasttree", 30, 7, 0.7966543148388304, 0.27747637099356154),
-        (9, "lightgbm", 10, 0, 0.8559961414709777, 0.13586422086456487),
-        (10, "lightgbm", 30, 9, 0.8081829960033908, 0.13586422086456487),
+        (9, "lightgbm", 10, 0, 0.8451911741465229, 0.13586422086456487),
+        (10, "lightgbm", 30, 9, 0.8010032063269218, 0.13586422086456487),
     ];
 
     /// <summary>SHA-256 of that run's predictions.csv after its header line (the rows: id, prediction; '\n' line ends).</summary>
-    private const string PinnedPredictions = "f5768a09cef3308dc1ab687c3da7ace4e2b0b95818e60acc2089567f23f1117c";
+    private const string PinnedPredictions = "ebf5d08cac2564e3daba51f188c56cf8f71d71d6a635aa858364ec005512864f";
 
     [Fact]
     public void The_quick_demo_search_gives_the_trials_scores_and_predictions_it_gave_before()

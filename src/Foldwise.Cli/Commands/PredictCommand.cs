@@ -12,7 +12,8 @@ public sealed class PredictCommand(IAnsiConsole console) : Command<PredictSettin
         var scored = KeptScoring.Predict(settings.Store, settings.Rows!, settings.Out!, settings.Threads ?? Environment.ProcessorCount);
         string members = string.Join(", ", scored.Kept.Members.Select(m => $"trial {m.TrialId} ({m.Family}, {m.Weight:F3})"));
         console.MarkupLine($"Wrote [bold]{Markup.Escape(scored.File)}[/]: {scored.Rows:N0} predictions from {Markup.Escape(members)} " +
-                           $"in {scored.Took.TotalSeconds:F1} s ({scored.Read.TotalSeconds:F1} s reading).");
+                           $"in {scored.Took.TotalSeconds:F1} s ({scored.Read.TotalSeconds:F1} s reading, {(scored.Prepare + scored.Score).TotalSeconds:F1} s preparing and scoring, " +
+                           $"{scored.Write.TotalSeconds:F1} s writing).");
         return ExitCodes.Ok;
     }
 }

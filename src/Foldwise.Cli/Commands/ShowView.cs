@@ -87,7 +87,7 @@ public static class ShowView
     /// <summary>What every fold did with the table's category columns and gaps (the same for every trial of the search).</summary>
     private static void RenderInputs(IAnsiConsole console, StoredSearch search)
     {
-        var lines = search.Screening is { } report ? ColumnNotes.Lines(report).ToList() : [];
+        var lines = search.Screening is { } report ? ColumnNotes.Lines(report, search.Definition.Families).ToList() : [];
         if (lines.Count == 0)
         {
             return;

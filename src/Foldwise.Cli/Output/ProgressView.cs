@@ -61,7 +61,7 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
                     $"Screening kept {s.Report.Kept.Length:N0} of {s.Report.ColumnsRead:N0} columns: dropped {s.Report.Count(Core.Screening.DropReason.Constant):N0} constant, " +
                     $"{s.Report.Count(Core.Screening.DropReason.Duplicate):N0} duplicate, {s.Report.Count(Core.Screening.DropReason.TooFewNonZero):N0} with fewer than {s.MinNonZero} non-zero cells" +
                     $"{DropCount(s.Report, Core.Screening.DropReason.AllMissing, "all missing")}{DropCount(s.Report, Core.Screening.DropReason.NearlyUnique, "nearly unique text")}");
-                foreach (string line in Core.Screening.ColumnNotes.Lines(s.Report))
+                foreach (string line in Core.Screening.ColumnNotes.Lines(s.Report, s.Families))
                 {
                     console.MarkupLine("  " + Markup.Escape(line));
                 }

@@ -52,7 +52,7 @@ public static class ScreeningSummary
         string more = report.Dropped.Length > NamesShown ? $"<p>… and {report.Dropped.Length - NamesShown:N0} more dropped columns (see the store's screening report).</p>" : "";
         string table = report.Dropped.Length == 0 ? "" :
             $"<table class=\"names\"><thead><tr><th>dropped column</th><th>why</th></tr></thead><tbody>{string.Concat(rows)}</tbody></table>{more}";
-        table += Inputs(report);
+        table += Inputs(report, search.Definition.Families);
         return new ChartSection(
             Id,
             "Columns kept and dropped before any learner saw them",
@@ -62,7 +62,7 @@ public static class ScreeningSummary
     }
 
     /// <summary>Each kept category column (levels, encoding, gaps, new test levels) and each numeric column with gaps.</summary>
-    private static string Inputs(ScreeningReport report)
+    private static string Inputs(ScreeningReport report, IReadOnlyList<Core.Definition.FamilySearch> families)
     {
         if (report.Categories.Length == 0 && report.Gaps.Length == 0)
         {
@@ -71,7 +71,7 @@ public static class ScreeningSummary
 
         var rows = report.Categories.Select(c =>
                 $"<tr><td>{WebUtility.HtmlEncode(c.Name)}</td><td>category: {c.Levels:N0} levels, {c.LevelsKept:N0} kept</td>" +
-                $"<td>{(c.Encoding == Core.Encodings.CategoryEncodingKind.Indicators ? "indicator per level" : "smoothed target mean (inner folds)")}</td>" +
+                $"<td>{WebUtility.HtmlEncode(ColumnNotes.Encoding(c.Encoding, families, Short))}</td>" +
                 $"<td>{c.MissingShare.ToString("P1", CultureInfo.InvariantCulture)}</td><td>{c.NewTestLevels:N0} in {c.NewTestRows:N0} rows</td></tr>")
             .Concat(report.Gaps.Take(NamesShown).Select(g =>
                 $"<tr><td>{WebUtility.HtmlEncode(g.Name)}</td><td>numeric</td><td>missing kept; median + indicator for families without NaN</td>" +
@@ -80,6 +80,13 @@ public static class ScreeningSummary
         return "<table class=\"names\"><thead><tr><th>column</th><th>kind</th><th>encoding (fitted inside each fold)</th><th>missing</th><th>new test levels</th></tr></thead>" +
             $"<tbody>{string.Concat(rows)}</tbody></table>{more}";
     }
+
+    private static string Short(Core.Encodings.CategoryEncodingKind kind) => kind switch
+    {
+        Core.Encodings.CategoryEncodingKind.Indicators => "indicator per level",
+        Core.Encodings.CategoryEncodingKind.TargetMean => "smoothed target mean (inner folds)",
+        _ => "level codes, LightGBM's category splits",
+    };
 
     private static string Reason(DroppedColumn d) => d.Reason switch
     {

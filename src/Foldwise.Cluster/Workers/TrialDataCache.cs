@@ -30,6 +30,6 @@ public sealed class TrialDataCache(IGrainFactory grains, TableCache tables)
         var test = await tables.GetAsync(manifest.TestHash, cancellation);
         var folds = new FoldPlan(manifest.FoldCount, manifest.FoldSeed, [.. manifest.FoldOfRow]);
         var metric = Metric.For(Enum.Parse<MetricKind>(manifest.Metric));
-        return TrialData.From(train, test, folds, metric);
+        return TrialData.From(train, test, folds, metric) with { LevelCodeFamilies = [.. manifest.LevelCodeFamilies] };
     }
 }

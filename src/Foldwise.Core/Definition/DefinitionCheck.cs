@@ -13,6 +13,9 @@ namespace Foldwise.Core.Definition;
 /// </summary>
 internal sealed class DefinitionCheck(string file, bool acceptRetired = false)
 {
+    /// <summary>True when reading the definition a store kept (which may come from an earlier version).</summary>
+    public bool ReadsStoredText => acceptRetired;
+
     public InputException Fail(TextPosition at, string problem) => new(file, problem, at.Line, at.Column);
 
     public InputException Fail(DefinitionNode node, string problem) => Fail(node.Position, problem);

@@ -15,7 +15,8 @@ public sealed class DefinitionComparer : IEqualityComparer<SearchDefinition>
         ReferenceEquals(x, y) || (x is not null && y is not null &&
         x.Name == y.Name && x.Data == y.Data && x.Metric == y.Metric && x.Folds == y.Folds && x.Seed == y.Seed &&
         x.Screening == y.Screening && x.Schedule == y.Schedule && x.Budget == y.Budget && x.Blend == y.Blend &&
-        Same(x.Families, y.Families, (a, b) => a.Family == b.Family && SameSpace(a.Space, b.Space) && a.BudgetUnder(x.Schedule) == b.BudgetUnder(y.Schedule)));
+        Same(x.Families, y.Families, (a, b) => a.Family == b.Family && SameSpace(a.Space, b.Space) && a.BudgetUnder(x.Schedule) == b.BudgetUnder(y.Schedule) &&
+                                                  a.FewLevelsForm == b.FewLevelsForm));
 
     public int GetHashCode(SearchDefinition obj) =>
         HashCode.Combine(obj.Name, obj.Data, obj.Folds, obj.Seed, obj.Schedule, obj.Budget, obj.Families.Length);

@@ -13,6 +13,12 @@ internal static class DefinitionNames
     public static readonly string[] BlendKeys = ["mode", "pool"];
     public static readonly string[] RangeKeys = ["whole", "linear", "log", "one_of"];
 
+    /// <summary>A family's key choosing how it reads few-level category columns (only for a family that can choose).</summary>
+    public const string FewLevelsKey = "few_level_categories";
+
+    public static readonly NameTable<Encodings.CategoryEncodingKind> FewLevelForms = new(
+        ("splits", Encodings.CategoryEncodingKind.LevelCodes), ("indicators", Encodings.CategoryEncodingKind.Indicators));
+
     public static readonly NameTable<MetricKind> Metrics = new(("rmsle", MetricKind.Rmsle), ("rmse", MetricKind.Rmse), ("mae", MetricKind.Mae));
 
     public static readonly NameTable<ScheduleKind> Schedules = new(("full", ScheduleKind.Full), ("asha", ScheduleKind.Asha), ("hyperband", ScheduleKind.Hyperband));

@@ -66,6 +66,11 @@ public static class DefinitionWriter
                             json.WriteNumber("full_budget", budget.FullBudget);
                         }
 
+                        if (FamilyDescriptors.Find(family.Family)?.FewLevelForms.Length > 1)
+                        {
+                            json.WriteString(DefinitionNames.FewLevelsKey, DefinitionNames.FewLevelForms.NameOf(family.FewLevelsForm));
+                        }
+
                         Space(json, family.Space);
                     });
                 }

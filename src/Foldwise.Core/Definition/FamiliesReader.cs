@@ -7,6 +7,7 @@ namespace Foldwise.Core.Definition;
 /// Reads <c>families</c>: each key a built-in family, each value an object naming only the parameters it changes
 /// (every other parameter keeps the family's default range, in the default order) and, optionally, the family's own
 /// <c>first_rung</c> and <c>full_budget</c> in its budget unit; what it leaves out comes from <paramref name="fallback"/>.
+/// A family that can read few-level category columns in more than one form also takes <c>few_level_categories</c>.
 /// </summary>
 internal sealed class FamiliesReader(DefinitionCheck check, IReadOnlyList<FamilySearch> builtIn, Func<string, FamilyBudget> fallback)
 {
@@ -27,7 +28,9 @@ internal sealed class FamiliesReader(DefinitionCheck check, IReadOnlyList<Family
 
     private FamilySearch Family(string family, DefinitionNode node, ParameterSpace standard)
     {
-        string[] names = [.. standard.Ranges.Select(r => r.Name), .. BudgetKeys];
+        var descriptor = FamilyDescriptors.Find(family);
+        bool chooses = descriptor?.FewLevelForms.Length > 1;
+        string[] names = [.. standard.Ranges.Select(r => r.Name), .. BudgetKeys, .. chooses ? [DefinitionNames.FewLevelsKey] : Array.Empty<string>()];
         var given = check.Object(node, names, "parameter", $"{family}'s parameters");
         var ranges = new RangeReader(check, FamilyDescriptors.Find(family));
         var space = new ParameterSpace([.. standard.Ranges.Select(r => given.Get(r.Name) is { } m ? ranges.Read(m.Value, r) : r)]);
@@ -45,6 +48,20 @@ internal sealed class FamiliesReader(DefinitionCheck check, IReadOnlyList<Family
                                              $"is below its first_rung ({budget.FirstRung}{(first is null ? ", from the schedule or the family's default" : "")}) {unit}");
         }
 
-        return new FamilySearch(family, space, budget);
+        return new FamilySearch(family, space, budget) { FewLevels = chooses ? FewLevels(given.Get(DefinitionNames.FewLevelsKey)?.Value, descriptor!) : null };
+    }
+
+    /// <summary>
+    /// The family's form for few-level category columns: the one given, else its default; a stored definition without
+    /// the key was written before families could choose, when every family read indicator columns.
+    /// </summary>
+    private Encodings.CategoryEncodingKind FewLevels(DefinitionNode? given, FamilyDescriptor descriptor)
+    {
+        if (given is null)
+        {
+            return check.ReadsStoredText ? Encodings.CategoryEncodingKind.Indicators : descriptor.FewLevelForms[0];
+        }
+
+        return check.Word(given, DefinitionNames.FewLevelForms);
     }
 }

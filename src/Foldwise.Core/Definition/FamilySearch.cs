@@ -1,3 +1,4 @@
+using Foldwise.Core.Encodings;
 using Foldwise.Core.Spaces;
 
 namespace Foldwise.Core.Definition;
@@ -10,6 +11,16 @@ namespace Foldwise.Core.Definition;
 /// </param>
 public sealed record FamilySearch(string Family, ParameterSpace Space, FamilyBudget? Budget = null)
 {
+    /// <summary>
+    /// What a few-level category column becomes for this family (<see cref="CategoryEncodingKind.Indicators"/> or
+    /// <see cref="CategoryEncodingKind.LevelCodes"/>); null: the family's default (<see cref="FamilyDescriptor.FewLevelForms"/>).
+    /// A definition file always resolves it; a stored definition written before families could choose reads as indicators.
+    /// </summary>
+    public CategoryEncodingKind? FewLevels { get; init; }
+
+    /// <summary>The form this family reads few-level category columns in: its own choice, else its descriptor's default.</summary>
+    public CategoryEncodingKind FewLevelsForm => FewLevels ?? FamilyDescriptors.Find(Family)?.FewLevelForms[0] ?? CategoryEncodingKind.Indicators;
+
     /// <summary>The family's rungs under <paramref name="schedule"/>: its own when it has them, else the schedule's.</summary>
     public FamilyBudget BudgetUnder(ScheduleOptions schedule)
     {

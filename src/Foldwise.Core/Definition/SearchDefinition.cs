@@ -29,6 +29,10 @@ public sealed record SearchDefinition
 
     public BlendOptions Blend { get; init; } = new();
 
+    /// <summary>The families of this search that read few-level category columns as level codes (their own category splits).</summary>
+    public ImmutableArray<string> LevelCodeFamilies() =>
+        [.. Families.Where(f => f.FewLevelsForm == Encodings.CategoryEncodingKind.LevelCodes).Select(f => f.Family)];
+
     /// <summary>A family's rungs in its own unit; a family the search does not name takes the schedule's range.</summary>
     public FamilyBudget BudgetOf(string family) =>
         Families.FirstOrDefault(f => f.Family == family)?.BudgetUnder(Schedule) ?? new FamilyBudget(Schedule.FirstRung, Schedule.FullBudget);

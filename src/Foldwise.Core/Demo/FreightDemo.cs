@@ -32,11 +32,37 @@ public static class FreightDemo
         var (trainRows, testRows, columns) = Shape(size);
         var random = new Random(seed);
         var scenario = new FreightScenario(columns, TargetDensity, random);
-        int width = Math.Max(4, columns.ToString().Length);
-        ImmutableArray<string> names = [.. Enumerable.Range(1, columns).Select(c => "lane_" + c.ToString("D" + width))];
+        var names = Names(columns);
         var train = Draw(scenario, random, trainRows, firstId: 1, names, $"freight demo train ({size}, seed {seed})", withTarget: true);
         var test = Draw(scenario, random, testRows, firstId: trainRows + 1, names, $"freight demo test ({size}, seed {seed})", withTarget: false);
         return (train, test);
+    }
+
+    /// <summary>
+    /// <paramref name="rows"/> further shippers of the world <see cref="Generate"/> draws for the same size and seed,
+    /// signed after its test table (their ids follow its last), without a target: new rows to score with a search's
+    /// kept models.
+    /// </summary>
+    public static FeatureTable NewRows(DemoSize size, int seed, int rows)
+    {
+        ArgumentOutOfRangeException.ThrowIfNegativeOrZero(rows);
+        var (trainRows, testRows, columns) = Shape(size);
+        var random = new Random(seed);
+        var scenario = new FreightScenario(columns, TargetDensity, random);
+
+        // The training and test shippers are drawn first, as Generate draws them, so the new ones follow them.
+        for (int r = 0; r < trainRows + testRows; r++)
+        {
+            scenario.Shipper(random);
+        }
+
+        return Draw(scenario, random, rows, firstId: trainRows + testRows + 1, Names(columns), $"freight demo new rows ({size}, seed {seed})", withTarget: false);
+    }
+
+    private static ImmutableArray<string> Names(int columns)
+    {
+        int width = Math.Max(4, columns.ToString().Length);
+        return [.. Enumerable.Range(1, columns).Select(c => "lane_" + c.ToString("D" + width))];
     }
 
     private static FeatureTable Draw(FreightScenario scenario, Random random, int rows, int firstId, ImmutableArray<string> names, string source, bool withTarget)

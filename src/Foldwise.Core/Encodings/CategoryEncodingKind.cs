@@ -8,4 +8,11 @@ public enum CategoryEncodingKind
 
     /// <summary>One column: the smoothed mean of the fitting-scale target of the row's level, out-of-fold for training rows.</summary>
     TargetMean,
+
+    /// <summary>
+    /// One column holding the row's slot (kept level, missing or "other", numbered from 0), declared categorical to a
+    /// learner that groups levels inside its own splits (LightGBM's category splits). A few-level column's alternative to
+    /// <see cref="Indicators"/>; only a family that can split on categories reads it.
+    /// </summary>
+    LevelCodes,
 }

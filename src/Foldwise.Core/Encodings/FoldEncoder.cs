@@ -11,10 +11,20 @@ namespace Foldwise.Core.Encodings;
 /// </summary>
 public static class FoldEncoder
 {
-    public static FoldInputs Prepare(TrialData data, ImmutableArray<int> trainRows, int seed, EncodingOptions options)
+    /// <param name="fewLevels">
+    /// What a few-level column (<see cref="CategoryEncodingKind.Indicators"/> by its level count) becomes for the family
+    /// that reads these inputs: indicator columns, or one <see cref="CategoryEncodingKind.LevelCodes"/> column.
+    /// </param>
+    public static FoldInputs Prepare(
+        TrialData data, ImmutableArray<int> trainRows, int seed, EncodingOptions options, CategoryEncodingKind fewLevels = CategoryEncodingKind.Indicators)
     {
         ArgumentNullException.ThrowIfNull(data);
         ArgumentNullException.ThrowIfNull(options);
+        if (fewLevels == CategoryEncodingKind.TargetMean)
+        {
+            throw new ArgumentOutOfRangeException(nameof(fewLevels), fewLevels, "few-level columns become indicators or level codes");
+        }
+
         var categories = data.Categories;
         if (categories.IsDefaultOrEmpty)
         {
@@ -23,11 +33,21 @@ public static class FoldEncoder
 
         var train = new ExtraCells(data.Train.RowCount, categories.Length);
         var test = new ExtraCells(data.Test.RowCount, categories.Length);
+        var codeColumns = ImmutableArray.CreateBuilder<int>();
         int offset = data.Train.ColumnCount;
         for (int g = 0; g < categories.Length; g++)
         {
             var category = categories[g];
             var slots = LevelSlots.Fit(category, trainRows, options.MinLevelCount);
+            if (category.Kind == CategoryEncodingKind.Indicators && fewLevels == CategoryEncodingKind.LevelCodes)
+            {
+                // Slot 0 is an absent cell: the value zero, which is the code of slot 0.
+                Codes(category.Train, slots, train, g, offset);
+                Codes(category.Test, slots, test, g, offset);
+                codeColumns.Add(offset++);
+                continue;
+            }
+
             if (category.Kind == CategoryEncodingKind.Indicators)
             {
                 Indicators(category.Train, slots, train, g, offset);
@@ -52,7 +72,7 @@ public static class FoldEncoder
             offset++;
         }
 
-        return new FoldInputs(train.AppendTo(data.Train, offset), test.AppendTo(data.Test, offset));
+        return new FoldInputs(train.AppendTo(data.Train, offset), test.AppendTo(data.Test, offset)) { LevelCodeColumns = codeColumns.ToImmutable() };
     }
 
     /// <summary>The fold's training rows split into inner folds by a seeded shuffle: (rows fitted on, rows encoded) for each.</summary>
@@ -74,6 +94,14 @@ public static class FoldEncoder
         for (int r = 0; r < codes.Length; r++)
         {
             cells.Set(r, group, offset + slots.Of(codes[r]), 1f);
+        }
+    }
+
+    private static void Codes(int[] codes, LevelSlots slots, ExtraCells cells, int group, int offset)
+    {
+        for (int r = 0; r < codes.Length; r++)
+        {
+            cells.Set(r, group, offset, slots.Of(codes[r]));
         }
     }
 

@@ -55,7 +55,7 @@ internal static class MedianImputation
             median[c] = gap[c] ? Median(present[c], trainRows.Length - missingInTrain[c]) : 0f;
         }
 
-        return new FoldInputs(Fill(train, median, flagOf, next), Fill(inputs.Test, median, flagOf, next));
+        return new FoldInputs(Fill(train, median, flagOf, next), Fill(inputs.Test, median, flagOf, next)) { LevelCodeColumns = inputs.LevelCodeColumns };
     }
 
     /// <summary>The median of <paramref name="nonZero"/> together with enough zeros to make <paramref name="count"/> values.</summary>

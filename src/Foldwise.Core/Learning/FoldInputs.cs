@@ -34,10 +34,19 @@ public sealed class FoldInputs
     public int ColumnCount => Train.ColumnCount;
 
     /// <summary>
-    /// The fold of its table's plan these inputs were encoded for by <see cref="TrialData.InputsFor"/>; null when
-    /// built another way. Every trial of that fold reads inputs equal to these.
+    /// Columns holding a category's slot code (<see cref="CategoryEncodingKind.LevelCodes"/>), ascending: the learner
+    /// declares them categorical. Empty when every category column reached these inputs in another form.
+    /// </summary>
+    public ImmutableArray<int> LevelCodeColumns { get; init; } = [];
+
+    /// <summary>
+    /// The fold of its table's plan these inputs were encoded for by <see cref="TrialData.InputsFor(int, CategoryEncodingKind)"/>;
+    /// null when built another way. Every trial of that fold reads inputs equal to these.
     /// </summary>
     public int? PlanFold { get; init; }
+
+    /// <summary>These inputs, marked as encoded for <paramref name="fold"/> of the plan.</summary>
+    internal FoldInputs OfPlanFold(int fold) => new(Train, Test) { LevelCodeColumns = LevelCodeColumns, PlanFold = fold };
 
     /// <summary>True when some cell of either table is missing (NaN).</summary>
     public bool HasMissing => ContainsNaN(Train.Values) || ContainsNaN(Test.Values);
@@ -71,7 +80,7 @@ public sealed class FoldInputs
             case FamilyInput.Scaled:
                 var imputed = Imputed(trainRows);
                 var scaling = ColumnScaling.Learn(imputed.Train, trainRows);
-                return new FoldInputs(scaling.Apply(imputed.Train), scaling.Apply(imputed.Test));
+                return new FoldInputs(scaling.Apply(imputed.Train), scaling.Apply(imputed.Test)) { LevelCodeColumns = imputed.LevelCodeColumns };
             default:
                 throw new ArgumentOutOfRangeException(nameof(input), input, "unknown family input");
         }

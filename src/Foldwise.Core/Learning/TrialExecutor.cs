@@ -44,11 +44,11 @@ public sealed class TrialExecutor
             : RunWhole(data, parameters, budget, seed, threads, foldDone, predictsTest, cancellation);
     }
 
-    private static FoldJob Job(TrialData data, int fold, ParameterSet parameters, int budget, int seed, int threads, bool predictsTest)
+    private static FoldJob Job(string family, TrialData data, int fold, ParameterSet parameters, int budget, int seed, int threads, bool predictsTest)
     {
         var trainRows = data.Folds.TrainRows(fold);
         int foldSeed = SearchSeeds.Fold(seed, fold);
-        return new FoldJob(data, fold, trainRows, data.Folds.ValidationRows(fold), parameters, budget, foldSeed, threads, data.InputsFor(fold), predictsTest);
+        return new FoldJob(data, fold, trainRows, data.Folds.ValidationRows(fold), parameters, budget, foldSeed, threads, data.InputsFor(fold, family), predictsTest);
     }
 
     private TrialOutcome RunWhole(
@@ -58,7 +58,7 @@ public sealed class TrialExecutor
         for (int f = 0; f < data.Folds.FoldCount; f++)
         {
             cancellation.ThrowIfCancellationRequested();
-            var job = Job(data, f, parameters, budget, seed, threads, predictsTest);
+            var job = Job(learner.Family, data, f, parameters, budget, seed, threads, predictsTest);
             pooled.Add(learner.Family, job, learner.Fit(job, cancellation));
             foldDone?.Invoke(f);
         }
@@ -77,7 +77,7 @@ public sealed class TrialExecutor
             for (int f = 0; f < data.Folds.FoldCount; f++)
             {
                 cancellation.ThrowIfCancellationRequested();
-                jobs.Add(Job(data, f, parameters, budget, seed, threads, predictsTest));
+                jobs.Add(Job(learner.Family, data, f, parameters, budget, seed, threads, predictsTest));
                 fits.Add(learner.Start(jobs[f], cancellation));
             }
 

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using Foldwise.Core.Definition;
+using Foldwise.Core.Encodings;
 
 namespace Foldwise.Core.Spaces;
 
@@ -22,6 +23,12 @@ public sealed record FamilyDescriptor(
 {
     /// <summary>Hard limits for parameter names no other family has; shared names take <see cref="ParameterLimit"/>'s table.</summary>
     public ImmutableDictionary<string, ParameterLimit> Limits { get; init; } = ImmutableDictionary<string, ParameterLimit>.Empty;
+
+    /// <summary>
+    /// The forms this family can read a few-level category column in, its default first: indicator columns, which
+    /// every family reads, or one column of level codes for a learner that splits on categories itself.
+    /// </summary>
+    public ImmutableArray<CategoryEncodingKind> FewLevelForms { get; init; } = [CategoryEncodingKind.Indicators];
 
     /// <summary>The limit this family puts on a parameter, or null when it has none.</summary>
     public ParameterLimit? LimitOf(string parameter) => Limits.GetValueOrDefault(parameter) ?? ParameterLimit.For(parameter);

@@ -35,7 +35,7 @@ internal static class FoldDatasets
             return Bin(job, inputs, parameters);
         }
 
-        var key = new Key(job.Data, job.Fold, job.Inputs is null, LightGbmParameters.ForDataset(job, withThreads: false));
+        var key = new Key(job.Data, job.Fold, job.Inputs is null, job.Features.ColumnCount, LightGbmParameters.ForDataset(job, withThreads: false));
         Entry entry;
         lock (Sync)
         {
@@ -104,12 +104,13 @@ internal static class FoldDatasets
     }
 
     /// <param name="Plain">The table's own features (a job without encoded inputs) rather than the fold's encoded ones.</param>
-    private sealed record Key(TrialData Data, int Fold, bool Plain, string Parameters)
+    /// <param name="Columns">The inputs' columns: few-level category columns as indicators or as level codes differ in them.</param>
+    private sealed record Key(TrialData Data, int Fold, bool Plain, int Columns, string Parameters)
     {
         public bool Equals(Key? other) =>
-            other is not null && ReferenceEquals(Data, other.Data) && Fold == other.Fold && Plain == other.Plain && Parameters == other.Parameters;
+            other is not null && ReferenceEquals(Data, other.Data) && Fold == other.Fold && Plain == other.Plain && Columns == other.Columns && Parameters == other.Parameters;
 
-        public override int GetHashCode() => HashCode.Combine(System.Runtime.CompilerServices.RuntimeHelpers.GetHashCode(Data), Fold, Plain, Parameters);
+        public override int GetHashCode() => HashCode.Combine(System.Runtime.CompilerServices.RuntimeHelpers.GetHashCode(Data), Fold, Plain, Columns, Parameters);
     }
 
     private sealed class Entry(Key key)

@@ -16,7 +16,7 @@ public sealed class DefinitionErrorTests
         { "\"first_rung\": 25", "\"first_rungs\": 25", "unknown key 'schedule.first_rungs'; did you mean 'first_rung'?", "\"first_rungs\"" },
         { "\"pool\": 3", "\"pool\": 3, \"weights\": 1", "unknown key 'blend.weights' (known keys here: mode, pool)", "\"weights\"" },
         { "\"lightgbm\": {", "\"lightgmb\": {", "unknown family 'families.lightgmb'; did you mean 'lightgbm'? (built-in families: lightgbm, fasttree, forest, gam, linear)", "\"lightgmb\"" },
-        { "\"leaves\": {", "\"leafs\": {", "unknown parameter 'families.lightgbm.leafs'; did you mean 'leaves'? (lightgbm's parameters: learning_rate, leaves, min_leaf_rows, feature_fraction, row_fraction, l2, first_rung, full_budget)", "\"leafs\"" },
+        { "\"leaves\": {", "\"leafs\": {", "unknown parameter 'families.lightgbm.leafs'; did you mean 'leaves'? (lightgbm's parameters: learning_rate, leaves, min_leaf_rows, feature_fraction, row_fraction, l2, first_rung, full_budget, few_level_categories)", "\"leafs\"" },
         { "\"fasttree\": {}", "\"fasttree\": { \"l2\": 1 }", "unknown parameter 'families.fasttree.l2'", "\"l2\"" },
         { "{ \"whole\": [8, 128] }", "{ \"uniform\": [8, 128] }", "unknown key 'families.lightgbm.leaves.uniform'", "\"uniform\"" },
         { "\"seed\": 7,", "\"seed\": 7, \"seed\": 8,", "'seed' is given twice", "\"seed\": 8" },

@@ -22,6 +22,24 @@ public sealed class FreightDemoTests
     }
 
     [Fact]
+    public void New_rows_are_further_shippers_of_the_same_world_after_the_test_table()
+    {
+        // When 50 new rows are drawn for the quick demo's seed
+        var rows = FreightDemo.NewRows(DemoSize.Quick, seed: 7, rows: 50);
+
+        // Then they have the demo's columns and no target, their ids follow the test table's, and they are not its rows again
+        var (train, test) = Quick;
+        Assert.Equal(test.FeatureNames.ToArray(), rows.FeatureNames.ToArray());
+        Assert.Equal(test.CategoryNames.ToArray(), rows.CategoryNames.ToArray());
+        Assert.False(rows.HasTarget);
+        Assert.Equal("S004001", rows.Ids[0]);
+        Assert.Equal(50, rows.RowCount);
+        Assert.InRange(rows.Density, 0.04, 0.08);
+        Assert.NotEqual(test.ToRows().RowColumns(0).ToArray(), rows.ToRows().RowColumns(0).ToArray());
+        Assert.Equal(train.RowCount + test.RowCount + 1, int.Parse(rows.Ids[0][1..], System.Globalization.CultureInfo.InvariantCulture));
+    }
+
+    [Fact]
     [Trait(Lane.Key, Lane.Slow)]
     public void Makes_a_full_table_wide_sparse_and_with_a_test_table_four_times_longer()
     {

@@ -4,6 +4,7 @@ using Foldwise.Core.Encodings;
 using Foldwise.Core.Folds;
 using Foldwise.Core.Learning;
 using Foldwise.Core.Metrics;
+using Foldwise.Core.Spaces;
 using Foldwise.Testing;
 
 namespace Foldwise.Core.Tests.Encodings;
@@ -81,6 +82,37 @@ public sealed class FoldEncoderTests
     }
 
     [Fact]
+    public void Gives_every_trial_of_a_fold_the_same_inputs_marked_with_their_fold()
+    {
+        // Given a target-mean encoded column, whose training rows' means come from seeded inner folds
+        var (data, _, _) = Scenario(TargetMean);
+
+        // When fold 0's inputs are asked for twice, as two trials of the fold do
+        var one = data.InputsFor(fold: 0, CategoryEncodingKind.Indicators);
+        var other = data.InputsFor(fold: 0, CategoryEncodingKind.Indicators);
+
+        // Then both hold the same cells, and say which fold of the plan they were encoded for
+        AssertSameCells(one.Train, other.Train);
+        AssertSameCells(one.Test, other.Test);
+        Assert.Equal(0, one.PlanFold);
+    }
+
+    [Fact]
+    public void The_test_rows_cells_do_not_depend_on_the_seed()
+    {
+        // Given a target-mean encoded column and fold 0's training rows
+        var (data, trainRows, _) = Scenario(TargetMean);
+
+        // When the fold is encoded with two seeds
+        var one = FoldEncoder.Prepare(data, trainRows, seed: 7, TargetMean);
+        var other = FoldEncoder.Prepare(data, trainRows, seed: 8, TargetMean);
+
+        // Then the seed moved the training rows' inner-fold means but no test cell (those come from all the fold's training rows)
+        Assert.NotEqual(one.Train.Values, other.Train.Values);
+        AssertSameCells(one.Test, other.Test);
+    }
+
+    [Fact]
     public void Gives_kept_levels_missing_and_other_an_indicator_each_and_sends_rare_and_unseen_levels_to_other()
     {
         // Given levels a (3 rows), b (3 rows), rare c (1 row) and gaps, with a minimum count of 2
@@ -100,12 +132,43 @@ public sealed class FoldEncoderTests
     }
 
     [Fact]
+    public void Gives_a_few_level_column_one_column_of_slot_codes_for_a_family_that_splits_on_categories()
+    {
+        // Given levels a (3 rows), b (3 rows), rare c (1 row) and gaps, with a minimum count of 2
+        var options = new EncodingOptions(MinLevelCount: 2);
+        var train = TinyTables.WithCategory(TinyTables.FromColumns([("x", [1, 2, 3, 4, 5, 6, 7, 8])], [1, 2, 3, 4, 5, 6, 7, 8]), "c", "a", "b", "a", "b", null, "a", "b", "c");
+        var test = TinyTables.WithCategory(TinyTables.FromColumns([("x", [1, 2, 3])]), "c", "b", "new", null);
+        var data = Data(train, test, options, new FoldPlan(1, 0, [.. Enumerable.Repeat(0, 8)]));
+
+        // When the fold is encoded as level codes
+        var inputs = FoldEncoder.Prepare(data, [.. Enumerable.Range(0, 8)], seed: 1, options, CategoryEncodingKind.LevelCodes);
+
+        // Then one column after the numeric one holds the slot: a=0 (no cell), b=1, missing=2, other=3 (rare c, unseen "new")
+        Assert.Equal(2, inputs.ColumnCount);
+        Assert.Equal([1], inputs.LevelCodeColumns.ToArray());
+        float Code(SparseRowMatrix m, int row) => m.RowColumns(row).IndexOf(1) is int at and >= 0 ? m.RowValues(row)[at] : 0f;
+        Assert.Equal([0f, 1f, 0f, 1f, 2f, 0f, 1f, 3f], Enumerable.Range(0, 8).Select(r => Code(inputs.Train, r)));
+        Assert.Equal([1f, 3f, 2f], Enumerable.Range(0, 3).Select(r => Code(inputs.Test, r)));
+    }
+
+    [Fact]
+    public void Keeps_target_mean_columns_as_they_are_when_few_level_columns_become_level_codes()
+    {
+        var (data, trainRows, _) = Scenario(TargetMean);
+
+        var codes = FoldEncoder.Prepare(data, trainRows, seed: 7, TargetMean, CategoryEncodingKind.LevelCodes);
+
+        AssertSameCells(FoldEncoder.Prepare(data, trainRows, seed: 7, TargetMean).Train, codes.Train);
+        Assert.Empty(codes.LevelCodeColumns);
+    }
+
+    [Fact]
     public void Returns_the_table_own_rows_when_there_are_no_category_columns()
     {
         var table = TinyTables.FromColumns([("x", [1, 2, 3, 4])], [1, 2, 3, 4]);
         var data = TrialData.From(table, table, new FoldPlan(2, 0, [0, 1, 0, 1]), Metric.Rmse);
 
-        var inputs = data.InputsFor(fold: 1);
+        var inputs = data.InputsFor(fold: 1, FamilyNames.LightGbm);
 
         Assert.Same(data.Train, inputs.Train);
         Assert.Same(data.Test, inputs.Test);
@@ -118,7 +181,7 @@ public sealed class FoldEncoderTests
         var table = TinyTables.FromColumns([("x", [0, 4, float.NaN, 2, 8]), ("z", [1, 1, 1, 1, float.NaN])], [1, 2, 3, 4, 5]);
         var data = TrialData.From(table, table, new FoldPlan(2, 0, [0, 0, 0, 0, 1]), Metric.Rmse);
 
-        var imputed = data.InputsFor(fold: 1).Imputed([0, 1, 2, 3]);
+        var imputed = data.InputsFor(fold: 1, FamilyNames.FastTree).Imputed([0, 1, 2, 3]);
 
         // Then the gap takes 2 and a third column flags it; z, missing only outside the training rows, gets its median 1 and no flag
         Assert.Equal(3, imputed.ColumnCount);

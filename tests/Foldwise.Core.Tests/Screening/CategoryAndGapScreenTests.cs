@@ -65,6 +65,23 @@ public sealed class CategoryAndGapScreenTests
 
         var note = Assert.Single(report.Categories);
         Assert.Equal((2, 3), (note.NewTestLevels, note.NewTestRows));
-        Assert.Contains("the test table has 2 new levels in 3 rows", ColumnNotes.Category(note), StringComparison.Ordinal);
+        Assert.Contains("the test table has 2 new levels in 3 rows", ColumnNotes.Category(note, []), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Names_which_families_read_a_few_level_column_as_level_codes_and_which_as_indicators()
+    {
+        // Given a few-level column, and a search of LightGBM reading level codes and FastTree (indicators only)
+        var note = new CategoryNote("colour", Levels: 3, LevelsKept: 3, CategoryEncodingKind.Indicators, MissingShare: 0);
+        var families = Foldwise.Core.Definition.DefinitionDefaults.BuiltInFamilies;
+        var both = new[] { families[0] with { FewLevels = CategoryEncodingKind.LevelCodes }, families[1] };
+
+        // When the summary line is written for both families, and for LightGBM told to read indicators
+        string mixed = ColumnNotes.Category(note, both);
+        string alike = ColumnNotes.Category(note, [both[0] with { FewLevels = CategoryEncodingKind.Indicators }, both[1]]);
+
+        // Then the first names each family's form, the second names one form for all
+        Assert.Contains("lightgbm: one column of level codes, grouped by LightGBM's own category splits; fasttree: one indicator column per kept level", mixed, StringComparison.Ordinal);
+        Assert.EndsWith("; one indicator column per kept level", alike, StringComparison.Ordinal);
     }
 }
