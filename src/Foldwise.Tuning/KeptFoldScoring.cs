@@ -8,7 +8,8 @@ namespace Foldwise.Tuning;
 
 /// <summary>
 /// Predicts the new rows with every kept member's fold models. Each fold's inputs are prepared once for each form of
-/// few-level category columns the members' families read (<see cref="SharedFoldInputs"/>); the (fold, member) predictions are handed out fold by fold to up to
+/// few-level category columns the members' families read (a fold's inputs are the same for every trial of it,
+/// <see cref="TrialData.InputsFor(int, Core.Encodings.CategoryEncodingKind)"/>); the (fold, member) predictions are handed out fold by fold to up to
 /// <c>threads</c> threads, so only the folds being scored hold their encoded rows; each member's fold predictions
 /// are then averaged in fold order, so the result is the same, bit for bit, at any thread count.
 /// </summary>
@@ -31,7 +32,7 @@ internal static class KeptFoldScoring
         // A fold's inputs (one set per form of few-level columns) are encoded by the first thread that needs them and
         // dropped once its last member is scored.
         var forms = scorers.Select(s => s.FewLevels).Distinct().ToArray();
-        var encodings = new Lazy<SharedFoldInputs>[]?[foldCount];
+        var encodings = new Lazy<FoldInputs>[]?[foldCount];
         var left = new int[foldCount];
         long encodeTicks = 0;
         long predictTicks = 0;
@@ -39,12 +40,12 @@ internal static class KeptFoldScoring
         {
             int fold = f;
             left[f] = members;
-            encodings[f] = [.. forms.Select(form => new Lazy<SharedFoldInputs>(() =>
+            encodings[f] = [.. forms.Select(form => new Lazy<FoldInputs>(() =>
             {
                 long start = Stopwatch.GetTimestamp();
-                var shared = SharedFoldInputs.Encode(data, folds.TrainRows(fold), FoldSeed(scorers.First(s => s.FewLevels == form), fold), form);
+                var inputs = data.InputsFor(fold, form);
                 Interlocked.Add(ref encodeTicks, Stopwatch.GetTimestamp() - start);
-                return shared;
+                return inputs;
             }))];
         }
 
@@ -58,15 +59,11 @@ internal static class KeptFoldScoring
                 int f = item / members;
                 int m = item % members;
                 var scorer = scorers[m];
-                int seed = FoldSeed(scorer, f);
-                var shared = encodings[f]![Array.IndexOf(forms, scorer.FewLevels)].Value;
+                var inputs = encodings[f]![Array.IndexOf(forms, scorer.FewLevels)].Value;
                 long start = Stopwatch.GetTimestamp();
-                var inputs = shared.For(seed);
-                long encoded = Stopwatch.GetTimestamp();
-                var job = new FoldJob(data, f, folds.TrainRows(f), folds.ValidationRows(f), scorer.Fit.Run, scorer.Fit.Budget, seed, threadsEach, inputs);
+                var job = new FoldJob(data, f, folds.TrainRows(f), folds.ValidationRows(f), scorer.Fit.Run, scorer.Fit.Budget, SearchSeeds.Fold(scorer.Fit.Seed, f), threadsEach, inputs);
                 predictions[m][f] = scorer.Keeper.PredictKept(job, scorer.Models[f]);
-                Interlocked.Add(ref encodeTicks, encoded - start);
-                Interlocked.Add(ref predictTicks, Stopwatch.GetTimestamp() - encoded);
+                Interlocked.Add(ref predictTicks, Stopwatch.GetTimestamp() - start);
                 if (Interlocked.Decrement(ref left[f]) == 0)
                 {
                     encodings[f] = null;
@@ -83,8 +80,6 @@ internal static class KeptFoldScoring
         var work = new KeptScoringWork(Stopwatch.GetElapsedTime(0, encodeTicks), Stopwatch.GetElapsedTime(0, predictTicks), options.MaxDegreeOfParallelism, foldCount, members);
         return ([.. predictions.Select(Mean)], work);
     }
-
-    private static int FoldSeed(KeptScorer scorer, int fold) => SearchSeeds.Fold(scorer.Fit.Seed, fold);
 
     /// <summary>The same sum, in the same order, as the search's own test prediction (TrialExecutor).</summary>
     private static double[] Mean(double[][] byFold)

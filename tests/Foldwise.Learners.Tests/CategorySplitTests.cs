@@ -28,8 +28,7 @@ public sealed class CategorySplitTests
         {
             ["learning_rate"] = 1, ["leaves"] = 2, ["min_leaf_rows"] = 5, ["feature_fraction"] = 1, ["row_fraction"] = 1, ["l2"] = 0,
         });
-        var trainRows = data.Folds.TrainRows(0);
-        return TinyTables.Job(data, FamilyNames.LightGbm, parameters, budget: 1) with { Inputs = data.InputsFor(trainRows, 7, FamilyNames.LightGbm) };
+        return TinyTables.Job(data, FamilyNames.LightGbm, parameters, budget: 1) with { Inputs = data.InputsFor(fold: 0, FamilyNames.LightGbm) };
     }
 
     [Fact]

@@ -121,7 +121,7 @@ public sealed class MissingCellTests
             [new SparseColumn([.. column], [.. column.Select(r => features[r])])], [.. labels.Select(y => (double)y)]);
         var data = TrialData.From(table, table, new FoldPlan(2, 0, [.. Enumerable.Range(0, Rows).Select(r => r % 2)]), Metric.Rmse);
         var learner = LearnerCatalog.BuiltIn.Get(family);
-        var inputs = data.InputsFor(data.Folds.TrainRows(0), 7, family);
+        var inputs = data.InputsFor(fold: 0, family);
         var parameters = TinyTables.Parameters(family, features: inputs.ColumnCount);
 
         // When one fold is fitted

@@ -39,6 +39,15 @@ public sealed class FoldInputs
     /// </summary>
     public ImmutableArray<int> LevelCodeColumns { get; init; } = [];
 
+    /// <summary>
+    /// The fold of its table's plan these inputs were encoded for by <see cref="TrialData.InputsFor(int, CategoryEncodingKind)"/>;
+    /// null when built another way. Every trial of that fold reads inputs equal to these.
+    /// </summary>
+    public int? PlanFold { get; init; }
+
+    /// <summary>These inputs, marked as encoded for <paramref name="fold"/> of the plan.</summary>
+    internal FoldInputs OfPlanFold(int fold) => new(Train, Test) { LevelCodeColumns = LevelCodeColumns, PlanFold = fold };
+
     /// <summary>True when some cell of either table is missing (NaN).</summary>
     public bool HasMissing => ContainsNaN(Train.Values) || ContainsNaN(Test.Values);
 

@@ -3,6 +3,7 @@ using Foldwise.Core.Data;
 using Foldwise.Core.Encodings;
 using Foldwise.Core.Folds;
 using Foldwise.Core.Metrics;
+using Foldwise.Core.Search;
 using Foldwise.Core.Spaces;
 
 namespace Foldwise.Core.Learning;
@@ -32,11 +33,16 @@ public sealed record TrialData(
     public ImmutableArray<string> LevelCodeFamilies { get; init; } = FamilyDescriptors.LevelCodeFamilies;
 
     /// <summary>One fold's inputs for <paramref name="family"/>, encoded from that fold's training rows only.</summary>
-    public FoldInputs InputsFor(ImmutableArray<int> trainRows, int seed, string family) => InputsFor(trainRows, seed, FewLevelsFor(family));
+    public FoldInputs InputsFor(int fold, string family) => InputsFor(fold, FewLevelsFor(family));
 
-    /// <summary>One fold's inputs with few-level category columns in the form <paramref name="fewLevels"/>, encoded from that fold's training rows only.</summary>
-    public FoldInputs InputsFor(ImmutableArray<int> trainRows, int seed, CategoryEncodingKind fewLevels) =>
-        FoldEncoder.Prepare(this, trainRows, seed, EncodingOptions.Default, fewLevels);
+    /// <summary>
+    /// One fold's inputs with few-level category columns in the form <paramref name="fewLevels"/>, encoded from that
+    /// fold's training rows only. They depend on the fold and the form alone, never on a trial (the inner folds of
+    /// target means draw from <see cref="SearchSeeds.Encoding"/>), so every trial of the fold reads the same inputs
+    /// and a learner may reuse what it prepared from them (LightGBM's binned rows).
+    /// </summary>
+    public FoldInputs InputsFor(int fold, CategoryEncodingKind fewLevels) =>
+        FoldEncoder.Prepare(this, Folds.TrainRows(fold), SearchSeeds.Encoding(Folds.Seed, fold), EncodingOptions.Default, fewLevels).OfPlanFold(fold);
 
     /// <summary>What a few-level category column becomes for <paramref name="family"/>.</summary>
     public CategoryEncodingKind FewLevelsFor(string family) =>

@@ -48,7 +48,7 @@ public sealed class TrialExecutor
     {
         var trainRows = data.Folds.TrainRows(fold);
         int foldSeed = SearchSeeds.Fold(seed, fold);
-        return new FoldJob(data, fold, trainRows, data.Folds.ValidationRows(fold), parameters, budget, foldSeed, threads, data.InputsFor(trainRows, foldSeed, family), predictsTest);
+        return new FoldJob(data, fold, trainRows, data.Folds.ValidationRows(fold), parameters, budget, foldSeed, threads, data.InputsFor(fold, family), predictsTest);
     }
 
     private TrialOutcome RunWhole(

@@ -6,7 +6,8 @@ namespace Foldwise.Core.Search;
 /// <item>the fold plan draws from <see cref="FoldPlan"/>, the seed itself;</item>
 /// <item>a family's n-th new candidate draws from <see cref="Proposal"/>, SplitMix64 over (seed, family index, n);</item>
 /// <item>a trial fits with <see cref="Trial"/> of its first candidate (a promotion grows the same trees longer),
-/// and fold f of it with <see cref="Fold"/>.</item>
+/// and fold f of it with <see cref="Fold"/>;</item>
+/// <item>the inner folds of fold f's category encodings draw from <see cref="Encoding"/>, the same for every trial.</item>
 /// </list>
 /// Each is a function of facts the store keeps (never of a generator that advanced earlier), so a resumed search,
 /// which only replays records, draws exactly what the original would have. <c>SameResultsTests</c> pins the values.
@@ -24,6 +25,9 @@ public readonly record struct SearchSeeds(int Seed)
 
     /// <summary>The fit seed of fold <paramref name="fold"/> of a trial leased with <paramref name="trialSeed"/>: workers know only the latter.</summary>
     public static int Fold(int trialSeed, int fold) => unchecked(trialSeed + (1000 * fold));
+
+    /// <summary>The seed of the inner folds that encode fold <paramref name="fold"/>'s training rows, from the fold plan's seed: trials share it.</summary>
+    public static int Encoding(int foldPlanSeed, int fold) => Fold(foldPlanSeed, fold);
 
     /// <summary>SplitMix64's finaliser (Steele, Lea &amp; Flood, OOPSLA 2014) chained over the three numbers, folded to an int.</summary>
     private static int Mix(int searchSeed, int familyIndex, int candidateOrdinal)

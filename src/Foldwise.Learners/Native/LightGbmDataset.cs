@@ -3,10 +3,14 @@ namespace Foldwise.Learners.Native;
 /// <summary>A LightGBM Dataset binned from sparse rows; a validation Dataset is binned like its reference.</summary>
 internal sealed class LightGbmDataset : IDisposable
 {
-    private LightGbmDataset(DatasetHandle handle, int rowCount)
+    private readonly bool borrowed;
+    private int released;
+
+    private LightGbmDataset(DatasetHandle handle, int rowCount, bool borrowed = false)
     {
         Handle = handle;
         RowCount = rowCount;
+        this.borrowed = borrowed;
     }
 
     public DatasetHandle Handle { get; }
@@ -53,7 +57,28 @@ internal sealed class LightGbmDataset : IDisposable
         }
     }
 
-    public void Dispose() => Handle.Dispose();
+    /// <summary>
+    /// The same Dataset for another owner (a booster): the native Dataset lives until this one and every borrowed
+    /// one are disposed, whichever comes last.
+    /// </summary>
+    public LightGbmDataset Borrow()
+    {
+        bool added = false;
+        Handle.DangerousAddRef(ref added);
+        return new LightGbmDataset(Handle, RowCount, borrowed: true);
+    }
+
+    public void Dispose()
+    {
+        if (!borrowed)
+        {
+            Handle.Dispose();
+        }
+        else if (Interlocked.Exchange(ref released, 1) == 0)
+        {
+            Handle.DangerousRelease();
+        }
+    }
 
     private unsafe void SetLabels(float[] labels, string what)
     {

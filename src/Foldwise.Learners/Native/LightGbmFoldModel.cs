@@ -61,7 +61,7 @@ public sealed class LightGbmFoldModel : IRoundFit
         using var gate = ThreadCountGate.Enter(job.Threads);
         var inputs = NativeFoldRows.From(job);
         string parameters = LightGbmParameters.For(job);
-        var train = LightGbmDataset.FromRows(inputs.Train, inputs.Labels, parameters, reference: null, $"the training rows of fold {job.Fold}");
+        var (train, validation) = FoldDatasets.Borrow(job, inputs);
         LightGbmBooster booster;
         try
         {
@@ -69,6 +69,7 @@ public sealed class LightGbmFoldModel : IRoundFit
         }
         catch
         {
+            validation.Dispose();
             train.Dispose();
             throw;
         }
@@ -76,7 +77,7 @@ public sealed class LightGbmFoldModel : IRoundFit
         LightGbmFoldModel? model = null;
         try
         {
-            booster.AddValidation(LightGbmDataset.FromRows(inputs.Validation, labels: null, parameters, train, $"the held-out rows of fold {job.Fold}"));
+            booster.AddValidation(validation);
             double[]? actual = scoreEachRound ? [.. job.ValidationRows.Select(r => job.Data.Target[r])] : null;
             model = new LightGbmFoldModel(job, inputs with { Train = Released, Labels = [] }, booster, actual);
             return model;

@@ -50,11 +50,13 @@ public sealed class CtrlCTests : IDisposable
         Assert.InRange(afterFirst, 1, 20);
 
         // When the search is resumed and Ctrl-C is pressed twice while its cluster starts (a window of most of a
-        // second, against the milliseconds between the two signals)
+        // second): the second once the first has been taken, since two signals sent back to back can reach the
+        // process as one
         using (var resume = FoldwiseProcess.Start("resume", workspace.Out))
         {
             Assert.True(await resume.WaitForLineAsync(l => l.StartsWith("Search ", StringComparison.Ordinal), Patience), resume.Output);
             await SignalAsync(resume.Id, "-INT");
+            Assert.True(await resume.WaitForLineAsync(l => l.StartsWith("Stopping:", StringComparison.Ordinal), Patience), resume.Output);
             await SignalAsync(resume.Id, "-INT");
 
             // Then it abandons at once and exits 130, having lost nothing

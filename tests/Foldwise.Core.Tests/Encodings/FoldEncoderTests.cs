@@ -82,6 +82,22 @@ public sealed class FoldEncoderTests
     }
 
     [Fact]
+    public void Gives_every_trial_of_a_fold_the_same_inputs_marked_with_their_fold()
+    {
+        // Given a target-mean encoded column, whose training rows' means come from seeded inner folds
+        var (data, _, _) = Scenario(TargetMean);
+
+        // When fold 0's inputs are asked for twice, as two trials of the fold do
+        var one = data.InputsFor(fold: 0, CategoryEncodingKind.Indicators);
+        var other = data.InputsFor(fold: 0, CategoryEncodingKind.Indicators);
+
+        // Then both hold the same cells, and say which fold of the plan they were encoded for
+        AssertSameCells(one.Train, other.Train);
+        AssertSameCells(one.Test, other.Test);
+        Assert.Equal(0, one.PlanFold);
+    }
+
+    [Fact]
     public void The_test_rows_cells_do_not_depend_on_the_seed()
     {
         // Given a target-mean encoded column and fold 0's training rows
@@ -91,7 +107,7 @@ public sealed class FoldEncoderTests
         var one = FoldEncoder.Prepare(data, trainRows, seed: 7, TargetMean);
         var other = FoldEncoder.Prepare(data, trainRows, seed: 8, TargetMean);
 
-        // Then the seed moved the training rows' inner-fold means but no test cell (kept scoring shares one fold's encoded new rows across seeds)
+        // Then the seed moved the training rows' inner-fold means but no test cell (those come from all the fold's training rows)
         Assert.NotEqual(one.Train.Values, other.Train.Values);
         AssertSameCells(one.Test, other.Test);
     }
@@ -152,7 +168,7 @@ public sealed class FoldEncoderTests
         var table = TinyTables.FromColumns([("x", [1, 2, 3, 4])], [1, 2, 3, 4]);
         var data = TrialData.From(table, table, new FoldPlan(2, 0, [0, 1, 0, 1]), Metric.Rmse);
 
-        var inputs = data.InputsFor([0, 2], seed: 1, FamilyNames.LightGbm);
+        var inputs = data.InputsFor(fold: 1, FamilyNames.LightGbm);
 
         Assert.Same(data.Train, inputs.Train);
         Assert.Same(data.Test, inputs.Test);
@@ -165,7 +181,7 @@ public sealed class FoldEncoderTests
         var table = TinyTables.FromColumns([("x", [0, 4, float.NaN, 2, 8]), ("z", [1, 1, 1, 1, float.NaN])], [1, 2, 3, 4, 5]);
         var data = TrialData.From(table, table, new FoldPlan(2, 0, [0, 0, 0, 0, 1]), Metric.Rmse);
 
-        var imputed = data.InputsFor([0, 1, 2, 3], seed: 1, FamilyNames.FastTree).Imputed([0, 1, 2, 3]);
+        var imputed = data.InputsFor(fold: 1, FamilyNames.FastTree).Imputed([0, 1, 2, 3]);
 
         // Then the gap takes 2 and a third column flags it; z, missing only outside the training rows, gets its median 1 and no flag
         Assert.Equal(3, imputed.ColumnCount);
