@@ -33,7 +33,7 @@ internal static class FoldModelCost
         foreach (var (family, budget) in fits)
         {
             var keeper = (IKeepsModels)LearnerCatalog.BuiltIn.Get(family);
-            var inputs = data.InputsFor(trainRows, seed, family);
+            var inputs = data.InputsFor(0, family);
             var job = new FoldJob(data, 0, trainRows, data.Folds.ValidationRows(0), Middle(DefaultSpaces.For(family)), budget, seed, 1, inputs, PredictsTest: false);
             var clock = Stopwatch.StartNew();
             var kept = keeper.FitAndKeep(job, CancellationToken.None);
