@@ -1,5 +1,6 @@
 using Foldwise.Core.Data;
 using Foldwise.Core.Definition;
+using Foldwise.Core.Encodings;
 using Foldwise.Core.Screening;
 using Foldwise.Core.Spaces;
 using LiteDB;
@@ -40,6 +41,7 @@ internal static class DefinitionDocuments
             ["family"] = f.Family,
             ["firstRung"] = f.Budget is { } b ? b.FirstRung : BsonValue.Null,
             ["fullBudget"] = f.Budget is { } c ? c.FullBudget : BsonValue.Null,
+            ["fewLevels"] = StoreWords.FewLevelForms.Word(f.FewLevelsForm),
             ["ranges"] = new BsonArray(f.Space.Ranges.Select(r => (BsonValue)new BsonDocument
             {
                 ["name"] = r.Name,
@@ -106,7 +108,23 @@ internal static class DefinitionDocuments
         var first = OptionalInt(f, "firstRung");
         var full = OptionalInt(f, "fullBudget");
         var budget = first is { } fr && full is { } fb ? new FamilyBudget(fr, fb) : null;
-        return new FamilySearch(String(f, "family", Owner), new ParameterSpace([.. ranges]), budget);
+        string family = String(f, "family", Owner);
+        return new FamilySearch(family, new ParameterSpace([.. ranges]), budget) { FewLevels = FewLevels(f, family) };
+    }
+
+    /// <summary>
+    /// The form a family reads few-level category columns in. A family offering a choice, in a store written before the
+    /// choice was kept, read indicator columns: every search kept before LightGBM's own category splits did, and kept
+    /// models of those searches score only on indicator columns.
+    /// </summary>
+    private static CategoryEncodingKind? FewLevels(BsonDocument f, string family)
+    {
+        if (OptionalString(f, "fewLevels") is { } word)
+        {
+            return StoreWords.FewLevelForms.Value(word);
+        }
+
+        return FamilyDescriptors.Find(family)?.FewLevelForms.Length > 1 ? CategoryEncodingKind.Indicators : null;
     }
 
     // Stores written before tables could hold gaps and text have none of these fields: they read as the defaults.

@@ -1,4 +1,5 @@
 using Foldwise.Core.Definition;
+using Foldwise.Core.Encodings;
 using Foldwise.Core.Metrics;
 using Foldwise.Core.Spaces;
 
@@ -17,6 +18,8 @@ internal static class StoreWords
     public static readonly Words<ProposerKind> Proposers = new(("random", ProposerKind.Random), ("tpe", ProposerKind.Tpe));
 
     public static readonly Words<BlendMode> BlendModes = new(("simplex", BlendMode.Simplex), ("nonnegative", BlendMode.NonNegative), ("greedy", BlendMode.Greedy));
+
+    public static readonly Words<CategoryEncodingKind> FewLevelForms = new(("levelcodes", CategoryEncodingKind.LevelCodes), ("indicators", CategoryEncodingKind.Indicators));
 
     public static readonly Words<ParameterKind> Ranges = new(("integer", ParameterKind.Whole), ("uniform", ParameterKind.Linear), ("logarithmic", ParameterKind.Log), ("categorical", ParameterKind.OneOf));
 

@@ -1,5 +1,6 @@
 using Foldwise.Core.Blending;
 using Foldwise.Core.Definition;
+using Foldwise.Core.Encodings;
 using Foldwise.Core.Folds;
 using Foldwise.Core.Metrics;
 using Foldwise.Core.Screening;
@@ -27,7 +28,10 @@ public sealed class SearchRecordTests : IDisposable
         Families =
         [
             new FamilySearch("fasttree", new ParameterSpace([ParameterRange.Whole("leaves", 31, 31), ParameterRange.Log("learning_rate", 1e-05, 0.3)])),
-            new FamilySearch("lightgbm", new ParameterSpace([ParameterRange.Fixed("l2", 0.1), ParameterRange.Linear("row_fraction", 0.5, 1), ParameterRange.OneOf("style", "a", "b \"c\"")])),
+            new FamilySearch("lightgbm", new ParameterSpace([ParameterRange.Fixed("l2", 0.1), ParameterRange.Linear("row_fraction", 0.5, 1), ParameterRange.OneOf("style", "a", "b \"c\"")]))
+            {
+                FewLevels = CategoryEncodingKind.Indicators,
+            },
         ],
         Schedule = new ScheduleOptions(ScheduleKind.Hyperband, ProposerKind.Random, FirstRung: 7, FullBudget: 300, Eta: 4, RateScaling: 0.25, Brackets: 2),
         Budget = new SearchBudget(Trials: null, Hours: 2.5),
@@ -77,6 +81,28 @@ public sealed class SearchRecordTests : IDisposable
         store.SaveHeader(header);
 
         AssertSameHeader(header, store.LoadHeader());
+    }
+
+    [Fact]
+    public void A_family_stored_before_its_few_level_form_was_kept_reads_indicator_columns()
+    {
+        // Given a stored definition whose lightgbm family has no few-level form (as every store written before LightGBM's own category splits)
+        var document = DefinitionDocuments.ToDocument(EveryOptionSet);
+        foreach (var family in document["families"].AsArray)
+        {
+            family.AsDocument.Remove("fewLevels");
+        }
+
+        // When it is read back
+        var read = DefinitionDocuments.FromDocument(document);
+
+        // Then lightgbm reads indicator columns, the form its kept models were fitted on, and fasttree keeps its only form
+        Assert.Equal(CategoryEncodingKind.Indicators, read.Families.Single(f => f.Family == "lightgbm").FewLevelsForm);
+        Assert.Equal(CategoryEncodingKind.Indicators, read.Families.Single(f => f.Family == "fasttree").FewLevelsForm);
+        Assert.Equal(CategoryEncodingKind.LevelCodes, DefinitionDocuments.FromDocument(DefinitionDocuments.ToDocument(EveryOptionSet with
+        {
+            Families = [new FamilySearch("lightgbm", EveryOptionSet.Families[1].Space)],
+        })).Families[0].FewLevelsForm);
     }
 
     [Fact]
