@@ -24,6 +24,34 @@ internal static class SparseViews
     public static IDataView Rows(MLContext ml, SparseRowMatrix matrix, ImmutableArray<int> rows, double[]? labels) =>
         Create(ml, matrix, rows, labels);
 
+    /// <summary>
+    /// Every row of <paramref name="matrix"/> as a dense vector (zeros written out), produced on each pass. ML.NET's tree
+    /// ensembles find a split's value in a sparse row by a search among its non-zero cells, in a dense one by its index.
+    /// </summary>
+    public static IDataView Dense(MLContext ml, SparseRowMatrix matrix)
+    {
+        var schema = SchemaDefinition.Create(typeof(SparseFeatureRow));
+        schema[nameof(SparseFeatureRow.Features)].ColumnType = new VectorDataViewType(NumberDataViewType.Single, matrix.ColumnCount);
+        return ml.Data.LoadFromEnumerable(EnumerateDense(matrix), schema);
+    }
+
+    private static IEnumerable<SparseFeatureRow> EnumerateDense(SparseRowMatrix matrix)
+    {
+        for (int r = 0; r < matrix.RowCount; r++)
+        {
+            // Fresh arrays per row: ML.NET may keep a row's buffers beyond the next MoveNext.
+            var values = new float[matrix.ColumnCount];
+            var columns = matrix.RowColumns(r);
+            var cells = matrix.RowValues(r);
+            for (int k = 0; k < columns.Length; k++)
+            {
+                values[columns[k]] = cells[k];
+            }
+
+            yield return new SparseFeatureRow { Features = new VBuffer<float>(matrix.ColumnCount, values) };
+        }
+    }
+
     private static ImmutableArray<int> AllRows(int count) => [.. Enumerable.Range(0, count)];
 
     private static IDataView Create(MLContext ml, SparseRowMatrix matrix, ImmutableArray<int> rows, double[]? labels)
