@@ -9,7 +9,7 @@ using Microsoft.ML.Data;
 namespace Foldwise.Learners.Tests;
 
 /// <summary>
-/// What ML.NET 5.0.1's trainers do with a NaN cell, pinned so that an upgrade that changes it shows here: FastForest,
+/// What ML.NET's trainers (5.0.1 and 6.0.0 alike) do with a NaN cell, pinned so that an upgrade that changes it shows here: FastForest,
 /// GAM and SDCA train as if the cell were 0, but score it otherwise (forest: as a value above every split; GAM: as
 /// a value in its lowest bin; SDCA: NaN); FastTree skips training rows that hold one. So these families read each
 /// fold's median-imputed inputs with their "was missing" columns; LightGBM reads NaN as it is.
