@@ -36,8 +36,9 @@ public static class BlendStep
             var done = trials.Where(t => t.State == TrialState.Done).ToList();
             var furthest = done.GroupBy(t => t.Family, StringComparer.Ordinal).ToDictionary(g => g.Key, g => g.Max(t => t.Budget), StringComparer.Ordinal);
             pool = BlendPool.Select(trials, options.Pool, f => furthest.GetValueOrDefault(f, -1));
-            var first = definition.Families[0].Family;
-            events.Report(new BlendFellBack(definition.BudgetOf(first).FullBudget, furthest.GetValueOrDefault(first, done.Max(t => t.Budget))));
+            events.Report(new BlendFellBack([.. definition.Families
+                .Where(f => furthest.ContainsKey(f.Family))
+                .Select(f => new FamilyReach(f.Family, furthest[f.Family], definition.BudgetOf(f.Family).FullBudget))]));
         }
 
         var vectors = pool.Select(t => store.LoadVectors(t.Id) ?? throw new InvalidOperationException($"trial {t.Id} is done but its predictions are missing from the store")).ToList();

@@ -3,8 +3,10 @@ using System.Text.Json;
 using Foldwise.Cli.Report;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Events;
+using Foldwise.Core.Search;
 using Foldwise.Storage;
 using Foldwise.Testing;
+using Foldwise.Testing.Fakes;
 using Foldwise.Tuning;
 using Spectre.Console.Testing;
 
@@ -114,5 +116,35 @@ public sealed class BlendCommandTests(FinishedSearch search) : IClassFixture<Fin
 
         Assert.Equal(before, File.ReadAllBytes(predictions));
         Assert.False(File.Exists(predictions + ".part"));
+    }
+
+    [Fact]
+    public void Names_how_far_each_family_went_when_no_trial_reached_its_full_budget()
+    {
+        // Given a copy of the finished search, read with a full budget that none of its trials reached
+        using var folder = new Workspace();
+        string copy = folder.PathOf("search.db");
+        File.Copy(search.Store, copy);
+        using var store = SearchStore.Open(copy);
+        var (header, definition) = StoredSearch.HeaderOf(store);
+        var unreached = definition with
+        {
+            Schedule = definition.Schedule with { FullBudget = 100_000 },
+            Families = [.. definition.Families.Select(f => f with { Budget = null })],
+        };
+        var done = store.LoadTrials().Where(t => t.State == TrialState.Done).ToList();
+
+        // When it is blended
+        var events = new SyncEvents();
+        BlendStep.Run(store, header, unreached, folder.Root, events);
+
+        // Then the blend says, for each family with done trials in the definition's order, how far it went
+        var fellBack = Assert.Single(events.OfType<BlendFellBack>());
+        Assert.Equal(
+            definition.Families.Select(f => f.Family).Where(f => done.Any(t => t.Family == f)),
+            fellBack.Families.Select(r => r.Family));
+        Assert.All(fellBack.Families, r => Assert.Equal(done.Where(t => t.Family == r.Family).Max(t => t.Budget), r.Furthest));
+        Assert.All(fellBack.Families, r => Assert.EndsWith(" of 100000 rounds", r.ToString(), StringComparison.Ordinal));
+        Assert.True(fellBack.Families.Length >= 2, "the finished search has trials of two families");
     }
 }

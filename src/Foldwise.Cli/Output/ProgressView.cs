@@ -109,7 +109,7 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
                 Stopped(s.Progress);
                 break;
             case BlendFellBack b:
-                console.MarkupLine($"[yellow]No trial reached its family's full budget (the first family's: {b.FullBudget}); blending each family's trials that went furthest ({b.Furthest} for the first family).[/]");
+                console.MarkupLine($"[yellow]No trial reached its family's full budget; blending each family's trials that went furthest: {Markup.Escape(string.Join(", ", b.Families))}.[/]");
                 break;
             case BlendSolved b:
                 BlendView.Render(console, b.Summary, Metric.For(b.Metric), b.Trials);
