@@ -213,10 +213,6 @@ public sealed class SearchCoordinator
         {
             var now = time.GetUtcNow();
             UpdateStoppingLocked(now);
-            var best = trials.Values
-                .Where(t => t.State == TrialState.Done && t.Score is not null)
-                .GroupBy(t => t.Family)
-                .ToImmutableSortedDictionary(g => g.Key, g => g.Min(t => t.Score!.Value));
             return new SearchProgress(
                 trials.Count,
                 queued.Count,
@@ -226,7 +222,7 @@ public sealed class SearchCoordinator
                 definition.Budget.Trials,
                 SpentSecondsLocked(now),
                 definition.Budget.Hours,
-                best,
+                SearchProgress.BestOf(trials.Values),
                 stopping,
                 IsFinishedLocked(),
                 quarantine.All());

@@ -21,4 +21,10 @@ public sealed record SearchProgress(
     ImmutableSortedDictionary<string, string>? Quarantined = null)
 {
     public double? Best => BestByFamily.Count == 0 ? null : BestByFamily.Values.Min();
+
+    /// <summary>The lowest score of each family's done trials.</summary>
+    public static ImmutableSortedDictionary<string, double> BestOf(IEnumerable<TrialRecord> trials) =>
+        trials.Where(t => t.State == TrialState.Done && t.Score is not null)
+            .GroupBy(t => t.Family)
+            .ToImmutableSortedDictionary(g => g.Key, g => g.Min(t => t.Score!.Value));
 }
