@@ -15,7 +15,9 @@ internal sealed class LiveBar
     private readonly TaskCompletionSource<ProgressTask> task = new(TaskCreationOptions.RunContinuationsAsynchronously);
     private readonly TaskCompletionSource<SearchProgress> end = new(TaskCreationOptions.RunContinuationsAsynchronously);
     private readonly Task running;
-    private readonly Dictionary<string, SlotFoldFitted> folds = new(StringComparer.Ordinal);
+
+    /// <summary>Each slot's running trial and how far it has come, by worker/slot.</summary>
+    private readonly Dictionary<string, (int TrialId, string Text)> slots = new(StringComparer.Ordinal);
     private SearchProgress? latest;
 
     public LiveBar(IAnsiConsole console, SearchDefinition definition)
@@ -49,20 +51,37 @@ internal sealed class LiveBar
         string slot = fold.Worker + "/" + fold.Slot;
         if (fold.Fold + 1 >= fold.Folds)
         {
-            folds.Remove(slot);
+            slots.Remove(slot);
         }
         else
         {
-            folds[slot] = fold;
+            slots[slot] = (fold.TrialId, $"{fold.Fold + 1}/{fold.Folds} folds");
         }
 
+        Redraw();
+    }
+
+    /// <summary>Shows, beside the counts, the rounds a slot's trial has trained on every fold (its folds finish together at the end).</summary>
+    public void RoundTrained(SlotRoundTrained round)
+    {
+        slots[round.Worker + "/" + round.Slot] = (round.TrialId, $"round {round.Round}/{round.Budget}");
+        Redraw();
+    }
+
+    private void Redraw()
+    {
         if (latest is { } progress)
         {
             Update(progress);
         }
+        else if (task.Task.IsCompletedSuccessfully)
+        {
+            // No trial has finished yet: the first ones' progress is all there is to show.
+            task.Task.Result.Description = Markup.Escape("first trials running" + Folds());
+        }
     }
 
-    private string Folds() => string.Concat(folds.Values.OrderBy(f => f.TrialId).Select(f => $" · trial {f.TrialId} {f.Fold + 1}/{f.Folds} folds"));
+    private string Folds() => string.Concat(slots.Values.OrderBy(r => r.TrialId).Select(r => $" · trial {r.TrialId} {r.Text}"));
 
     /// <summary>Closes the bar and waits until it is drawn for the last time.</summary>
     public void Finish(SearchProgress progress)

@@ -18,6 +18,7 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
     private LiveBar? live;
     private IReadOnlyDictionary<string, ParameterSpace> spaces = new Dictionary<string, ParameterSpace>();
     private readonly StepLine stepLine = new(console);
+    private readonly RoundLineThrottle roundLines = new();
 
     public void Report(SearchEvent value)
     {
@@ -105,6 +106,9 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
             case SlotFoldFitted f:
                 FoldFitted(f);
                 break;
+            case SlotRoundTrained r:
+                RoundTrained(r);
+                break;
             case SearchStopped s:
                 Stopped(s.Progress);
                 break;
@@ -166,6 +170,18 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
         else if (f.IsLong)
         {
             console.Profile.Out.Writer.WriteLine($"  trial {f.TrialId}: fold {f.Fold + 1} of {f.Folds} fitted after {f.Elapsed.TotalSeconds:F0} s ({f.Worker}/{f.Slot})");
+        }
+    }
+
+    private void RoundTrained(SlotRoundTrained r)
+    {
+        if (live is not null)
+        {
+            live.RoundTrained(r);
+        }
+        else if (roundLines.Due(r))
+        {
+            console.Profile.Out.Writer.WriteLine($"  trial {r.TrialId}: round {r.Round} of {r.Budget} trained on every fold after {r.Elapsed.TotalSeconds:F0} s ({r.Worker}/{r.Slot})");
         }
     }
 

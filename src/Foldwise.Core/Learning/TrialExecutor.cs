@@ -29,9 +29,19 @@ public sealed class TrialExecutor
         this.stopping = stopping;
     }
 
+    /// <param name="foldDone">Told each fold (0-based) as its predictions are pooled.</param>
     /// <param name="predictsTest">False: the test table is not predicted and the outcome's test vector is empty.</param>
+    /// <param name="roundDone">Told, for a family that trains round by round, the rounds every fold has trained so far.</param>
     public TrialOutcome Run(
-        TrialData data, ParameterSet parameters, int budget, int seed, int threads, CancellationToken cancellation, Action<int>? foldDone = null, bool predictsTest = true)
+        TrialData data,
+        ParameterSet parameters,
+        int budget,
+        int seed,
+        int threads,
+        CancellationToken cancellation,
+        Action<int>? foldDone = null,
+        bool predictsTest = true,
+        Action<int>? roundDone = null)
     {
         var folds = data.Folds;
         if (folds.RowCount != data.Train.RowCount)
@@ -40,7 +50,7 @@ public sealed class TrialExecutor
         }
 
         return learner is IRoundLearner rounds && stopping is not null
-            ? RunByRounds(rounds, stopping, data, parameters, budget, seed, threads, foldDone, predictsTest, cancellation)
+            ? RunByRounds(rounds, stopping, data, parameters, budget, seed, threads, foldDone, roundDone, predictsTest, cancellation)
             : RunWhole(data, parameters, budget, seed, threads, foldDone, predictsTest, cancellation);
     }
 
@@ -68,7 +78,7 @@ public sealed class TrialExecutor
 
     private static TrialOutcome RunByRounds(
         IRoundLearner learner, RoundStopping stopping, TrialData data, ParameterSet parameters, int budget, int seed, int threads,
-        Action<int>? foldDone, bool predictsTest, CancellationToken cancellation)
+        Action<int>? foldDone, Action<int>? roundDone, bool predictsTest, CancellationToken cancellation)
     {
         var fits = new List<IRoundFit>(data.Folds.FoldCount);
         try
@@ -100,6 +110,7 @@ public sealed class TrialExecutor
                 }
 
                 round++;
+                roundDone?.Invoke(round);
                 for (int f = 0; f < fits.Count; f++)
                 {
                     Place(fits[f].HeldOutPredictions(), jobs[f], oof);

@@ -47,4 +47,29 @@ public sealed class StepLineTests
         // Then only the long one has a line
         Assert.Equal("Slot 1: trial 5 fold 3 of 5 fitted after 41 s", output.ToString().Trim());
     }
+
+    [Fact]
+    public void A_worker_shows_a_long_trial_s_rounds_every_ten_seconds_per_slot()
+    {
+        // Given a worker's screen
+        var output = new StringWriter();
+        var lines = new WorkerLines(output);
+
+        // When slot 0's trial reports its rounds each second from 2 to 31 s, and slot 1's quick trial at 3 s
+        for (int s = 2; s <= 31; s++)
+        {
+            lines.Report(new SlotRoundTrained("w1", "0", 7, s, 40, TimeSpan.FromSeconds(s)));
+        }
+
+        lines.Report(new SlotRoundTrained("w1", "1", 8, 3, 40, TimeSpan.FromSeconds(3)));
+
+        // Then slot 0 has lines at 10, 20 and 30 s (a trial is long from 10 s) and slot 1 none
+        Assert.Equal(
+            [
+                "Slot 0: trial 7 round 10 of 40 trained on every fold after 10 s",
+                "Slot 0: trial 7 round 20 of 40 trained on every fold after 20 s",
+                "Slot 0: trial 7 round 30 of 40 trained on every fold after 30 s",
+            ],
+            output.ToString().Split(Environment.NewLine, StringSplitOptions.RemoveEmptyEntries));
+    }
 }

@@ -116,4 +116,18 @@ public sealed class RoundByRoundTrialTests
         Assert.Equal(100, outcome.RoundsTrained);
         Assert.Equal(0.71, outcome.Score, 12);
     }
+
+    [Fact]
+    public void Each_round_trained_on_every_fold_is_told_as_it_ends()
+    {
+        // Given folds whose best is after 30 rounds and a trial of 100 rounds that is told each round
+        var learner = new CurveLearner(BestAt30);
+        var told = new List<int>();
+
+        // When it runs
+        new TrialExecutor(learner, RoundStopping.Default).Run(Data, ParameterSet.Of([]), 100, seed: 1, threads: 1, CancellationToken.None, roundDone: told.Add);
+
+        // Then it was told rounds 1 to 40 in order, where it stopped
+        Assert.Equal(Enumerable.Range(1, 40), told);
+    }
 }
