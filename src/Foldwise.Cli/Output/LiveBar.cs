@@ -61,10 +61,11 @@ internal sealed class LiveBar
         Redraw();
     }
 
-    /// <summary>Shows, beside the counts, the rounds a slot's trial has trained on every fold (its folds finish together at the end).</summary>
-    public void RoundTrained(SlotRoundTrained round)
+    /// <summary>Shows, beside the counts, the folds a slot's trial has prepared, then the rounds it has trained on every fold (its folds finish together at the end).</summary>
+    public void Advanced(SlotTrialAdvanced advance)
     {
-        slots[round.Worker + "/" + round.Slot] = (round.TrialId, $"round {round.Round}/{round.Budget}");
+        string stage = advance.Round == 0 ? $"{advance.FoldsReady}/{advance.Folds} folds prepared" : $"round {advance.Round}/{advance.Budget}";
+        slots[advance.Worker + "/" + advance.Slot] = (advance.TrialId, stage);
         Redraw();
     }
 

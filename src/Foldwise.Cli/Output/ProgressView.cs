@@ -18,7 +18,7 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
     private LiveBar? live;
     private IReadOnlyDictionary<string, ParameterSpace> spaces = new Dictionary<string, ParameterSpace>();
     private readonly StepLine stepLine = new(console);
-    private readonly RoundLineThrottle roundLines = new();
+    private readonly AdvanceLineThrottle advanceLines = new();
 
     public void Report(SearchEvent value)
     {
@@ -106,8 +106,8 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
             case SlotFoldFitted f:
                 FoldFitted(f);
                 break;
-            case SlotRoundTrained r:
-                RoundTrained(r);
+            case SlotTrialAdvanced a:
+                Advanced(a);
                 break;
             case SearchStopped s:
                 Stopped(s.Progress);
@@ -173,15 +173,15 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
         }
     }
 
-    private void RoundTrained(SlotRoundTrained r)
+    private void Advanced(SlotTrialAdvanced a)
     {
         if (live is not null)
         {
-            live.RoundTrained(r);
+            live.Advanced(a);
         }
-        else if (roundLines.Due(r))
+        else if (advanceLines.Due(a))
         {
-            console.Profile.Out.Writer.WriteLine($"  trial {r.TrialId}: round {r.Round} of {r.Budget} trained on every fold after {r.Elapsed.TotalSeconds:F0} s ({r.Worker}/{r.Slot})");
+            console.Profile.Out.Writer.WriteLine($"  trial {a.TrialId}: {a.Stage} after {a.Elapsed.TotalSeconds:F0} s ({a.Worker}/{a.Slot})");
         }
     }
 

@@ -123,7 +123,7 @@ public sealed partial class SlotRunner(
             var executor = new TrialExecutor(learners.Get(lease.Family));
             var parameters = ParameterSet.Of(lease.Parameters);
             using var folds = new FoldSpans(span?.Context ?? default, lease.TrialId, trialData.Folds.FoldCount);
-            var rounds = new ReportPace(time);
+            var advancing = new ReportPace(time);
             var outcome = await Task.Factory.StartNew(
                 () => executor.Run(
                     trialData,
@@ -138,11 +138,11 @@ public sealed partial class SlotRunner(
                         events.Report(new SlotFoldFitted(options.Name, slot, lease.TrialId, fold, trialData.Folds.FoldCount, clock.Elapsed));
                     },
                     lease.PredictsTest,
-                    round =>
+                    (ready, round) =>
                     {
-                        if (rounds.Due(out var elapsed))
+                        if (advancing.Due(out _))
                         {
-                            events.Report(new SlotRoundTrained(options.Name, slot, lease.TrialId, round, lease.Budget, elapsed));
+                            events.Report(new SlotTrialAdvanced(options.Name, slot, lease.TrialId, ready, trialData.Folds.FoldCount, round, lease.Budget, clock.Elapsed));
                         }
                     }),
                 abandon.Token,

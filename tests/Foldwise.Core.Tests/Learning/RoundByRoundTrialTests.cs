@@ -118,16 +118,17 @@ public sealed class RoundByRoundTrialTests
     }
 
     [Fact]
-    public void Each_round_trained_on_every_fold_is_told_as_it_ends()
+    public void Each_fold_prepared_and_each_round_trained_on_every_fold_is_told_as_it_ends()
     {
-        // Given folds whose best is after 30 rounds and a trial of 100 rounds that is told each round
+        // Given folds whose best is after 30 rounds and a trial of 100 rounds that is told how far it has come
         var learner = new CurveLearner(BestAt30);
-        var told = new List<int>();
+        var told = new List<(int FoldsReady, int Round)>();
 
         // When it runs
-        new TrialExecutor(learner, RoundStopping.Default).Run(Data, ParameterSet.Of([]), 100, seed: 1, threads: 1, CancellationToken.None, roundDone: told.Add);
+        new TrialExecutor(learner, RoundStopping.Default).Run(
+            Data, ParameterSet.Of([]), 100, seed: 1, threads: 1, CancellationToken.None, advanced: (ready, round) => told.Add((ready, round)));
 
-        // Then it was told rounds 1 to 40 in order, where it stopped
-        Assert.Equal(Enumerable.Range(1, 40), told);
+        // Then it was told the 5 folds prepared one by one, then rounds 1 to 40 in order, where it stopped
+        Assert.Equal([.. Enumerable.Range(1, 5).Select(f => (f, 0)), .. Enumerable.Range(1, 40).Select(r => (5, r))], told);
     }
 }
