@@ -36,6 +36,18 @@ internal sealed class LiveBar
             });
     }
 
+    /// <summary>Takes a finished trial (scored or failed for good) off its slot and shows the new counts.</summary>
+    public void Ended(TrialRecord trial, SearchProgress progress)
+    {
+        string slot = trial.Worker + "/" + trial.Slot;
+        if (slots.TryGetValue(slot, out var shown) && shown.TrialId == trial.Id)
+        {
+            slots.Remove(slot);
+        }
+
+        Update(progress);
+    }
+
     public void Update(SearchProgress progress)
     {
         latest = progress;
@@ -43,6 +55,16 @@ internal sealed class LiveBar
         {
             Update(task.Task.Result, progress, definition, Folds());
         }
+    }
+
+    /// <summary>
+    /// Shows, beside the counts, where a trial was leased: a worker's slots tell their own screen how far they have come,
+    /// not the coordinator's, so for them this is all the bar shows until the trial is scored.
+    /// </summary>
+    public void Started(TrialStarted started)
+    {
+        slots[started.Trial.Worker + "/" + started.Trial.Slot] = (started.Trial.Id, "on " + started.Trial.Worker + "/" + started.Trial.Slot);
+        Redraw();
     }
 
     /// <summary>Shows, beside the counts, how far each slot's running trial has come (its last fold fitted).</summary>

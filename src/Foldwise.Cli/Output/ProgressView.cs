@@ -98,13 +98,16 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
                 break;
             case TrialFailed f:
                 console.MarkupLine($"[red]Trial {f.Trial.Id} failed for good: {Markup.Escape(f.Trial.FailureReason ?? "no reason recorded")}[/]");
-                live?.Update(f.Progress);
+                live?.Ended(f.Trial, f.Progress);
                 break;
             case WorkerQuarantined q:
                 console.MarkupLine($"[red]Worker {Markup.Escape(q.Worker)} quarantined: {Markup.Escape(q.Reason)}; it gets no more trials of this search[/]");
                 break;
             case SlotFoldFitted f:
                 FoldFitted(f);
+                break;
+            case TrialStarted t:
+                live?.Started(t);
                 break;
             case SlotTrialAdvanced a:
                 Advanced(a);
@@ -148,7 +151,7 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
     {
         if (live is not null)
         {
-            live.Update(t.Progress);
+            live.Ended(t.Trial, t.Progress);
             return;
         }
 
