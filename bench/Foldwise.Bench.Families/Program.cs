@@ -14,6 +14,7 @@ using Foldwise.Learners;
 // default space, on the demo table or on a CSV pair; repeated in rounds so that load from elsewhere hits all alike.
 //   --demo quick|full (default full) | --train F --test F --id C --target C
 //   --budgets lightgbm=400,fasttree=400,forest=300,gam=1000,linear=50   --rounds 2   --threads 1   --seed 1
+//   --busy N: N busy-loop processes run beside the trials (a shared machine), stopped at the end
 var options = args.Select((a, i) => (a, i)).Where(p => p.a.StartsWith("--", StringComparison.Ordinal))
     .ToDictionary(p => p.a, p => p.i + 1 < args.Length ? args[p.i + 1] : "", StringComparer.Ordinal);
 string Get(string name, string fallback) => options.TryGetValue(name, out var v) ? v : fallback;
@@ -48,16 +49,30 @@ Console.WriteLine($"{source}: {train.RowCount} training rows x {train.FeatureCou
 
 var seconds = budgets.Keys.ToDictionary(f => f, _ => new List<double>());
 var scores = new Dictionary<string, double>();
-for (int round = 0; round < rounds; round++)
+var busy = Enumerable.Range(0, int.Parse(Get("--busy", "0"), CultureInfo.InvariantCulture))
+    .Select(_ => Process.Start("sh", ["-c", "while :; do :; done"])).ToList();
+try
 {
-    foreach (var (family, budget) in budgets)
+    for (int round = 0; round < rounds; round++)
     {
-        var learner = LearnerCatalog.BuiltIn.Get(family);
-        var clock = Stopwatch.StartNew();
-        var outcome = new TrialExecutor(learner).Run(data, Middle(DefaultSpaces.For(family)), budget, seed, threads, CancellationToken.None, _ => { });
-        seconds[family].Add(clock.Elapsed.TotalSeconds);
-        scores[family] = outcome.Score;
+        foreach (var (family, budget) in budgets)
+        {
+            var learner = LearnerCatalog.BuiltIn.Get(family);
+            var clock = Stopwatch.StartNew();
+            var outcome = new TrialExecutor(learner).Run(data, Middle(DefaultSpaces.For(family)), budget, seed, threads, CancellationToken.None, _ => { });
+            seconds[family].Add(clock.Elapsed.TotalSeconds);
+            scores[family] = outcome.Score;
+        }
     }
+}
+finally
+{
+    busy.ForEach(p => p.Kill());
+}
+
+if (busy.Count > 0)
+{
+    Console.WriteLine($"beside {busy.Count} busy-loop processes; load at the end {File.ReadAllText("/proc/loadavg").Trim()}");
 }
 
 double reference = seconds.TryGetValue(FamilyNames.LightGbm, out var l) ? l.Min() : double.NaN;

@@ -74,21 +74,22 @@ internal static class PairBench
             _ => throw new ArgumentException($"unknown table {table}"),
         };
         var data = TrialData.From(train, test, SeededKFold.Plan(train.RowCount, 5, 7), Metric.Rmsle);
-        var parameters = new Dictionary<string, double>
+        // Every trial is a new candidate: its own min_leaf_rows (so no trial borrows another's binned Datasets, as
+        // in a search where promotions alone reuse them) and its whole budget (no round stopping), in every mode.
+        Dictionary<string, double> Parameters(int seed) => new()
         {
-            ["learning_rate"] = 0.05, ["leaves"] = 31, ["min_leaf_rows"] = 20, ["feature_fraction"] = 0.5, ["row_fraction"] = 0.8, ["l2"] = 1,
+            ["learning_rate"] = 0.05, ["leaves"] = 31, ["min_leaf_rows"] = 13 + seed, ["feature_fraction"] = 0.5, ["row_fraction"] = 0.8, ["l2"] = 1,
         };
-        var set = ParameterSet.Of(parameters);
         Action<int> trial = mode switch
         {
-            "old" => seed => new TrialExecutor(new MlNetLightGbmLearner()).Run(data, set, rounds, seed, 2, CancellationToken.None),
-            "new" => seed => new TrialExecutor(new LightGbmLearner()).Run(data, set, rounds, seed, 1, CancellationToken.None),
-            "wide" => seed => new TrialExecutor(new LightGbmLearner()).Run(data, set, rounds, seed, 2, CancellationToken.None),
+            "old" => seed => new TrialExecutor(new MlNetLightGbmLearner(), null).Run(data, ParameterSet.Of(Parameters(seed)), rounds, seed, 2, CancellationToken.None),
+            "new" => seed => new TrialExecutor(new LightGbmLearner(), null).Run(data, ParameterSet.Of(Parameters(seed)), rounds, seed, 1, CancellationToken.None),
+            "wide" => seed => new TrialExecutor(new LightGbmLearner(), null).Run(data, ParameterSet.Of(Parameters(seed)), rounds, seed, 2, CancellationToken.None),
             "bare" or "fixed" => seed =>
             {
                 for (int f = 0; f < 5; f++)
                 {
-                    BareLightGbm.Fold(data, f, BareLightGbm.Parameters(parameters, seed + (1000 * f), 1), mode == "bare" ? rounds : 0);
+                    BareLightGbm.Fold(data, f, BareLightGbm.Parameters(Parameters(seed), seed + (1000 * f), 1), mode == "bare" ? rounds : 0);
                 }
             },
             _ => throw new ArgumentException($"unknown mode {mode}"),

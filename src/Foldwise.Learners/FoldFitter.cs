@@ -40,6 +40,11 @@ internal static class FoldFitter
     {
         ArgumentNullException.ThrowIfNull(job);
         ArgumentNullException.ThrowIfNull(model);
+        return PoolThreadFits.Run(() => PredictKeptHere(family, job, model));
+    }
+
+    private static double[] PredictKeptHere(string family, FoldJob job, byte[] model)
+    {
         var ml = new MLContext(job.Seed);
         var inputs = job.Features.For(FamilyDescriptors.Get(family).Input, job.TrainRows);
         using var stream = new MemoryStream(model, writable: false);
@@ -65,7 +70,11 @@ internal static class FoldFitter
     /// </summary>
     private static bool RunsBesideOthers(string family) => family is FamilyNames.Forest or FamilyNames.Gam or FamilyNames.Linear;
 
-    private static KeptFold Run(string family, FamilyInput input, FoldJob job, Func<MLContext, IDataView, ITransformer> train, bool keep, CancellationToken cancellation)
+    /// <summary>Every ML.NET fit runs on a pool thread (<see cref="PoolThreadFits"/>).</summary>
+    private static KeptFold Run(string family, FamilyInput input, FoldJob job, Func<MLContext, IDataView, ITransformer> train, bool keep, CancellationToken cancellation) =>
+        PoolThreadFits.Run(() => RunHere(family, input, job, train, keep, cancellation));
+
+    private static KeptFold RunHere(string family, FamilyInput input, FoldJob job, Func<MLContext, IDataView, ITransformer> train, bool keep, CancellationToken cancellation)
     {
         Check(family, job);
         cancellation.ThrowIfCancellationRequested();
