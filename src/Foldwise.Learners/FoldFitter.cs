@@ -13,12 +13,12 @@ namespace Foldwise.Learners;
 internal static class FoldFitter
 {
     /// <summary>
-    /// One ML.NET fit at a time per process: ML.NET serialises its own LightGBM training (two fits started together in one
-    /// process took 22.5 s against 22.1 s one after the other, measured 2026-12-01), and concurrent fits of its
-    /// LightGBM and FastTree trainers in one test process crashed the process natively (seen 2026-12-02). The native
-    /// LightGBM learner takes no part in this lock, so its fits run beside these.
+    /// ML.NET's LightGBM trainer fits alone in a process: ML.NET serialises its own LightGBM training (two fits started
+    /// together in one process took 22.5 s against 22.1 s one after the other, measured 2026-12-01), and concurrent
+    /// fits of its LightGBM and FastTree trainers in one test process crashed the process natively (seen 2026-12-02).
+    /// It takes this lock to write, every other ML.NET fit to read. The native LightGBM learner takes no part in it.
     /// </summary>
-    private static readonly Lock OneFitAtATime = new();
+    private static readonly ReaderWriterLockSlim MlNetLightGbmAlone = new(LockRecursionPolicy.NoRecursion);
 
     /// <summary>The family's descriptor says which inputs it reads (<see cref="FamilyInput"/>); they are prepared from the fold's training rows.</summary>
     public static FoldPrediction Fit(string family, FoldJob job, Func<MLContext, IDataView, ITransformer> train, CancellationToken cancellation) =>
@@ -64,11 +64,12 @@ internal static class FoldFitter
     private static bool ScoresDenseRows(string family) => family is FamilyNames.FastTree or FamilyNames.Forest;
 
     /// <summary>
-    /// Forest, GAM and linear fits skip the lock: run side by side in one process they predict bit for bit what they
-    /// predict alone (ConcurrentFitTests), and behind the lock a worker's second slot waited for the first slot's fit
-    /// (two 100-tree forest folds side by side finished at 0.40 s and 0.80 s against 0.36 s alone, seen 2026-12-05).
+    /// FastTree, forest, GAM and linear fits share the lock: run side by side in one process they predict bit for bit
+    /// what they predict alone (ConcurrentFitTests), and behind a one-fit lock a worker's second slot waited for the first
+    /// slot's fit (two 100-tree forest folds side by side finished at 0.40 s and 0.80 s against 0.36 s alone, seen
+    /// 2026-12-05). Only ML.NET's LightGBM trainer, kept as a reference for the native learner, fits alone.
     /// </summary>
-    private static bool RunsBesideOthers(string family) => family is FamilyNames.Forest or FamilyNames.Gam or FamilyNames.Linear;
+    private static bool RunsBesideOthers(string family) => family is not FamilyNames.LightGbm;
 
     /// <summary>Every ML.NET fit runs on a pool thread (<see cref="PoolThreadFits"/>).</summary>
     private static KeptFold Run(string family, FamilyInput input, FoldJob job, Func<MLContext, IDataView, ITransformer> train, bool keep, CancellationToken cancellation) =>
@@ -89,10 +90,14 @@ internal static class FoldFitter
         var trainView = SparseViews.Rows(ml, inputs.Train, job.TrainRows, centred);
 
         // ML.NET 5's public API offers no way to interrupt a fit, so cancellation is honoured around it.
-        bool locked = !RunsBesideOthers(family);
-        if (locked)
+        bool alone = !RunsBesideOthers(family);
+        if (alone)
         {
-            OneFitAtATime.Enter();
+            MlNetLightGbmAlone.EnterWriteLock();
+        }
+        else
+        {
+            MlNetLightGbmAlone.EnterReadLock();
         }
 
         try
@@ -105,9 +110,13 @@ internal static class FoldFitter
         }
         finally
         {
-            if (locked)
+            if (alone)
             {
-                OneFitAtATime.Exit();
+                MlNetLightGbmAlone.ExitWriteLock();
+            }
+            else
+            {
+                MlNetLightGbmAlone.ExitReadLock();
             }
         }
     }
