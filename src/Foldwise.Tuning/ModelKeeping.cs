@@ -38,7 +38,7 @@ public static class ModelKeeping
         var clock = Stopwatch.StartNew();
         try
         {
-            var (kept, refitted) = KeepMembers(store, header, definition, outDir, blend, abandon);
+            var (kept, refitted) = KeepMembers(store, header, definition, outDir, blend, events, abandon);
             store.SaveKept(kept);
             RemoveUnused(outDir, kept);
             events.Report(new ModelsKept(kept, KeptModelFiles.FolderIn(outDir), refitted, clock.Elapsed));
@@ -64,7 +64,8 @@ public static class ModelKeeping
         }
     }
 
-    private static (KeptModels Kept, int Refitted) KeepMembers(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, BlendSummary blend, CancellationToken abandon)
+    private static (KeptModels Kept, int Refitted) KeepMembers(
+        SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, BlendSummary blend, IProgress<SearchEvent> events, CancellationToken abandon)
     {
         var earlier = store.LoadKept();
         var weighted = blend.Members.Where(m => m.Weight > 0).ToList();
@@ -96,11 +97,21 @@ public static class ModelKeeping
             // One thread per fit and the members side by side, as a worker's slots run (single-threaded fits, one per
             // core, were the fastest way to use a machine's cores in every case measured); the results do not depend on it.
             var options = new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount, CancellationToken = abandon };
+            var pacer = ProgressPacer.For(PreparationStep.Refitting, $"{refit.Count} blend member(s)", events);
+            int folds = refit.Count * header.Folds.FoldCount, fitted = 0;
+            void FoldDone(int fold)
+            {
+                lock (pacer)
+                {
+                    pacer.Tick(++fitted, folds);
+                }
+            }
+
             Parallel.ForEach(refit, options, member =>
             {
                 var fit = TrialFit.Refit(trials[member.TrialId], trials, definition);
                 var keeping = new KeepingLearner(LearnerCatalog.BuiltIn.Get(member.Family));
-                var outcome = new TrialExecutor(keeping, stopping: null).Run(data, fit.Run, fit.Budget, fit.Seed, threads: 1, abandon);
+                var outcome = new TrialExecutor(keeping, stopping: null).Run(data, fit.Run, fit.Budget, fit.Seed, threads: 1, abandon, FoldDone);
                 lock (refitted)
                 {
                     refitted[member.TrialId] = new Refit(keeping.Models, LargestDifference(outcome.Test, searched[member.TrialId]));

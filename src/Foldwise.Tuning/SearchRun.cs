@@ -45,8 +45,8 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
         var prepared = SearchPreparation.Prepare(definition, events);
         definition = prepared.Definition;
         Directory.CreateDirectory(outDir);
-        string trainHash = TableFiles.Write(outDir, prepared.Train);
-        string testHash = TableFiles.Write(outDir, prepared.Test);
+        string trainHash = TableFiles.Write(outDir, prepared.Train, ProgressPacer.For(PreparationStep.Writing, "the screened training table", events).Tick);
+        string testHash = TableFiles.Write(outDir, prepared.Test, ProgressPacer.For(PreparationStep.Writing, "the screened test table", events).Tick);
         using var store = SearchStore.Create(storePath);
         var header = new SearchHeader
         {

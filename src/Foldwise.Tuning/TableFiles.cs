@@ -12,16 +12,21 @@ public static class TableFiles
     /// Encodes the table straight into a partial file, hashing as it writes, and renames it to its hash, so a kill
     /// mid-write never leaves a truncated table under its hash and the encoding is never one array. Returns the hash.
     /// </summary>
-    public static string Write(string outDir, FeatureTable table)
+    /// <param name="bytesWritten">Told the bytes written so far as the encoding goes (its length is not known before).</param>
+    public static string Write(string outDir, FeatureTable table, Action<long, long>? bytesWritten = null)
     {
         string folder = Path.Combine(outDir, "tables");
         Directory.CreateDirectory(folder);
         string partial = Path.Combine(folder, "encoding." + Environment.ProcessId + ".part");
         string hash;
-        using (var stream = new FileStream(partial, FileMode.Create, FileAccess.Write, FileShare.None, bufferSize: 1))
+        using (var file = new FileStream(partial, FileMode.Create, FileAccess.Write, FileShare.None, bufferSize: 1))
         {
-            hash = TableCodec.Encode(table, stream);
-            stream.Flush(flushToDisk: true);
+            using (var counted = new CountingStream(file, bytesWritten))
+            {
+                hash = TableCodec.Encode(table, counted);
+            }
+
+            file.Flush(flushToDisk: true);
         }
 
         File.Move(partial, PathOf(outDir, hash), overwrite: true);

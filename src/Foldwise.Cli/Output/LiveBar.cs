@@ -15,7 +15,9 @@ internal sealed class LiveBar
     private readonly TaskCompletionSource<ProgressTask> task = new(TaskCreationOptions.RunContinuationsAsynchronously);
     private readonly TaskCompletionSource<SearchProgress> end = new(TaskCreationOptions.RunContinuationsAsynchronously);
     private readonly Task running;
-    private readonly Dictionary<string, SlotFoldFitted> folds = new(StringComparer.Ordinal);
+
+    /// <summary>Each slot's running trial and how far it has come, by worker/slot.</summary>
+    private readonly Dictionary<string, (int TrialId, string Text)> slots = new(StringComparer.Ordinal);
     private SearchProgress? latest;
 
     public LiveBar(IAnsiConsole console, SearchDefinition definition)
@@ -34,6 +36,18 @@ internal sealed class LiveBar
             });
     }
 
+    /// <summary>Takes a finished trial (scored or failed for good) off its slot and shows the new counts.</summary>
+    public void Ended(TrialRecord trial, SearchProgress progress)
+    {
+        string slot = trial.Worker + "/" + trial.Slot;
+        if (slots.TryGetValue(slot, out var shown) && shown.TrialId == trial.Id)
+        {
+            slots.Remove(slot);
+        }
+
+        Update(progress);
+    }
+
     public void Update(SearchProgress progress)
     {
         latest = progress;
@@ -43,26 +57,54 @@ internal sealed class LiveBar
         }
     }
 
+    /// <summary>
+    /// Shows, beside the counts, where a trial was leased: a worker's slots tell their own screen how far they have come,
+    /// not the coordinator's, so for them this is all the bar shows until the trial is scored.
+    /// </summary>
+    public void Started(TrialStarted started)
+    {
+        slots[started.Trial.Worker + "/" + started.Trial.Slot] = (started.Trial.Id, "on " + started.Trial.Worker + "/" + started.Trial.Slot);
+        Redraw();
+    }
+
     /// <summary>Shows, beside the counts, how far each slot's running trial has come (its last fold fitted).</summary>
     public void FoldFitted(SlotFoldFitted fold)
     {
         string slot = fold.Worker + "/" + fold.Slot;
         if (fold.Fold + 1 >= fold.Folds)
         {
-            folds.Remove(slot);
+            slots.Remove(slot);
         }
         else
         {
-            folds[slot] = fold;
+            slots[slot] = (fold.TrialId, $"{fold.Fold + 1}/{fold.Folds} folds");
         }
 
+        Redraw();
+    }
+
+    /// <summary>Shows, beside the counts, the folds a slot's trial has prepared, then the rounds it has trained on every fold (its folds finish together at the end).</summary>
+    public void Advanced(SlotTrialAdvanced advance)
+    {
+        string stage = advance.Round == 0 ? $"{advance.FoldsReady}/{advance.Folds} folds prepared" : $"round {advance.Round}/{advance.Budget}";
+        slots[advance.Worker + "/" + advance.Slot] = (advance.TrialId, stage);
+        Redraw();
+    }
+
+    private void Redraw()
+    {
         if (latest is { } progress)
         {
             Update(progress);
         }
+        else if (task.Task.IsCompletedSuccessfully)
+        {
+            // No trial has finished yet: the first ones' progress is all there is to show.
+            task.Task.Result.Description = Markup.Escape("first trials running" + Folds());
+        }
     }
 
-    private string Folds() => string.Concat(folds.Values.OrderBy(f => f.TrialId).Select(f => $" · trial {f.TrialId} {f.Fold + 1}/{f.Folds} folds"));
+    private string Folds() => string.Concat(slots.Values.OrderBy(r => r.TrialId).Select(r => $" · trial {r.TrialId} {r.Text}"));
 
     /// <summary>Closes the bar and waits until it is drawn for the last time.</summary>
     public void Finish(SearchProgress progress)

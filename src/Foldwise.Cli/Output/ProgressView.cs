@@ -18,6 +18,7 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
     private LiveBar? live;
     private IReadOnlyDictionary<string, ParameterSpace> spaces = new Dictionary<string, ParameterSpace>();
     private readonly StepLine stepLine = new(console);
+    private readonly AdvanceLineThrottle advanceLines = new();
 
     public void Report(SearchEvent value)
     {
@@ -97,13 +98,19 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
                 break;
             case TrialFailed f:
                 console.MarkupLine($"[red]Trial {f.Trial.Id} failed for good: {Markup.Escape(f.Trial.FailureReason ?? "no reason recorded")}[/]");
-                live?.Update(f.Progress);
+                live?.Ended(f.Trial, f.Progress);
                 break;
             case WorkerQuarantined q:
                 console.MarkupLine($"[red]Worker {Markup.Escape(q.Worker)} quarantined: {Markup.Escape(q.Reason)}; it gets no more trials of this search[/]");
                 break;
             case SlotFoldFitted f:
                 FoldFitted(f);
+                break;
+            case TrialStarted t:
+                live?.Started(t);
+                break;
+            case SlotTrialAdvanced a:
+                Advanced(a);
                 break;
             case SearchStopped s:
                 Stopped(s.Progress);
@@ -144,7 +151,7 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
     {
         if (live is not null)
         {
-            live.Update(t.Progress);
+            live.Ended(t.Trial, t.Progress);
             return;
         }
 
@@ -166,6 +173,18 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
         else if (f.IsLong)
         {
             console.Profile.Out.Writer.WriteLine($"  trial {f.TrialId}: fold {f.Fold + 1} of {f.Folds} fitted after {f.Elapsed.TotalSeconds:F0} s ({f.Worker}/{f.Slot})");
+        }
+    }
+
+    private void Advanced(SlotTrialAdvanced a)
+    {
+        if (live is not null)
+        {
+            live.Advanced(a);
+        }
+        else if (advanceLines.Due(a))
+        {
+            console.Profile.Out.Writer.WriteLine($"  trial {a.TrialId}: {a.Stage} after {a.Elapsed.TotalSeconds:F0} s ({a.Worker}/{a.Slot})");
         }
     }
 

@@ -47,6 +47,8 @@ internal sealed class StepLine(IAnsiConsole console)
         return step.Step switch
         {
             PreparationStep.Screening => string.Create(CultureInfo.InvariantCulture, $"Screening {step.Subject}: {step.Done:N0} of {step.Total:N0} columns, {seconds}"),
+            PreparationStep.Writing => string.Create(CultureInfo.InvariantCulture, $"Writing {step.Subject}: {Megabytes(step.Done)} MB, {seconds}"),
+            PreparationStep.Refitting => string.Create(CultureInfo.InvariantCulture, $"Re-fitting {step.Subject} to keep their models: {step.Done:N0} of {step.Total:N0} folds, {seconds}"),
             PreparationStep.Fetching => string.Create(CultureInfo.InvariantCulture, $"Fetching {step.Subject}: {step.Fraction:P0} ({Megabytes(step.Done)} of {Megabytes(step.Total)} MB), {seconds}"),
             _ => string.Create(CultureInfo.InvariantCulture, $"Reading {step.Subject}: {step.Fraction:P0} ({Megabytes(step.Done)} of {Megabytes(step.Total)} MB), {seconds}"),
         };

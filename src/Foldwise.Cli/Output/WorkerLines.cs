@@ -10,12 +10,14 @@ public sealed class WorkerLines(TextWriter output) : IProgress<SearchEvent>
 {
     // A worker's screen is a plain log: a fetch's progress is shown at most every StepThrottle.Interval.
     private readonly StepThrottle steps = new();
+    private readonly AdvanceLineThrottle advances = new();
 
     public void Report(SearchEvent value)
     {
         string? line = value switch
         {
             StepProgress p when steps.Due(p) => StepLine.Describe(p),
+            SlotTrialAdvanced a when advances.Due(a) => $"Slot {a.Slot}: trial {a.TrialId}: {a.Stage} after {a.Elapsed.TotalSeconds:F0} s",
             SlotFoldFitted f when f.IsLong => $"Slot {f.Slot}: trial {f.TrialId} fold {f.Fold + 1} of {f.Folds} fitted after {f.Elapsed.TotalSeconds:F0} s",
             WorkerStarting s => $"Worker {s.Name} joining {s.Join} from {s.Advertise}" + (s.MutualTls ? " (mutual TLS)" : " (no certificate)") + "; Ctrl-C to leave",
             WorkerJoined j => $"Joined the cluster at {j.Join} as {j.Name} with {j.Slots} slot(s), {j.Threads} thread(s) each",

@@ -123,13 +123,28 @@ public sealed partial class SlotRunner(
             var executor = new TrialExecutor(learners.Get(lease.Family));
             var parameters = ParameterSet.Of(lease.Parameters);
             using var folds = new FoldSpans(span?.Context ?? default, lease.TrialId, trialData.Folds.FoldCount);
+            var advancing = new ReportPace(time);
             var outcome = await Task.Factory.StartNew(
-                () => executor.Run(trialData, parameters, lease.Budget, lease.Seed, options.Threads, abandon.Token, fold =>
-                {
-                    folds.FoldDone(fold);
-                    events.Report(new SlotFoldFitted(options.Name, slot, lease.TrialId, fold, trialData.Folds.FoldCount, clock.Elapsed));
-                },
-                lease.PredictsTest),
+                () => executor.Run(
+                    trialData,
+                    parameters,
+                    lease.Budget,
+                    lease.Seed,
+                    options.Threads,
+                    abandon.Token,
+                    fold =>
+                    {
+                        folds.FoldDone(fold);
+                        events.Report(new SlotFoldFitted(options.Name, slot, lease.TrialId, fold, trialData.Folds.FoldCount, clock.Elapsed));
+                    },
+                    lease.PredictsTest,
+                    (ready, round) =>
+                    {
+                        if (advancing.Due(out _))
+                        {
+                            events.Report(new SlotTrialAdvanced(options.Name, slot, lease.TrialId, ready, trialData.Folds.FoldCount, round, lease.Budget, clock.Elapsed));
+                        }
+                    }),
                 abandon.Token,
                 TaskCreationOptions.LongRunning,
                 TaskScheduler.Default);

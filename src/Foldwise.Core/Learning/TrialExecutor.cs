@@ -29,9 +29,22 @@ public sealed class TrialExecutor
         this.stopping = stopping;
     }
 
+    /// <param name="foldDone">Told each fold (0-based) as its predictions are pooled.</param>
     /// <param name="predictsTest">False: the test table is not predicted and the outcome's test vector is empty.</param>
+    /// <param name="advanced">
+    /// For a family that trains round by round, told (folds prepared, rounds trained on every fold) as each fold's rows
+    /// are prepared, with 0 rounds, and after each round.
+    /// </param>
     public TrialOutcome Run(
-        TrialData data, ParameterSet parameters, int budget, int seed, int threads, CancellationToken cancellation, Action<int>? foldDone = null, bool predictsTest = true)
+        TrialData data,
+        ParameterSet parameters,
+        int budget,
+        int seed,
+        int threads,
+        CancellationToken cancellation,
+        Action<int>? foldDone = null,
+        bool predictsTest = true,
+        Action<int, int>? advanced = null)
     {
         var folds = data.Folds;
         if (folds.RowCount != data.Train.RowCount)
@@ -40,7 +53,7 @@ public sealed class TrialExecutor
         }
 
         return learner is IRoundLearner rounds && stopping is not null
-            ? RunByRounds(rounds, stopping, data, parameters, budget, seed, threads, foldDone, predictsTest, cancellation)
+            ? RunByRounds(rounds, stopping, data, parameters, budget, seed, threads, foldDone, advanced, predictsTest, cancellation)
             : RunWhole(data, parameters, budget, seed, threads, foldDone, predictsTest, cancellation);
     }
 
@@ -68,7 +81,7 @@ public sealed class TrialExecutor
 
     private static TrialOutcome RunByRounds(
         IRoundLearner learner, RoundStopping stopping, TrialData data, ParameterSet parameters, int budget, int seed, int threads,
-        Action<int>? foldDone, bool predictsTest, CancellationToken cancellation)
+        Action<int>? foldDone, Action<int, int>? advanced, bool predictsTest, CancellationToken cancellation)
     {
         var fits = new List<IRoundFit>(data.Folds.FoldCount);
         try
@@ -79,6 +92,7 @@ public sealed class TrialExecutor
                 cancellation.ThrowIfCancellationRequested();
                 jobs.Add(Job(learner.Family, data, f, parameters, budget, seed, threads, predictsTest));
                 fits.Add(learner.Start(jobs[f], cancellation));
+                advanced?.Invoke(f + 1, 0);
             }
 
             // All folds advance together, so the pooled held-out score exists after every round.
@@ -100,6 +114,7 @@ public sealed class TrialExecutor
                 }
 
                 round++;
+                advanced?.Invoke(fits.Count, round);
                 for (int f = 0; f < fits.Count; f++)
                 {
                     Place(fits[f].HeldOutPredictions(), jobs[f], oof);

@@ -17,6 +17,16 @@ public sealed class StepLineTests
     }
 
     [Fact]
+    public void Describes_writing_in_megabytes_and_re_fitting_in_folds()
+    {
+        var writing = new StepProgress(PreparationStep.Writing, "the screened training table", 412_000_000, 0, TimeSpan.FromSeconds(6.4));
+        var refitting = new StepProgress(PreparationStep.Refitting, "2 blend member(s)", 3, 10, TimeSpan.FromSeconds(41));
+
+        Assert.Equal("Writing the screened training table: 412 MB, 6 s", StepLine.Describe(writing));
+        Assert.Equal("Re-fitting 2 blend member(s) to keep their models: 3 of 10 folds, 41 s", StepLine.Describe(refitting));
+    }
+
+    [Fact]
     public void Writes_a_plain_line_at_most_every_ten_seconds_of_one_step()
     {
         // Given a console that is not a terminal
@@ -46,5 +56,32 @@ public sealed class StepLineTests
 
         // Then only the long one has a line
         Assert.Equal("Slot 1: trial 5 fold 3 of 5 fitted after 41 s", output.ToString().Trim());
+    }
+
+    [Fact]
+    public void A_worker_shows_how_far_a_long_trial_has_come_every_ten_seconds_per_slot()
+    {
+        // Given a worker's screen
+        var output = new StringWriter();
+        var lines = new WorkerLines(output);
+
+        // When slot 0's trial reports each second from 2 to 31 s (its 5 folds prepared by 14 s, then a round a second),
+        // and slot 1's quick trial at 3 s
+        for (int s = 2; s <= 31; s++)
+        {
+            int ready = Math.Min(5, s / 3), round = Math.Max(0, s - 14);
+            lines.Report(new SlotTrialAdvanced("w1", "0", 7, ready, 5, round, 40, TimeSpan.FromSeconds(s)));
+        }
+
+        lines.Report(new SlotTrialAdvanced("w1", "1", 8, 5, 5, 3, 40, TimeSpan.FromSeconds(3)));
+
+        // Then slot 0 has lines at 10, 20 and 30 s (a trial is long from 10 s) and slot 1 none
+        Assert.Equal(
+            [
+                "Slot 0: trial 7: 3 of 5 folds prepared after 10 s",
+                "Slot 0: trial 7: round 6 of 40 trained on every fold after 20 s",
+                "Slot 0: trial 7: round 16 of 40 trained on every fold after 30 s",
+            ],
+            output.ToString().Split(Environment.NewLine, StringSplitOptions.RemoveEmptyEntries));
     }
 }

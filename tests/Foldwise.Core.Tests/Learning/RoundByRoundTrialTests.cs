@@ -116,4 +116,19 @@ public sealed class RoundByRoundTrialTests
         Assert.Equal(100, outcome.RoundsTrained);
         Assert.Equal(0.71, outcome.Score, 12);
     }
+
+    [Fact]
+    public void Each_fold_prepared_and_each_round_trained_on_every_fold_is_told_as_it_ends()
+    {
+        // Given folds whose best is after 30 rounds and a trial of 100 rounds that is told how far it has come
+        var learner = new CurveLearner(BestAt30);
+        var told = new List<(int FoldsReady, int Round)>();
+
+        // When it runs
+        new TrialExecutor(learner, RoundStopping.Default).Run(
+            Data, ParameterSet.Of([]), 100, seed: 1, threads: 1, CancellationToken.None, advanced: (ready, round) => told.Add((ready, round)));
+
+        // Then it was told the 5 folds prepared one by one, then rounds 1 to 40 in order, where it stopped
+        Assert.Equal([.. Enumerable.Range(1, 5).Select(f => (f, 0)), .. Enumerable.Range(1, 40).Select(r => (5, r))], told);
+    }
 }
