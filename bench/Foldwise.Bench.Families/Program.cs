@@ -15,6 +15,7 @@ using Foldwise.Learners;
 //   --demo quick|full (default full) | --train F --test F --id C --target C
 //   --budgets lightgbm=400,fasttree=400,forest=300,gam=1000,linear=50   --rounds 2   --threads 1   --seed 1
 //   --busy N: N busy-loop processes run beside the trials (a shared machine), stopped at the end
+//   --set leaves=47,l2=0.002: parameter values instead of the middle of the space (for every family that has them)
 var options = args.Select((a, i) => (a, i)).Where(p => p.a.StartsWith("--", StringComparison.Ordinal))
     .ToDictionary(p => p.a, p => p.i + 1 < args.Length ? args[p.i + 1] : "", StringComparer.Ordinal);
 string Get(string name, string fallback) => options.TryGetValue(name, out var v) ? v : fallback;
@@ -59,7 +60,7 @@ try
         {
             var learner = LearnerCatalog.BuiltIn.Get(family);
             var clock = Stopwatch.StartNew();
-            var outcome = new TrialExecutor(learner).Run(data, Middle(DefaultSpaces.For(family)), budget, seed, threads, CancellationToken.None, _ => { });
+            var outcome = new TrialExecutor(learner).Run(data, Chosen(DefaultSpaces.For(family)), budget, seed, threads, CancellationToken.None, _ => { });
             seconds[family].Add(clock.Elapsed.TotalSeconds);
             scores[family] = outcome.Score;
         }
@@ -81,6 +82,14 @@ foreach (var (family, list) in seconds)
 {
     Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
         $"{family,-10} {budgets[family],7} {string.Join(" ", list.Select(s => s.ToString("F1", CultureInfo.InvariantCulture))),-24} {list.Min(),7:F1} {list.Min() / reference,10:F2} {scores[family],10:F4}"));
+}
+
+ParameterSet Chosen(ParameterSpace space)
+{
+    var set = Get("--set", "").Split(',', StringSplitOptions.RemoveEmptyEntries).Select(p => p.Split('='))
+        .ToDictionary(p => p[0], p => double.Parse(p[1], CultureInfo.InvariantCulture));
+    var middle = Middle(space);
+    return ParameterSet.Of(space.Ranges.Select(r => KeyValuePair.Create(r.Name, set.TryGetValue(r.Name, out double v) ? v : middle[r.Name])));
 }
 
 // The middle of each range: the mean for linear scales, the geometric mean for log scales.
