@@ -21,9 +21,19 @@ public static class BlendStep
     /// <summary>
     /// <paramref name="abandon"/> is checked before the solve and again before anything is written, so an abandoned
     /// blend leaves the previous prediction file and blend record as they were. Its span is a child of
-    /// <paramref name="search"/> (the search's span) when given.
+    /// <paramref name="search"/> (the search's span) when given. <paramref name="tables"/>, the search's tables when the
+    /// process holds them, spare the members' re-fit reading the stored ones again.
     /// </summary>
-    public static BlendSummary Run(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, IProgress<SearchEvent> events, BlendOptions? options = null, ActivityContext search = default, CancellationToken abandon = default)
+    public static BlendSummary Run(
+        SearchStore store,
+        SearchHeader header,
+        SearchDefinition definition,
+        string outDir,
+        IProgress<SearchEvent> events,
+        BlendOptions? options = null,
+        ActivityContext search = default,
+        SearchTables? tables = null,
+        CancellationToken abandon = default)
     {
         options ??= definition.Blend;
         using var span = FoldwiseTelemetry.Source.StartActivity(FoldwiseTelemetry.BlendSpan, ActivityKind.Internal, search);
@@ -59,7 +69,7 @@ public static class BlendStep
         span?.SetTag("foldwise.blend.mode", DefinitionWords.Of(result.Summary.Mode)).SetTag("foldwise.blend.pool", pool.Count)
             .SetTag("foldwise.blend.nested", result.Summary.NestedScore).SetTag("foldwise.blend.in_sample", result.Summary.InSampleScore);
         events.Report(new BlendSolved(result.Summary, definition.Metric, [.. trials], path, header.TestIds.Length));
-        ModelKeeping.Keep(store, header, definition, outDir, result.Summary, events, abandon);
+        ModelKeeping.Keep(store, header, definition, outDir, result.Summary, events, tables, abandon);
         return result.Summary;
     }
 }

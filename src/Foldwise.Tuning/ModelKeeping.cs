@@ -27,9 +27,18 @@ public static class ModelKeeping
 
     /// <summary>
     /// Keeps the members with a positive weight and records them in the store; on any failure the store's record of
-    /// kept models is removed (it would describe another blend) and <see cref="ModelsNotKept"/> says why.
+    /// kept models is removed (it would describe another blend) and <see cref="ModelsNotKept"/> says why. Members are
+    /// re-fitted on <paramref name="tables"/> when given (the search's own, in memory), else on the stored tables.
     /// </summary>
-    public static KeptModels? Keep(SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, BlendSummary blend, IProgress<SearchEvent> events, CancellationToken abandon = default)
+    public static KeptModels? Keep(
+        SearchStore store,
+        SearchHeader header,
+        SearchDefinition definition,
+        string outDir,
+        BlendSummary blend,
+        IProgress<SearchEvent> events,
+        SearchTables? tables = null,
+        CancellationToken abandon = default)
     {
         ArgumentNullException.ThrowIfNull(store);
         ArgumentNullException.ThrowIfNull(header);
@@ -38,7 +47,7 @@ public static class ModelKeeping
         var clock = Stopwatch.StartNew();
         try
         {
-            var (kept, refitted) = KeepMembers(store, header, definition, outDir, blend, events, abandon);
+            var (kept, refitted) = KeepMembers(store, header, definition, outDir, blend, tables, events, abandon);
             store.SaveKept(kept);
             RemoveUnused(outDir, kept);
             events.Report(new ModelsKept(kept, KeptModelFiles.FolderIn(outDir), refitted, clock.Elapsed));
@@ -65,7 +74,7 @@ public static class ModelKeeping
     }
 
     private static (KeptModels Kept, int Refitted) KeepMembers(
-        SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, BlendSummary blend, IProgress<SearchEvent> events, CancellationToken abandon)
+        SearchStore store, SearchHeader header, SearchDefinition definition, string outDir, BlendSummary blend, SearchTables? tables, IProgress<SearchEvent> events, CancellationToken abandon)
     {
         var earlier = store.LoadKept();
         var weighted = blend.Members.Where(m => m.Weight > 0).ToList();
@@ -91,8 +100,8 @@ public static class ModelKeeping
             var searched = refit.ToDictionary(
                 m => m.TrialId,
                 m => store.LoadVectors(m.TrialId)?.Test ?? throw new NotKeptException($"trial {m.TrialId}'s test predictions are missing from the store"));
-            var data = TrialData.From(
-                TableFiles.Read(outDir, header.TrainHash, "training"), TableFiles.Read(outDir, header.TestHash, "test"), header.Folds, Metric.For(definition.Metric)) with { LevelCodeFamilies = definition.LevelCodeFamilies() };
+            tables ??= new SearchTables(TableFiles.Read(outDir, header.TrainHash, "training"), TableFiles.Read(outDir, header.TestHash, "test"));
+            var data = TrialData.From(tables.Train, tables.Test, header.Folds, Metric.For(definition.Metric)) with { LevelCodeFamilies = definition.LevelCodeFamilies() };
 
             // One thread per fit and the members side by side, as a worker's slots run (single-threaded fits, one per
             // core, were the fastest way to use a machine's cores in every case measured); the results do not depend on it.

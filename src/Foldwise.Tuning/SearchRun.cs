@@ -196,7 +196,7 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
         BlendSummary blend;
         try
         {
-            blend = BlendStep.Run(store, header, definition, outDir, events, abandon: stopping.Abandon, search: span.Context);
+            blend = BlendStep.Run(store, header, definition, outDir, events, abandon: stopping.Abandon, search: span.Context, tables: new SearchTables(train, test));
         }
         catch (OperationCanceledException) when (stopping.Abandon.IsCancellationRequested)
         {

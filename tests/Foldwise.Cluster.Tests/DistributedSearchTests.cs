@@ -46,6 +46,23 @@ public sealed class DistributedSearchTests(TwoSiloCluster fixture)
     }
 
     [Fact]
+    public async Task A_worker_holds_only_its_latest_search_s_data_and_tables()
+    {
+        // Given a worker that served a search on its own tables
+        var worker = fixture.Worker;
+        await SearchSessions.RunUntilTheWorkerTakesPartAsync(fixture, "earlier", SearchSessions.Tables(trainRows: 33, testRows: 11));
+
+        // When it serves the next search, on other tables
+        var next = SearchSessions.Tables(trainRows: 39, testRows: 13);
+        var (latest, recorder) = await SearchSessions.RunUntilTheWorkerTakesPartAsync(fixture, "latest", next);
+
+        // Then it holds the latest search's data and tables only, not the earlier one's
+        Assert.Contains(recorder.Latest(), t => t.Worker == "worker");
+        Assert.Equal([latest.SearchId], worker.GetRequiredService<TrialDataCache>().Held);
+        Assert.Equal(new[] { TableHash.Of(next.Train), TableHash.Of(next.Test) }.Order(), worker.GetRequiredService<TableCache>().Held.Order());
+    }
+
+    [Fact]
     public async Task Reports_progress_through_the_search_grain()
     {
         var recorder = new MemoryRecorder();

@@ -20,6 +20,18 @@ public sealed class TableCache(IGrainFactory grains, WorkerOptions options, IPro
     /// <summary>Tables fetched over the network since start (a later search on the same table fetches nothing).</summary>
     public int Fetches { get; private set; }
 
+    /// <summary>The tables held in memory, by hash (a test reads it).</summary>
+    internal ICollection<string> Held => tables.Keys;
+
+    /// <summary>Lets every table but these go from memory; they stay in the disk cache.</summary>
+    public void HoldOnly(params string[] hashes)
+    {
+        foreach (string hash in tables.Keys.Where(h => !hashes.Contains(h)))
+        {
+            tables.TryRemove(hash, out _);
+        }
+    }
+
     /// <summary>Puts a table the process already holds (the coordinator's own slots never fetch).</summary>
     public void Seed(string hash, FeatureTable table) =>
         tables[hash] = new Lazy<Task<FeatureTable>>(Task.FromResult(table));

@@ -6,13 +6,27 @@ using Foldwise.Core.Metrics;
 
 namespace Foldwise.Cluster.Workers;
 
-/// <summary>Builds each search's <see cref="TrialData"/> once per worker (tables by hash, fold plan and metric from the manifest).</summary>
+/// <summary>
+/// Builds a search's <see cref="TrialData"/> once per worker (tables by hash, fold plan and metric from the manifest).
+/// A worker works for one coordinator, which runs one search at a time, so only the latest search's data is held:
+/// asking for a new search lets the earlier ones' data and tables go (a trial still running keeps what it holds; a
+/// later trial of an earlier search builds its data again), so a long-lived worker's memory does not grow with every
+/// search it served.
+/// </summary>
 public sealed class TrialDataCache(IGrainFactory grains, TableCache tables)
 {
     private readonly ConcurrentDictionary<string, Lazy<Task<TrialData>>> searches = new();
 
+    /// <summary>The searches whose data is held (a test reads it).</summary>
+    internal ICollection<string> Held => searches.Keys;
+
     public Task<TrialData> GetAsync(string searchId, CancellationToken cancellation)
     {
+        foreach (string earlier in searches.Keys.Where(id => id != searchId))
+        {
+            searches.TryRemove(earlier, out _);
+        }
+
         var entry = searches.GetOrAdd(searchId, id => new Lazy<Task<TrialData>>(() => BuildAsync(id, CancellationToken.None)));
         if (entry.Value.IsFaulted || entry.Value.IsCanceled)
         {
@@ -28,6 +42,7 @@ public sealed class TrialDataCache(IGrainFactory grains, TableCache tables)
         var manifest = await grains.GetGrain<ISearchGrain>(searchId).GetManifestAsync();
         var train = await tables.GetAsync(manifest.TrainHash, cancellation);
         var test = await tables.GetAsync(manifest.TestHash, cancellation);
+        tables.HoldOnly(manifest.TrainHash, manifest.TestHash);
         var folds = new FoldPlan(manifest.FoldCount, manifest.FoldSeed, [.. manifest.FoldOfRow]);
         var metric = Metric.For(Enum.Parse<MetricKind>(manifest.Metric));
         return TrialData.From(train, test, folds, metric) with { LevelCodeFamilies = [.. manifest.LevelCodeFamilies] };
