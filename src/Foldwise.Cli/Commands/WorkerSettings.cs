@@ -21,7 +21,7 @@ public sealed class WorkerSettings : CommandSettings
     public int Slots { get; init; } = WorkerOptions.DefaultSlots;
 
     [CommandOption("--threads <N>")]
-    [Description("Threads per slot. Default: the machine's cores divided among the slots (1 with the default slots).")]
+    [Description("Threads per fit in each slot. Default: 1, whatever the slot count (see the README on slots).")]
     public int? Threads { get; init; }
 
     [CommandOption("--port <P>")]
