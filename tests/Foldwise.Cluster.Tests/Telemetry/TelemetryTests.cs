@@ -60,6 +60,10 @@ public sealed class TelemetryTests(TwoSiloCluster fixture)
         Assert.True(tracer.ForceFlush(10_000));
         Assert.True(meter.ForceFlush(10_000));
 
+        // Activity listening is process-wide: other tests' spans could still land in the list while it is read, so the
+        // tracer stops listening first (a read once failed with "Collection was modified").
+        tracer.Dispose();
+
         // Then one search span parents one trial span per scored trial, on either silo (the lease carried its context),
         // and each trial span holds one span per fold
         var root = Assert.Single(spans, s => s.OperationName == FoldwiseTelemetry.SearchSpan && s.TraceId == search.Context.TraceId);
