@@ -64,12 +64,12 @@ internal static class FoldFitter
     private static bool ScoresDenseRows(string family) => family is FamilyNames.FastTree or FamilyNames.Forest;
 
     /// <summary>
-    /// FastTree, forest, GAM and linear fits share the lock: run side by side in one process they predict bit for bit
-    /// what they predict alone (ConcurrentFitTests), and behind a one-fit lock a worker's second slot waited for the first
-    /// slot's fit (two 100-tree forest folds side by side finished at 0.40 s and 0.80 s against 0.36 s alone, seen
-    /// 2026-12-05). Only ML.NET's LightGBM trainer, kept as a reference for the native learner, fits alone.
+    /// True only for ML.NET's LightGBM trainer, kept as a reference for the native learner. FastTree, forest, GAM and
+    /// linear fits run side by side in one process and predict bit for bit what they predict alone (ConcurrentFitTests);
+    /// behind a one-fit lock a worker's second slot waited for the first slot's fit (two 100-tree forest folds side by
+    /// side finished at 0.40 s and 0.80 s against 0.36 s alone, seen 2026-12-05).
     /// </summary>
-    private static bool RunsBesideOthers(string family) => family is not FamilyNames.LightGbm;
+    private static bool FitsAlone(string family) => family is FamilyNames.LightGbm;
 
     /// <summary>Every ML.NET fit runs on a pool thread (<see cref="PoolThreadFits"/>).</summary>
     private static KeptFold Run(string family, FamilyInput input, FoldJob job, Func<MLContext, IDataView, ITransformer> train, bool keep, CancellationToken cancellation) =>
@@ -90,7 +90,7 @@ internal static class FoldFitter
         var trainView = SparseViews.Rows(ml, inputs.Train, job.TrainRows, centred);
 
         // ML.NET 5's public API offers no way to interrupt a fit, so cancellation is honoured around it.
-        bool alone = !RunsBesideOthers(family);
+        bool alone = FitsAlone(family);
         if (alone)
         {
             MlNetLightGbmAlone.EnterWriteLock();

@@ -46,9 +46,9 @@ public sealed class WorkerOptions
     /// One thread per fit unless asked otherwise, also when there are fewer slots than cores: a user who gives fewer
     /// slots is usually leaving cores to other programs, and LightGBM's threads of one fit wait for each other by
     /// spinning, which collapses beside busy programs. A 25-round LightGBM trial on an 809-row table, in a search with
-    /// one slot (then 2 threads per fit) beside other work, took up to 29.3 s where the same trial alone took 0.06 s
-    /// (measured 2026-12-05); two threads per fit never beat two single-threaded fits up to 100,000 rows on an idle
-    /// machine (bench/Foldwise.Bench.FoldFit --pair --table rowsN).
+    /// one slot (then 2 threads per fit) beside other work, took up to 29.3 s; the same parameters at one thread took
+    /// under 0.1 s (measured 2026-12-05). Two threads per fit never beat two single-threaded fits up to 1,000,000 rows
+    /// on a quiet machine (bench/Foldwise.Bench.FoldFit --pair --table rowsN).
     /// </summary>
     public int Threads => ThreadsPerSlot ?? 1;
 
