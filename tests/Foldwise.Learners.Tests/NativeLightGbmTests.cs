@@ -115,7 +115,8 @@ public sealed class NativeLightGbmTests
         // Given a Dataset of a fold's rows
         var job = TinyTables.Job(Data, FamilyNames.LightGbm);
         var inputs = NativeFoldRows.From(job);
-        using var train = LightGbmDataset.FromRows(inputs.Train, inputs.Labels, LightGbmParameters.For(job), reference: null, "the training rows");
+        using var rows = inputs.CopyTrain();
+        using var train = LightGbmDataset.FromRows(rows, inputs.Labels(), LightGbmParameters.For(job), reference: null, "the training rows");
 
         // When a booster is asked for with a leaf count LightGBM cannot use
         var error = Assert.Throws<LightGbmException>(() => LightGbmBooster.Create(train, "objective=regression num_leaves=1 num_threads=1 verbosity=-1"));

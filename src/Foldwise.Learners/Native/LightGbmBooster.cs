@@ -101,17 +101,15 @@ internal sealed class LightGbmBooster : IDisposable
             return scores;
         }
 
-        fixed (int* starts = rows.RowStarts)
-        fixed (int* columns = rows.Columns)
-        fixed (float* values = rows.Values)
         fixed (double* into = scores)
         {
             // The thread count goes with every call: LightGBM keeps the last one given in a process-wide setting.
             NativeCall.Check(
                 LightGbmNative.BoosterPredictForCsr(
-                    handle, starts, LightGbmNative.Int32, columns, values, LightGbmNative.Float32, rows.RowStarts.Length, rows.Values.Length, rows.ColumnCount,
+                    handle, rows.Starts, LightGbmNative.Int32, rows.Columns, rows.Values, LightGbmNative.Float32, rows.StartCount, rows.CellCount, rows.ColumnCount,
                     LightGbmNative.PredictRawScore, 0, rounds, $"num_threads={threads}", out long length, into),
                 $"to predict {what} ({rows.RowCount} rows x {rows.ColumnCount} columns)");
+            GC.KeepAlive(rows);
             return length == scores.Length ? scores : throw new LightGbmException($"LightGBM gave {length} predictions for {scores.Length} rows of {what}");
         }
     }
