@@ -108,6 +108,13 @@ public sealed class LightGbmFoldModel : IRoundFit
     /// <summary>The held-out rows' predictions after the rounds trained so far, on the fitting scale.</summary>
     public double[] HeldOutPredictions() => Shift(booster.ValidationScores(0));
 
+    /// <summary>The same, written into <paramref name="into"/>: no vector is made per round.</summary>
+    public void HeldOutPredictions(Span<double> into)
+    {
+        booster.ValidationScores(0, into);
+        Shift(into);
+    }
+
     /// <summary>Trains up to <paramref name="rounds"/> more rounds on the same booster (bagging and all), as if the first fit had been longer.</summary>
     public void Continue(int rounds, CancellationToken cancellation)
     {
@@ -207,11 +214,15 @@ public sealed class LightGbmFoldModel : IRoundFit
 
     private double[] Shift(double[] raw)
     {
+        Shift(raw.AsSpan());
+        return raw;
+    }
+
+    private void Shift(Span<double> raw)
+    {
         for (int i = 0; i < raw.Length; i++)
         {
             raw[i] += inputs.Offset;
         }
-
-        return raw;
     }
 }
