@@ -110,7 +110,7 @@ internal static class FoldDatasets
     {
         var folds = job.Data.Folds;
         bool ownInputs = job.Inputs is null || job.Inputs.PlanFold == job.Fold;
-        return ownInputs && job.Fold < folds.FoldCount && job.TrainRows.SequenceEqual(folds.TrainRows(job.Fold)) && job.ValidationRows.SequenceEqual(folds.ValidationRows(job.Fold));
+        return ownInputs && job.Fold < folds.FoldCount && job.TrainRows.AsSpan().SequenceEqual(folds.TrainRows(job.Fold).AsSpan()) && job.ValidationRows.AsSpan().SequenceEqual(folds.ValidationRows(job.Fold).AsSpan());
     }
 
     /// <summary>What a fold's Datasets take, generously: 8 bytes a stored cell and 2 kB a column (its bin bounds).</summary>
