@@ -6,9 +6,21 @@ using Foldwise.Core.Spaces;
 
 internal sealed record BenchArgs(
     string Part, DemoSize Size, int[] SeedList, int RandomTrials, int AshaTrials, ScheduleKind Schedule,
-    int FirstRung, int FullBudget, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe, ProposerKind Proposer, bool Ladder, int DrawOffset, int Brackets, RoundStopping? Stopping, CsvPair? Csv, RoundStopping? RandomStopping)
+    int FirstRung, int FullBudget, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe, ProposerKind Proposer, bool Ladder, int DrawOffset, int Brackets, RoundStopping? Stopping, CsvPair? Csv, RoundStopping? RandomStopping, string Screen, int FirstFolds)
 {
     /// <summary>The table's name in traces and headings: the demo's size, or the CSV training file's name.</summary>
+    /// <summary>
+    /// True when the scheduled search's rungs count folds (racing: a new candidate trains the plan's first
+    /// <see cref="FirstFolds"/> folds at the full rounds, a promotion all of them) rather than boosting rounds.
+    /// </summary>
+    public bool ByFolds => Screen == "folds";
+
+    /// <summary>The scheduled search's top rung in its own unit: the fold count when racing, else the full rounds.</summary>
+    public int TopBudget => ByFolds ? FoldCount : FullBudget;
+
+    /// <summary>Folds of every plan this bench makes.</summary>
+    public const int FoldCount = 5;
+
     public string TableLabel => Csv is { } csv ? Path.GetFileNameWithoutExtension(csv.Train) : Size.ToString();
 
     public string RandomFile(int seed) => $"random-{TableLabel}-{Family}-r{FullBudget}{Label(RandomStopping)}-seed{seed}.tsv".ToLowerInvariant();
@@ -21,7 +33,7 @@ internal sealed record BenchArgs(
     /// <summary>What proposes the scheduled search's new candidates: TPE, independent or joint, or random draws (a control).</summary>
     public string ProposerLabel => Proposer == ProposerKind.Random ? "random" : $"TPE {(JointTpe ? "joint" : "independent")}, {(Ladder ? "ladder" : "top budget")}";
 
-    public string AshaFile(int seed) => $"{Schedule}-{(Proposer == ProposerKind.Random ? "random" : (JointTpe ? "tpejoint" : "tpe1d") + (Ladder ? "ladder" : ""))}-{TableLabel}-{Family}-r{FirstRung}-{FullBudget}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}{(DrawOffset != 0 ? $"-d{DrawOffset}" : "")}{(Brackets > 1 ? $"-b{Brackets}" : "")}{StopLabel}-seed{seed}.tsv".ToLowerInvariant();
+    public string AshaFile(int seed) => $"{Schedule}-{(Proposer == ProposerKind.Random ? "random" : (JointTpe ? "tpejoint" : "tpe1d") + (Ladder ? "ladder" : ""))}-{TableLabel}-{Family}-r{FirstRung}-{FullBudget}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}{(DrawOffset != 0 ? $"-d{DrawOffset}" : "")}{(Brackets > 1 ? $"-b{Brackets}" : "")}{(ByFolds ? $"-folds{FirstFolds}" : "")}{StopLabel}-seed{seed}.tsv".ToLowerInvariant();
 
     public static BenchArgs Parse(string[] args)
     {
@@ -77,7 +89,9 @@ internal sealed record BenchArgs(
             Int("--brackets", "1"),
             StoppingOf(Get("--stopping", "on"), "--stopping"),
             Get("--train", "") is { Length: > 0 } train ? new CsvPair(train, Get("--test", ""), Get("--id", "id"), Get("--target", "")) : null,
-            StoppingOf(Get("--random-stopping", Get("--stopping", "on")), "--random-stopping"));
+            StoppingOf(Get("--random-stopping", Get("--stopping", "on")), "--random-stopping"),
+            Get("--screen", "rounds") is "rounds" or "folds" ? Get("--screen", "rounds") : throw new ArgumentException($"--screen must be rounds or folds, not '{Get("--screen", "")}'"),
+            Int("--first-folds", "1"));
     }
 
     private static RoundStopping? StoppingOf(string value, string option) => value switch

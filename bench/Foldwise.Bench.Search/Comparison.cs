@@ -32,7 +32,7 @@ internal static class Comparison
                 gaps[share].Add(EqualComputeGap(random, asha, share * random[^1].Compute));
             }
 
-            string ashaBest = string.Create(c, $"{asha[^1].Best:F5} ({asha.Count}, {asha.Count(r => r.Budget == options.FullBudget)})");
+            string ashaBest = string.Create(c, $"{asha[^1].Best:F5} ({asha.Count}, {asha.Count(r => r.Budget == options.TopBudget)})");
             foreach (int count in targets)
             {
                 double target = random[count - 1].Best;

@@ -30,7 +30,7 @@ if (options.Part != "report")
     var train = ColumnScreen.Apply(report, rawTrain);
     var test = ColumnScreen.Apply(report, rawTest);
     Console.WriteLine($"table {options.TableLabel}: {train.RowCount} × {train.FeatureCount} after screening; family {options.Family}; " +
-                      $"{DefinitionWords.Of(options.Schedule)} rounds {options.FirstRung}..{options.FullBudget}, eta {options.Eta}, rate exponent {options.RateExponent}, proposer {options.ProposerLabel}, brackets {options.Brackets}; random {options.RandomTrials} trials at {options.FullBudget}; {options.Threads} threads");
+                      $"{DefinitionWords.Of(options.Schedule)} rounds {options.FirstRung}..{options.FullBudget}, eta {options.Eta}, rate exponent {options.RateExponent}, screen {options.Screen}{(options.ByFolds ? $" from {options.FirstFolds} of {BenchArgs.FoldCount} folds" : "")}, proposer {options.ProposerLabel}, brackets {options.Brackets}; random {options.RandomTrials} trials at {options.FullBudget}; {options.Threads} threads");
 
     // Test predictions are part of every trial but not of the comparison: a 50-row test slice keeps them cheap
     // (a CSV table's test file is given small instead: its category columns are aligned with the whole test table).
@@ -38,7 +38,7 @@ if (options.Part != "report")
     foreach (int seed in options.SeedList)
     {
         var metric = Metric.Rmsle;
-        var folds = StratifiedFoldPlanner.Create([.. train.Target.Select(metric.Forward)], 5, new SearchSeeds(seed).FoldPlan);
+        var folds = StratifiedFoldPlanner.Create([.. train.Target.Select(metric.Forward)], BenchArgs.FoldCount, new SearchSeeds(seed).FoldPlan);
         var whole = TrialData.From(train, test, folds, metric);
         var data = options.Csv is not null ? whole : TestSlice.First(whole, 50);
         string randomPath = Path.Combine(options.Out, options.RandomFile(seed));
@@ -70,7 +70,7 @@ if (options.Part != "report")
             var asha = SearchRun.Run(data, options, options.Schedule, options.Proposer, options.AshaTrials, seed + options.DrawOffset, stopBelow, computeCap: random?[^1].Compute ?? randomCompute);
             string ashaPath = Path.Combine(options.Out, options.AshaFile(seed));
             Trace.Write(ashaPath, asha);
-            Console.WriteLine($"seed {seed}: {DefinitionWords.Of(options.Schedule)} ({options.ProposerLabel}) best {asha.Min(r => r.Score):F5} after {asha.Count} trials ({asha.Count(r => r.Budget == options.FullBudget)} at {options.FullBudget} rounds), {asha.Sum(r => r.Seconds):F0} s → {ashaPath}");
+            Console.WriteLine($"seed {seed}: {DefinitionWords.Of(options.Schedule)} ({options.ProposerLabel}) best {asha[^1].Best:F5} after {asha.Count} trials ({asha.Count(r => r.Budget == options.TopBudget)} at {options.TopBudget} {(options.ByFolds ? "folds" : "rounds")}), {asha.Sum(r => r.Seconds):F0} s → {ashaPath}");
         }
     }
 }

@@ -12,13 +12,19 @@ internal static class SearchRun
 {
     public static List<TraceRow> Run(TrialData data, BenchArgs options, ScheduleKind kind, ProposerKind proposer, int trials, int seed, double stopBelow, double computeCap)
     {
+        // Racing over folds (--screen folds): rungs count folds, every trial trains the full rounds at its drawn rate.
+        bool byFolds = options.ByFolds && kind == ScheduleKind.Asha;
+        int foldCount = data.Folds.FoldCount;
+        var schedule = new ScheduleOptions(kind, proposer, options.FirstRung, options.FullBudget, options.Eta, options.RateExponent,
+            kind == ScheduleKind.Asha ? options.Brackets : 1, byFolds ? options.FirstFolds : 0);
         var definition = new SearchDefinition
         {
             Name = "bench",
             Data = new DataSource("-", "-", "id", "y"),
             Seed = seed,
+            Folds = foldCount,
             Families = [new FamilySearch(options.Family, DefaultSpaces.For(options.Family))],
-            Schedule = new ScheduleOptions(kind, proposer, options.FirstRung, options.FullBudget, options.Eta, options.RateExponent, kind == ScheduleKind.Asha ? options.Brackets : 1),
+            Schedule = schedule,
             Budget = new SearchBudget(trials, null),
         };
         var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition, new TpeOptions(Joint: options.JointTpe, Ladder: options.Ladder)), new NoJournal(), TimeProvider.System);
@@ -35,13 +41,19 @@ internal static class SearchRun
 
             var trial = grant.Trial!;
             var clock = Stopwatch.StartNew();
-            var outcome = executor.Run(data, grant.Run!, trial.Budget, grant.Seed, options.Threads, CancellationToken.None, predictsTest: grant.PredictsTest);
+            var outcome = executor.Run(data, grant.Run!, trial.Budget, grant.Seed, options.Threads, CancellationToken.None, predictsTest: grant.PredictsTest, folds: trial.AllFolds ? null : trial.Folds);
             coordinator.Complete(trial.Id, trial.Attempt, outcome.Score, outcome.FoldScores, outcome.BestRound);
 
-            // Compute is what was trained: rounds × rows, fewer rounds when the trial stopped early.
-            compute += (double)outcome.RoundsTrained * data.Train.RowCount;
-            best = Math.Min(best, outcome.Score);
-            rows.Add(new TraceRow(trial.Id, trial.Rung, trial.Budget, trial.Proposer, compute, outcome.Score, best, clock.Elapsed.TotalSeconds, trial.Parameters.Describe(),
+            // Compute is what was trained: rounds × rows, fewer rounds when the trial stopped early, a share of the
+            // folds when racing. A racing trial on some folds is scored on their rows only, so it sets no best.
+            compute += (double)outcome.RoundsTrained * data.Train.RowCount * (trial.AllFolds ? 1 : (double)trial.Folds / foldCount);
+            if (trial.AllFolds)
+            {
+                best = Math.Min(best, outcome.Score);
+            }
+
+            // When racing, a trace's budget column counts the folds trained (as the fold-screen rungs do).
+            rows.Add(new TraceRow(trial.Id, trial.Rung, byFolds ? (trial.AllFolds ? foldCount : trial.Folds) : trial.Budget, trial.Proposer, compute, outcome.Score, best, clock.Elapsed.TotalSeconds, trial.Parameters.Describe(),
                 $"{outcome.RoundsTrained}/{outcome.BestRound?.ToString(System.Globalization.CultureInfo.InvariantCulture) ?? "-"}"));
             if (best <= stopBelow || compute >= computeCap)
             {

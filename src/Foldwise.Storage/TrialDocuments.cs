@@ -39,6 +39,7 @@ internal static class TrialDocuments
             ["parentId"] = Nullable(t.ParentId),
             ["proposer"] = t.Proposer,
             ["bracket"] = t.Bracket,
+            ["folds"] = t.Folds,
             ["state"] = t.State.ToString(),
             ["attempt"] = t.Attempt,
             ["failures"] = t.Failures,
@@ -73,6 +74,9 @@ internal static class TrialDocuments
             ParentId = OptionalInt(doc, "parentId"),
             Proposer = String(doc, "proposer", owner),
             Bracket = Int(doc, "bracket", owner),
+
+            // Absent from stores written before schedules could screen on folds: every fold.
+            Folds = OptionalInt(doc, "folds") ?? 0,
             State = Enum<TrialState>(doc, "state", owner),
             Attempt = Int(doc, "attempt", owner),
             Failures = OptionalInt(doc, "failures") ?? 0,

@@ -43,7 +43,7 @@ public static class BlendStep
         if (pool.Count == 0)
         {
             // No candidate reached its family's full budget (a very small trial budget): blend what went furthest in each family.
-            var done = trials.Where(t => t.State == TrialState.Done).ToList();
+            var done = trials.Where(t => t.State == TrialState.Done && t.AllFolds).ToList();
             var furthest = done.GroupBy(t => t.Family, StringComparer.Ordinal).ToDictionary(g => g.Key, g => g.Max(t => t.Budget), StringComparer.Ordinal);
             pool = BlendPool.Select(trials, options.Pool, f => furthest.GetValueOrDefault(f, -1));
             events.Report(new BlendFellBack([.. definition.Families

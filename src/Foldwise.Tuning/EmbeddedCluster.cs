@@ -3,6 +3,7 @@ using Foldwise.Cluster.Hosting;
 using Foldwise.Cluster.Telemetry;
 using Foldwise.Cluster.Workers;
 using Foldwise.Core.Events;
+using Foldwise.Core.Learning;
 using Foldwise.Learners;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.Hosting;
@@ -29,7 +30,11 @@ public sealed class EmbeddedCluster : IAsyncDisposable
     public TableCache? LocalTables => host.Services.GetService<TableCache>();
 
     /// <summary>Starts the silo; a networked one reports where it listens and, as they happen, silos joining and leaving.</summary>
-    public static async Task<EmbeddedCluster> StartAsync(ClusterRole role, int slots, int? threads, FoldwiseTelemetryOptions telemetry, IProgress<SearchEvent> events, CancellationToken cancellation)
+    public static Task<EmbeddedCluster> StartAsync(ClusterRole role, int slots, int? threads, FoldwiseTelemetryOptions telemetry, IProgress<SearchEvent> events, CancellationToken cancellation) =>
+        StartAsync(role, slots, threads, LearnerCatalog.BuiltIn, telemetry, events, cancellation);
+
+    /// <summary>As above, with the local slots training the families of <paramref name="learners"/>.</summary>
+    internal static async Task<EmbeddedCluster> StartAsync(ClusterRole role, int slots, int? threads, ILearnerCatalog learners, FoldwiseTelemetryOptions telemetry, IProgress<SearchEvent> events, CancellationToken cancellation)
     {
         var builder = Host.CreateApplicationBuilder([]);
         ConsoleLogging.Configure(builder.Logging, role.Verbose);
@@ -42,7 +47,7 @@ public sealed class EmbeddedCluster : IAsyncDisposable
         {
             builder.Services.AddFoldwiseWorker(
                 new WorkerOptions { Name = Environment.MachineName + "-coordinator", Slots = slots, ThreadsPerSlot = threads },
-                LearnerCatalog.BuiltIn,
+                learners,
                 events);
         }
 

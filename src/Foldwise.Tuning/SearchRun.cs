@@ -6,8 +6,10 @@ using Foldwise.Core.Blending;
 using Foldwise.Core.Data;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Events;
+using Foldwise.Core.Learning;
 using Foldwise.Core.Schedules;
 using Foldwise.Core.Search;
+using Foldwise.Learners;
 using Foldwise.Storage;
 
 namespace Foldwise.Tuning;
@@ -32,6 +34,12 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
 
     /// <summary>Where the search's traces and metrics go. Default: nowhere.</summary>
     public FoldwiseTelemetryOptions Telemetry { get; init; } = new();
+
+    /// <summary>
+    /// The learners the coordinator's own slots train. Default: <see cref="LearnerCatalog.BuiltIn"/>. No command sets
+    /// it; a bench swaps in a reference learner here. Workers and the blend's re-fit of its members use the built-in ones.
+    /// </summary>
+    public ILearnerCatalog Learners { get; init; } = LearnerCatalog.BuiltIn;
 
     public async Task<SearchResult> RunNewAsync(SearchDefinition definition, string outDir, int slots, int? threads, SearchStopping stopping, CancellationToken cancellation = default)
     {
@@ -124,7 +132,7 @@ public sealed class SearchRun(IProgress<SearchEvent> events)
         EmbeddedCluster cluster;
         try
         {
-            cluster = await EmbeddedCluster.StartAsync(Role, slots, threads, Telemetry, events, linked.Token);
+            cluster = await EmbeddedCluster.StartAsync(Role, slots, threads, Learners, Telemetry, events, linked.Token);
         }
         catch (OperationCanceledException) when (stopping.Abandon.IsCancellationRequested)
         {

@@ -104,4 +104,16 @@ public sealed class PlanCommandTests
         Assert.Equal([1, 2, 3], brackets.Select(b => b.GetProperty("bracket").GetInt32()));
         Assert.Equal([2, 1, 0], brackets.Select(b => b.GetProperty("halvings").GetInt32()));
     }
+
+    [Fact]
+    public void Plans_a_fold_screen_in_folds_and_refuses_one_as_wide_as_the_plan()
+    {
+        var plan = CliHarness.Run("plan", "--screen-folds", "1", "--eta", "5", "--json");
+        using var json = JsonDocument.Parse(plan.Output);
+        Assert.Equal([1, 5], json.RootElement.GetProperty("fold_screen_rungs").EnumerateArray().Select(r => r.GetInt32()));
+
+        var wide = CliHarness.Run("plan", "--screen-folds", "5");
+        Assert.Equal(ExitCodes.Usage, wide.ExitCode);
+        Assert.Contains("--screen-folds must be at least 1 and below the plan's 5 folds", wide.Output);
+    }
 }

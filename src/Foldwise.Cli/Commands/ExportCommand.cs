@@ -22,7 +22,7 @@ public sealed class ExportCommand(IAnsiConsole console) : Command<ExportSettings
         var (header, definition) = StoredSearch.HeaderOf(store);
         var metric = Metric.For(definition.Metric);
         var trials = store.LoadTrials()
-            .Where(t => t.State == TrialState.Done && t.Budget == definition.BudgetOf(t.Family).FullBudget)
+            .Where(t => t.State == TrialState.Done && t.AllFolds && t.Budget == definition.BudgetOf(t.Family).FullBudget)
             .OrderBy(t => t.Id)
             .ToList();
         var columns = trials.Select(t => store.LoadVectors(t.Id)?.OutOfFold ?? throw new InvalidOperationException($"trial {t.Id} has no stored predictions")).ToList();

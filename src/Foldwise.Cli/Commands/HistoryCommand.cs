@@ -27,7 +27,10 @@ public sealed class HistoryCommand(IAnsiConsole console) : Command<HistorySettin
         return ExitCodes.Ok;
     }
 
-    /// <summary>Best first: done trials by score (ties by id), then running, queued and failed ones by id.</summary>
+    /// <summary>
+    /// Best first: done trials by score (ties by id), those on every fold before those a fold screen scored on some
+    /// folds only (their scores cover other rows); then running, queued and failed ones by id.
+    /// </summary>
     public static IReadOnlyList<TrialRecord> Filter(IEnumerable<TrialRecord> trials, HistorySettings settings)
     {
         var state = settings.State is { } s ? Enum.Parse<TrialState>(s, ignoreCase: true) : (TrialState?)null;
@@ -36,6 +39,7 @@ public sealed class HistoryCommand(IAnsiConsole console) : Command<HistorySettin
             .Where(t => settings.Rung is null || t.Rung == settings.Rung)
             .Where(t => state is null || t.State == state)
             .OrderBy(t => t.State == TrialState.Done ? 0 : t.State == TrialState.Running ? 1 : t.State == TrialState.Queued ? 2 : 3)
+            .ThenBy(t => t.AllFolds ? 0 : 1)
             .ThenBy(t => t.Score ?? double.MaxValue)
             .ThenBy(t => t.Id);
         return settings.Top is { } top ? [.. chosen.Take(top)] : [.. chosen];

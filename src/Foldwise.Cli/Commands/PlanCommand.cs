@@ -23,6 +23,7 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
         // average, and the share of new candidates that equal compute per bracket gives it.
         var hedge = AshaBrackets.For(rungs, settings.Eta, rungs.Length);
         var starts = Enumerable.Range(0, hedge.Count).Select(b => (Bracket: b + 1, Budget: rungs[b], Rounds: hedge.CostOf(b), Share: hedge.ShareOf(b))).ToArray();
+        var screen = settings.ScreenFolds is { } n ? RungBudgets.For(n, settings.Folds, settings.Eta) : default;
         if (settings.Json)
         {
             var brackets = new JsonArray([.. plan.Brackets.Select((b, i) => (JsonNode?)new JsonObject
@@ -50,6 +51,11 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
                 })]),
                 ["hyperband"] = brackets,
             };
+            if (!screen.IsDefault)
+            {
+                root["fold_screen_rungs"] = new JsonArray([.. screen.Select(r => (JsonNode?)r)]);
+            }
+
             console.Profile.Out.Writer.WriteLine(root.ToJsonString(new System.Text.Json.JsonSerializerOptions { WriteIndented = true }));
             return ExitCodes.Ok;
         }
@@ -60,6 +66,12 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
         console.MarkupLine($"ASHA brackets (schedule.brackets k runs the first k, each with an equal share of compute): " +
             string.Join("; ", starts.Select(b => $"bracket {b.Bracket} starts at {b.Budget} {unit}, {b.Rounds:0.#} per candidate on average")) +
             $"; with all {starts.Length}, new candidates split {string.Join(" : ", starts.Select(b => b.Share.ToString("P0")))}.");
+        if (!screen.IsDefault)
+        {
+            console.MarkupLine($"Fold screen (schedule.screen_folds {settings.ScreenFolds}): rungs in folds {string.Join(" → ", screen)} of {settings.Folds}; every trial trains {settings.FullBudget} {unit} at the drawn learning rate, " +
+                $"a candidate on n folds costing n/{settings.Folds} of a whole trial, and moves up when it is in the top 1/{settings.Eta} of its rung (all scored on the same folds).");
+        }
+
         int widest = plan.Brackets.Max(b => b.Rungs.Length);
         var table = new Table()
             .Title($"Hyperband brackets, {settings.FirstRung} to {settings.FullBudget} {unit}, η = {settings.Eta}")

@@ -31,6 +31,14 @@ public sealed class PlanSettings : CommandSettings
     [Description("Keep one in E at each rung. Default 3.")]
     public int Eta { get; init; } = 3;
 
+    [CommandOption("--screen-folds <N>")]
+    [Description("Also plan ASHA rungs that count folds (schedule.screen_folds): a new candidate trains the full budget on the first N folds.")]
+    public int? ScreenFolds { get; init; }
+
+    [CommandOption("--folds <K>")]
+    [Description("K of the K-fold plan, the top rung of a fold screen. Default 5.")]
+    public int Folds { get; init; } = 5;
+
     [CommandOption("--json")]
     [Description("Print the plan as JSON.")]
     public bool Json { get; init; }
@@ -51,6 +59,11 @@ public sealed class PlanSettings : CommandSettings
         if (RetiredFullBudget is not null)
         {
             return RetiredOption.Refuse("--max-budget");
+        }
+
+        if (ScreenFolds is { } screen && (screen < 1 || screen >= Folds))
+        {
+            return ValidationResult.Error($"--screen-folds must be at least 1 and below the plan's {Folds} folds (--folds), got {screen}");
         }
 
         if (FamilyDescriptors.Find(Family) is null)

@@ -35,18 +35,20 @@ public static class ShowView
         // No bracket: a schedule without brackets (plain ASHA, full budget).
         int? bracket = BracketNumbers.For(search.Definition).Of(t.Family, t.Bracket);
         string unit = FamilyDescriptors.UnitOf(t.Family).Many;
-        Fact("rung", $"{t.Rung}{(bracket is { } b ? $" (bracket {b})" : "")}, {t.Budget} {unit}");
+        int foldCount = search.Definition.Folds;
+        string Reach(TrialRecord r) => $"{r.Budget} {unit}{(r.AllFolds ? "" : $" on the first {r.Folds} of {foldCount} folds")}";
+        Fact("rung", $"{t.Rung}{(bracket is { } b ? $" (bracket {b})" : "")}, {Reach(t)}");
         Fact("proposed by", t.ParentId is { } p ? $"{t.Proposer} of trial {p}" : t.Proposer);
         var chain = ShowLineage.Chain(t, search.Trials);
         if (chain.Count > 1)
         {
-            Fact("parent chain", string.Join(" ← ", chain.Select(c => $"{c.Id} ({c.Budget} rounds{ScoreText(c.Score)})")));
+            Fact("parent chain", string.Join(" ← ", chain.Select(c => $"{c.Id} ({Reach(c)}{ScoreText(c.Score)})")));
         }
 
         var children = ShowLineage.Children(t, search.Trials);
         if (children.Count > 0)
         {
-            Fact("promoted to", string.Join(", ", children.Select(c => $"{c.Id} ({c.Budget} rounds)")));
+            Fact("promoted to", string.Join(", ", children.Select(c => $"{c.Id} ({Reach(c)})")));
         }
 
         Fact($"OOF {metric}", t.Score?.ToString("F5", Invariant) ?? "not scored");

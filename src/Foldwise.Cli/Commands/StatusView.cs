@@ -35,7 +35,7 @@ public static class StatusView
         foreach (var family in search.Definition.Families.Select(f => f.Family))
         {
             var done = trials.Where(t => t.Family == family && t.State == TrialState.Done && t.Score is not null).ToList();
-            var top = done.OrderBy(t => t.Score).ThenBy(t => t.Id).FirstOrDefault();
+            var top = done.Where(t => t.AllFolds).OrderBy(t => t.Score).ThenBy(t => t.Id).FirstOrDefault();
             best.AddRow(family, top?.Score?.ToString("F5", Invariant) ?? "none yet", top?.Id.ToString(Invariant) ?? "", top?.Budget.ToString(Invariant) ?? "", done.Count.ToString(Invariant));
         }
 

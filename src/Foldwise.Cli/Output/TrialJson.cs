@@ -34,6 +34,7 @@ public static class TrialJson
                 ["rung"] = t.Rung,
                 ["bracket"] = brackets.Of(t.Family, t.Bracket),
                 ["budget"] = t.Budget,
+                ["folds"] = t.AllFolds ? definition.Folds : t.Folds,
                 ["parent"] = t.ParentId,
                 ["proposer"] = t.Proposer,
                 ["attempt"] = t.Attempt,

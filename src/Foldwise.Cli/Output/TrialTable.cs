@@ -16,7 +16,9 @@ public static class TrialTable
         // A schedule without brackets (plain ASHA, full budget) stores 0: the column would say nothing.
         var brackets = BracketNumbers.For(definition);
         bool bracketed = trials.Any(t => t.Bracket > 0);
-        string[] columns = ["trial", "family", "state", "rung", .. bracketed ? ["bracket"] : Array.Empty<string>(), "rounds", $"OOF {metric.Name}", "fold sd", "from", "machine/slot", "secs"];
+        // Only a schedule that screens on folds trains some trials on fewer than every fold.
+        bool screened = trials.Any(t => !t.AllFolds);
+        string[] columns = ["trial", "family", "state", "rung", .. bracketed ? ["bracket"] : Array.Empty<string>(), "rounds", .. screened ? ["folds"] : Array.Empty<string>(), $"OOF {metric.Name}", "fold sd", "from", "machine/slot", "secs"];
         var table = new Table().Border(TableBorder.Simple).AddColumns(columns);
         if (wide)
         {
@@ -33,6 +35,7 @@ public static class TrialTable
                 t.Rung.ToString(),
                 .. bracketed ? [brackets.Of(t.Family, t.Bracket)?.ToString() ?? ""] : Array.Empty<string>(),
                 t.Budget.ToString(),
+                .. screened ? [(t.AllFolds ? definition.Folds : t.Folds).ToString()] : Array.Empty<string>(),
                 t.Score?.ToString("F5") ?? "",
                 t.FoldScores.Length > 1 ? BlendView.Spread(t.FoldScores).ToString("F4") : "",
                 t.ParentId is { } parent ? $"{t.Proposer} of {parent}" : t.Proposer,

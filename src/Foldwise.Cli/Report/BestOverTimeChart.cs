@@ -18,7 +18,7 @@ public static class BestOverTimeChart
         foreach (string family in families)
         {
             var done = search.Trials
-                .Where(t => t.Family == family && t.State == TrialState.Done && t.Score is not null && t.Finished is not null)
+                .Where(t => t.Family == family && t.State == TrialState.Done && t.AllFolds && t.Score is not null && t.Finished is not null)
                 .OrderBy(t => t.Finished)
                 .ToList();
             if (done.Count == 0)

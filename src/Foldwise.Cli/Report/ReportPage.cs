@@ -89,7 +89,7 @@ public static class ReportPage
         var t = search.Trials;
         var schedule = search.Definition.Schedule;
         int done = t.Count(x => x.State == TrialState.Done);
-        string best = t.Where(x => x.Score is not null).Select(x => x.Score!.Value).DefaultIfEmpty(double.NaN).Min().ToString("F5", CultureInfo.InvariantCulture);
+        string best = t.Where(x => x.Score is not null && x.AllFolds).Select(x => x.Score!.Value).DefaultIfEmpty(double.NaN).Min().ToString("F5", CultureInfo.InvariantCulture);
         string blend = search.Blend is { } b ? string.Create(CultureInfo.InvariantCulture, $"; blend nested estimate {b.NestedScore:F5}") : "; no blend yet";
         return WebUtility.HtmlEncode(string.Create(CultureInfo.InvariantCulture,
             $"{t.Count} trials ({done} done, {t.Count(x => x.State == TrialState.Failed)} failed) of {string.Join(" and ", search.Definition.Families.Select(f => f.Family))} " +

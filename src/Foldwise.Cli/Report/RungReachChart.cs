@@ -37,7 +37,7 @@ public static class RungReachChart
             series.Add(families[f], bars.Count);
         }
 
-        var ticks = rungs.Select(r => $"rung {r} ({RoundsAt(search, r)} rounds)").ToArray();
+        var ticks = rungs.Select(r => $"rung {r} ({ReachAt(search, r)})").ToArray();
         plot.Axes.Bottom.SetTicks([.. rungs.Select(r => (double)r)], ticks);
         plot.Axes.Margins(bottom: 0);
         plot.YLabel("candidates that ran at this rung");
@@ -45,14 +45,22 @@ public static class RungReachChart
         return new ChartSection(
             Id,
             "Candidates reaching each rung",
-            "Each step right is a promotion to more rounds; the drop from one bar to the next is how many candidates were stopped early because they scored worse than their peers at the same budget.",
+            $"Each step right is a promotion to more {(search.Definition.Schedule.ByFolds ? "folds" : "rounds")}; the drop from one bar to the next is how many candidates were stopped early because they scored worse than their peers at the same budget.",
             ChartSvg.Render(plot, Id),
             series.ToImmutable());
     }
 
-    private static string RoundsAt(StoredSearch search, int rung)
+    /// <summary>What a rung's trials trained: rounds, or folds when the schedule screens on folds.</summary>
+    private static string ReachAt(StoredSearch search, int rung)
     {
-        var budgets = search.Trials.Where(t => t.Rung == rung).Select(t => t.Budget).Distinct().Order().ToList();
-        return budgets.Count == 1 ? budgets[0].ToString(System.Globalization.CultureInfo.InvariantCulture) : $"{budgets.First()}–{budgets.Last()}";
+        var at = search.Trials.Where(t => t.Rung == rung).ToList();
+        if (search.Definition.Schedule.ByFolds)
+        {
+            int folds = at.Select(t => t.AllFolds ? search.Definition.Folds : t.Folds).DefaultIfEmpty(search.Definition.Folds).Max();
+            return string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{folds} folds");
+        }
+
+        var budgets = at.Select(t => t.Budget).Distinct().Order().ToList();
+        return budgets.Count == 1 ? $"{budgets[0].ToString(System.Globalization.CultureInfo.InvariantCulture)} rounds" : $"{budgets.First()}–{budgets.Last()} rounds";
     }
 }

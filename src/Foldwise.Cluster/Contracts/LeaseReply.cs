@@ -3,7 +3,8 @@ namespace Foldwise.Cluster.Contracts;
 /// <summary>
 /// A leased trial as a slot needs it: a family name and parameter values (never code), a budget, a seed, how often to
 /// renew, the search's trace context (W3C <c>traceparent</c>, null when the coordinator traces nothing), and whether
-/// the test table is to be predicted (only trials the blend may weight need it).
+/// the test table is to be predicted (only trials the blend may weight need it), and how many of the plan's first folds
+/// it trains (0: all; see <see cref="Core.Search.TrialRecord.Folds"/>).
 /// </summary>
 [GenerateSerializer, Immutable, Alias("Foldwise.LeaseReply")]
 public sealed record LeaseReply(
@@ -17,7 +18,8 @@ public sealed record LeaseReply(
     [property: Id(7)] TimeSpan LeaseDuration,
     [property: Id(8)] string? TraceParent = null,
     [property: Id(9)] string? Reason = null,
-    [property: Id(10)] bool PredictsTest = true)
+    [property: Id(10)] bool PredictsTest = true,
+    [property: Id(11)] int Folds = 0)
 {
     public static LeaseReply Waiting { get; } = new(LeaseStatus.Wait, 0, 0, "", [], 0, 0, TimeSpan.Zero);
 

@@ -122,7 +122,8 @@ public sealed partial class SlotRunner(
             var trialData = await data.GetAsync(searchId, abandon.Token);
             var executor = new TrialExecutor(learners.Get(lease.Family));
             var parameters = ParameterSet.Of(lease.Parameters);
-            using var folds = new FoldSpans(span?.Context ?? default, lease.TrialId, trialData.Folds.FoldCount);
+            int foldCount = lease.Folds == 0 ? trialData.Folds.FoldCount : lease.Folds;
+            using var folds = new FoldSpans(span?.Context ?? default, lease.TrialId, foldCount);
             var advancing = new ReportPace(time);
             var outcome = await Task.Factory.StartNew(
                 () => executor.Run(
@@ -135,16 +136,17 @@ public sealed partial class SlotRunner(
                     fold =>
                     {
                         folds.FoldDone(fold);
-                        events.Report(new SlotFoldFitted(options.Name, slot, lease.TrialId, fold, trialData.Folds.FoldCount, clock.Elapsed));
+                        events.Report(new SlotFoldFitted(options.Name, slot, lease.TrialId, fold, foldCount, clock.Elapsed));
                     },
                     lease.PredictsTest,
                     (ready, round) =>
                     {
                         if (advancing.Due(out _))
                         {
-                            events.Report(new SlotTrialAdvanced(options.Name, slot, lease.TrialId, ready, trialData.Folds.FoldCount, round, lease.Budget, clock.Elapsed));
+                            events.Report(new SlotTrialAdvanced(options.Name, slot, lease.TrialId, ready, foldCount, round, lease.Budget, clock.Elapsed));
                         }
-                    }),
+                    },
+                    lease.Folds == 0 ? null : lease.Folds),
                 abandon.Token,
                 TaskCreationOptions.LongRunning,
                 TaskScheduler.Default);

@@ -22,7 +22,7 @@ public static class BlendPool
         return
         [
             .. trials
-                .Where(t => t.State == TrialState.Done && t.Budget == fullBudgetOf(t.Family) && t.Score is { } s && double.IsFinite(s))
+                .Where(t => t.State == TrialState.Done && t.AllFolds && t.Budget == fullBudgetOf(t.Family) && t.Score is { } s && double.IsFinite(s))
                 .GroupBy(t => t.Family, StringComparer.Ordinal)
                 .OrderBy(g => g.Key, StringComparer.Ordinal)
                 .SelectMany(g => g.OrderBy(t => t.Score!.Value).ThenBy(t => t.Id).Take(perFamily)),

@@ -8,7 +8,7 @@ internal static class DefinitionNames
     public static readonly string[] RootKeys = ["name", "data", "metric", "folds", "seed", "screening", "families", "schedule", "budget", "blend"];
     public static readonly string[] DataKeys = ["train", "test", "id", "target", "missing", "categories", "ignore"];
     public static readonly string[] ScreeningKeys = ["min_nonzero"];
-    public static readonly string[] ScheduleKeys = ["kind", "proposer", "first_rung", "full_budget", "eta", "rate_scaling", "brackets"];
+    public static readonly string[] ScheduleKeys = ["kind", "proposer", "first_rung", "full_budget", "eta", "rate_scaling", "brackets", "screen_folds"];
     public static readonly string[] BudgetKeys = ["trials", "hours"];
     public static readonly string[] BlendKeys = ["mode", "pool"];
     public static readonly string[] RangeKeys = ["whole", "linear", "log", "one_of"];

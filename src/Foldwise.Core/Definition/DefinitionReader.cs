@@ -94,6 +94,12 @@ public static class DefinitionReader
             };
         }
 
+        if (scheduleNode is not null && schedule.ByFolds && schedule.ScreenFolds >= definition.Folds)
+        {
+            var screen = check.Object(scheduleNode, DefinitionNames.ScheduleKeys).Get("screen_folds")!;
+            throw check.Fail(screen.Value, $"'schedule.screen_folds' ({schedule.ScreenFolds}) must be below the plan's {definition.Folds} folds");
+        }
+
         if (scheduleNode is not null && schedule.Brackets > 1)
         {
             CheckBrackets(check, scheduleNode, definition);
@@ -125,13 +131,17 @@ public static class DefinitionReader
     private static void CheckBrackets(DefinitionCheck check, DefinitionNode scheduleNode, SearchDefinition definition)
     {
         var given = check.Object(scheduleNode, DefinitionNames.ScheduleKeys).Get("brackets");
+        var schedule = definition.Schedule;
         foreach (var family in definition.Families)
         {
-            var budget = family.BudgetUnder(definition.Schedule);
-            var rungs = Schedules.RungBudgets.For(budget.FirstRung, budget.FullBudget, definition.Schedule.Eta);
-            if (definition.Schedule.Brackets > rungs.Length && given is not null)
+            var budget = family.BudgetUnder(schedule);
+            var rungs = schedule.ByFolds
+                ? Schedules.RungBudgets.For(schedule.ScreenFolds, definition.Folds, schedule.Eta)
+                : Schedules.RungBudgets.For(budget.FirstRung, budget.FullBudget, schedule.Eta);
+            string unit = schedule.ByFolds ? "folds" : FamilyDescriptors.UnitOf(family.Family).Many;
+            if (schedule.Brackets > rungs.Length && given is not null)
             {
-                throw check.Fail(given.Value, $"'schedule.brackets' ({definition.Schedule.Brackets}) is more than {family.Family}'s {rungs.Length} rungs ({string.Join(", ", rungs)} {FamilyDescriptors.UnitOf(family.Family).Many})");
+                throw check.Fail(given.Value, $"'schedule.brackets' ({schedule.Brackets}) is more than {family.Family}'s {rungs.Length} rungs ({string.Join(", ", rungs)} {unit})");
             }
         }
     }

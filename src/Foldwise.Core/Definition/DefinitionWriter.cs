@@ -85,6 +85,10 @@ public static class DefinitionWriter
                 json.WriteNumber("eta", schedule.Eta);
                 json.WriteNumber("rate_scaling", schedule.RateScaling);
                 json.WriteNumber("brackets", schedule.Brackets);
+                if (schedule.ByFolds)
+                {
+                    json.WriteNumber("screen_folds", schedule.ScreenFolds);
+                }
             });
             Section(json, "budget", () =>
             {

@@ -16,7 +16,13 @@ internal static class ScheduleReader
             full is null ? standard.FullBudget : check.Whole(full, 1),
             schedule.Get("eta") is { } e ? check.Whole(e.Value, 2, " (each rung keeps 1/eta)") : standard.Eta,
             schedule.Get("rate_scaling") is { } r ? Scaling(check, r.Value) : standard.RateScaling,
-            schedule.Get("brackets") is { } b ? check.Whole(b.Value, 1) : standard.Brackets);
+            schedule.Get("brackets") is { } b ? check.Whole(b.Value, 1) : standard.Brackets,
+            schedule.Get("screen_folds") is { } s ? check.Whole(s.Value, 1, " (the folds a new candidate first trains)") : standard.ScreenFolds);
+
+        if (schedule.Get("screen_folds") is { } screen && options.Kind != ScheduleKind.Asha)
+        {
+            throw check.Fail(screen.Value, $"'schedule.screen_folds' applies to the asha schedule only, not '{DefinitionNames.Schedules.NameOf(options.Kind)}'");
+        }
 
         if (options.FullBudget < options.FirstRung)
         {
@@ -34,7 +40,7 @@ internal static class ScheduleReader
                 throw check.Fail(given.Value, $"'schedule.brackets' applies to the asha schedule only, not '{DefinitionNames.Schedules.NameOf(options.Kind)}'");
             }
 
-            if (options.Brackets > rungs.Length)
+            if (!options.ByFolds && options.Brackets > rungs.Length)
             {
                 throw check.Fail(given.Value, $"'schedule.brackets' ({options.Brackets}) is more than the schedule's {rungs.Length} rungs ({string.Join(", ", rungs)} rounds)");
             }

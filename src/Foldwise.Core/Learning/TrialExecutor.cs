@@ -35,6 +35,11 @@ public sealed class TrialExecutor
     /// For a family that trains round by round, told (folds prepared, rounds trained on every fold) as each fold's rows
     /// are prepared, with 0 rounds, and after each round.
     /// </param>
+    /// <param name="folds">
+    /// Null: every fold of the plan. Otherwise only the plan's first <paramref name="folds"/> folds train, and the score
+    /// covers their held-out rows alone, so trials screened on the same folds are compared on the same rows (racing
+    /// over folds); the out-of-fold vector is zero on the other folds' rows.
+    /// </param>
     public TrialOutcome Run(
         TrialData data,
         ParameterSet parameters,
@@ -44,17 +49,24 @@ public sealed class TrialExecutor
         CancellationToken cancellation,
         Action<int>? foldDone = null,
         bool predictsTest = true,
-        Action<int, int>? advanced = null)
+        Action<int, int>? advanced = null,
+        int? folds = null)
     {
-        var folds = data.Folds;
-        if (folds.RowCount != data.Train.RowCount)
+        var plan = data.Folds;
+        if (plan.RowCount != data.Train.RowCount)
         {
-            throw new InvalidOperationException($"fold plan covers {folds.RowCount} rows but the table has {data.Train.RowCount}");
+            throw new InvalidOperationException($"fold plan covers {plan.RowCount} rows but the table has {data.Train.RowCount}");
         }
 
+        if (folds is < 1 || folds > plan.FoldCount)
+        {
+            throw new ArgumentOutOfRangeException(nameof(folds), folds, $"must be 1 to the plan's {plan.FoldCount} folds");
+        }
+
+        var scored = ScoredRows.Of(data, folds ?? plan.FoldCount);
         return learner is IRoundLearner rounds && stopping is not null
-            ? RunByRounds(rounds, stopping, data, parameters, budget, seed, threads, foldDone, advanced, predictsTest, cancellation)
-            : RunWhole(data, parameters, budget, seed, threads, foldDone, predictsTest, cancellation);
+            ? RunByRounds(rounds, stopping, data, scored, parameters, budget, seed, threads, foldDone, advanced, predictsTest, cancellation)
+            : RunWhole(data, scored, parameters, budget, seed, threads, foldDone, predictsTest, cancellation);
     }
 
     private static FoldJob Job(string family, TrialData data, int fold, ParameterSet parameters, int budget, int seed, int threads, bool predictsTest)
@@ -65,10 +77,10 @@ public sealed class TrialExecutor
     }
 
     private TrialOutcome RunWhole(
-        TrialData data, ParameterSet parameters, int budget, int seed, int threads, Action<int>? foldDone, bool predictsTest, CancellationToken cancellation)
+        TrialData data, ScoredRows scored, ParameterSet parameters, int budget, int seed, int threads, Action<int>? foldDone, bool predictsTest, CancellationToken cancellation)
     {
-        var pooled = new Pooled(data, predictsTest);
-        for (int f = 0; f < data.Folds.FoldCount; f++)
+        var pooled = new Pooled(data, scored, predictsTest);
+        for (int f = 0; f < scored.FoldCount; f++)
         {
             cancellation.ThrowIfCancellationRequested();
             var job = Job(learner.Family, data, f, parameters, budget, seed, threads, predictsTest);
@@ -80,14 +92,14 @@ public sealed class TrialExecutor
     }
 
     private static TrialOutcome RunByRounds(
-        IRoundLearner learner, RoundStopping stopping, TrialData data, ParameterSet parameters, int budget, int seed, int threads,
+        IRoundLearner learner, RoundStopping stopping, TrialData data, ScoredRows scored, ParameterSet parameters, int budget, int seed, int threads,
         Action<int>? foldDone, Action<int, int>? advanced, bool predictsTest, CancellationToken cancellation)
     {
-        var fits = new List<IRoundFit>(data.Folds.FoldCount);
+        var fits = new List<IRoundFit>(scored.FoldCount);
         try
         {
-            var jobs = new List<FoldJob>(data.Folds.FoldCount);
-            for (int f = 0; f < data.Folds.FoldCount; f++)
+            var jobs = new List<FoldJob>(scored.FoldCount);
+            for (int f = 0; f < scored.FoldCount; f++)
             {
                 cancellation.ThrowIfCancellationRequested();
                 jobs.Add(Job(learner.Family, data, f, parameters, budget, seed, threads, predictsTest));
@@ -122,7 +134,7 @@ public sealed class TrialExecutor
                     Place(heldOut[f], jobs[f], oof);
                 }
 
-                double score = data.Metric.Score(data.Target, oof);
+                double score = scored.Score(oof);
                 if (RoundStopping.Improves(score, best))
                 {
                     (best, bestRound) = (score, round);
@@ -134,7 +146,7 @@ public sealed class TrialExecutor
                 }
             }
 
-            var pooled = new Pooled(data, predictsTest);
+            var pooled = new Pooled(data, scored, predictsTest);
             for (int f = 0; f < fits.Count; f++)
             {
                 cancellation.ThrowIfCancellationRequested();
@@ -162,11 +174,11 @@ public sealed class TrialExecutor
     }
 
     /// <summary>The folds' predictions gathered into the out-of-fold vector, the fold scores and the mean test prediction.</summary>
-    private sealed class Pooled(TrialData data, bool predictsTest)
+    private sealed class Pooled(TrialData data, ScoredRows scored, bool predictsTest)
     {
         private readonly double[] oof = new double[data.Train.RowCount];
         private readonly double[] test = new double[predictsTest ? data.Test.RowCount : 0];
-        private readonly ImmutableArray<double>.Builder foldScores = ImmutableArray.CreateBuilder<double>(data.Folds.FoldCount);
+        private readonly ImmutableArray<double>.Builder foldScores = ImmutableArray.CreateBuilder<double>(scored.FoldCount);
 
         public void Add(string family, FoldJob job, FoldPrediction prediction)
         {
@@ -185,13 +197,13 @@ public sealed class TrialExecutor
 
             for (int i = 0; i < test.Length; i++)
             {
-                test[i] += prediction.Test[i] / data.Folds.FoldCount;
+                test[i] += prediction.Test[i] / scored.FoldCount;
             }
 
             foldScores.Add(data.Metric.Score(actual, prediction.Validation));
         }
 
         public TrialOutcome Outcome(int? bestRound, int roundsTrained) =>
-            new(data.Metric.Score(data.Target, oof), foldScores.MoveToImmutable(), oof, test, bestRound, roundsTrained);
+            new(scored.Score(oof), foldScores.MoveToImmutable(), oof, test, bestRound, roundsTrained);
     }
 }

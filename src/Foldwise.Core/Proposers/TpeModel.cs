@@ -1,3 +1,5 @@
+using Foldwise.Core.Search;
+
 namespace Foldwise.Core.Proposers;
 
 /// <summary>
@@ -14,7 +16,7 @@ internal sealed class TpeModel
     private readonly int _restCount;
     private readonly bool _joint;
 
-    private TpeModel(int budget, int results, TpeDimension[] dimensions, IJointDensity good, IJointDensity rest, int restCount, bool joint)
+    private TpeModel(TrialReach budget, int results, TpeDimension[] dimensions, IJointDensity good, IJointDensity rest, int restCount, bool joint)
     {
         Budget = budget;
         Results = results;
@@ -26,7 +28,7 @@ internal sealed class TpeModel
     }
 
     /// <summary>The budget fitted on, and how many results it had then: together they identify the window.</summary>
-    public int Budget { get; }
+    public TrialReach Budget { get; }
 
     public int Results { get; }
 
@@ -35,7 +37,7 @@ internal sealed class TpeModel
         window.Sort(static (a, b) => a.Score != b.Score ? a.Score.CompareTo(b.Score) : a.TrialId.CompareTo(b.TrialId));
 
     /// <param name="window">The results, already ordered best first.</param>
-    public static TpeModel Fit(int budget, int results, TpeDimension[] dimensions, List<Observation> window, TpeOptions options)
+    public static TpeModel Fit(TrialReach budget, int results, TpeDimension[] dimensions, List<Observation> window, TpeOptions options)
     {
         int n = window.Count;
 

@@ -1,5 +1,6 @@
 using System.Runtime.CompilerServices;
 using Foldwise.Core.Spaces;
+using Foldwise.Core.Search;
 
 namespace Foldwise.Core.Proposers;
 
@@ -38,8 +39,8 @@ public sealed class TpeProposer : IProposer
         var space = history.Space;
         var dimensions = Dimensions(space);
         int startup = _options.RandomStartFor(dimensions.Length);
-        int budget = dimensions.Length == 0 ? -1 : _options.Ladder ? LadderBudget(history, startup) : BudgetToFit(history, startup);
-        if (budget < 0)
+        TrialReach? fitAt = dimensions.Length == 0 ? null : _options.Ladder ? LadderBudget(history, startup) : BudgetToFit(history, startup);
+        if (fitAt is not { } budget)
         {
             return new Proposal(RandomProposer.Draw(space, random), RandomProposer.ProposerName);
         }
@@ -56,8 +57,8 @@ public sealed class TpeProposer : IProposer
         return new Proposal(Assemble(space, dimensions, best), ProposerName);
     }
 
-    /// <summary>The highest budget with at least <paramref name="startup"/> results, or −1.</summary>
-    private static int BudgetToFit(FamilyHistory history, int startup)
+    /// <summary>The highest budget with at least <paramref name="startup"/> results, or null.</summary>
+    private static TrialReach? BudgetToFit(FamilyHistory history, int startup)
     {
         var budgets = history.Budgets;
         for (int b = budgets.Count - 1; b >= 0; b--)
@@ -68,11 +69,11 @@ public sealed class TpeProposer : IProposer
             }
         }
 
-        return -1;
+        return null;
     }
 
-    /// <summary>0 (the model spans every budget) once enough candidates have a result, else −1.</summary>
-    private static int LadderBudget(FamilyHistory history, int startup) => history.Furthest.Count >= startup ? 0 : -1;
+    /// <summary>Budget 0 (the model spans every budget) once enough candidates have a result, else null.</summary>
+    private static TrialReach? LadderBudget(FamilyHistory history, int startup) => history.Furthest.Count >= startup ? default(TrialReach) : null;
 
     /// <summary>
     /// Every candidate once, best first in the order successive halving itself implies: further up the ladder first (a
@@ -82,14 +83,14 @@ public sealed class TpeProposer : IProposer
     private List<Observation> LadderWindow(FamilyHistory history)
     {
         var all = history.Furthest;
-        var recent = new List<(int Budget, Observation Result)>(Math.Min(all.Count, _options.Window));
+        var recent = new List<(TrialReach Reach, Observation Result)>(Math.Min(all.Count, _options.Window));
         for (int i = Math.Max(0, all.Count - _options.Window); i < all.Count; i++)
         {
             recent.Add(all[i]);
         }
 
         recent.Sort(static (a, b) =>
-            a.Budget != b.Budget ? b.Budget.CompareTo(a.Budget)
+            a.Reach != b.Reach ? b.Reach.CompareTo(a.Reach)
             : a.Result.Score != b.Result.Score ? a.Result.Score.CompareTo(b.Result.Score)
             : a.Result.TrialId.CompareTo(b.Result.TrialId));
         return recent.ConvertAll(static f => f.Result);

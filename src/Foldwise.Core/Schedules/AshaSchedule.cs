@@ -12,13 +12,20 @@ namespace Foldwise.Core.Schedules;
 /// promoted it starts a new candidate at rung 0 for the family whose turn it is. It never waits and never runs out.
 /// With more than one bracket (<see cref="AshaBrackets"/>) a new candidate starts at its bracket's first rung, and
 /// promotions rank it only against candidates of its own bracket; trials carry the bracket as 1, 2, … (0 when
-/// there is one).
+/// there is one). When the schedule screens on folds (<see cref="ScheduleOptions.ScreenFolds"/>) the rungs count
+/// folds instead: every trial trains the family's full budget, on the plan's first rung-many folds.
 /// </summary>
 public sealed class AshaSchedule : ISchedule
 {
     private readonly CandidateSource _source;
-    /// <summary>[family]: the family's rung budgets.</summary>
+    /// <summary>[family]: the family's rungs, in its budget unit, or in folds when screening on folds.</summary>
     private readonly ImmutableArray<int>[] _budgets;
+
+    /// <summary>[family]: the budget every trial trains when screening on folds.</summary>
+    private readonly int[] _fullBudgets;
+
+    /// <summary>0, or the fold count when rungs count folds.</summary>
+    private readonly int _foldCount;
     private readonly int _eta;
 
     /// <summary>[family]: the family's brackets (as many for every family; their costs follow the family's rungs).</summary>
@@ -31,10 +38,20 @@ public sealed class AshaSchedule : ISchedule
     /// <summary>[family][bracket]: new candidates started.</summary>
     private readonly int[][] _started;
 
-    public AshaSchedule(ImmutableArray<FamilySearch> families, ScheduleOptions options, IProposer proposer, int seed)
+    /// <param name="folds">The search's fold count: the top rung when the schedule screens on folds.</param>
+    public AshaSchedule(ImmutableArray<FamilySearch> families, ScheduleOptions options, IProposer proposer, int seed, int folds = 5)
     {
         ArgumentNullException.ThrowIfNull(options);
-        _budgets = [.. families.Select(f => f.BudgetUnder(options)).Select(b => RungBudgets.For(b.FirstRung, b.FullBudget, options.Eta))];
+        if (options.ByFolds && options.ScreenFolds >= folds)
+        {
+            throw new ArgumentOutOfRangeException(nameof(options), options.ScreenFolds, $"screening on folds needs fewer than the plan's {folds} folds");
+        }
+
+        _fullBudgets = [.. families.Select(f => f.BudgetUnder(options).FullBudget)];
+        _foldCount = options.ByFolds ? folds : 0;
+        _budgets = options.ByFolds
+            ? [.. families.Select(_ => RungBudgets.For(options.ScreenFolds, folds, options.Eta))]
+            : [.. families.Select(f => f.BudgetUnder(options)).Select(b => RungBudgets.For(b.FirstRung, b.FullBudget, options.Eta))];
         _eta = options.Eta;
         _source = new CandidateSource(families, proposer, seed);
         _brackets = [.. _budgets.Select(b => AshaBrackets.For(b, _eta, options.Brackets))];
@@ -44,7 +61,7 @@ public sealed class AshaSchedule : ISchedule
         _started = [.. Enumerable.Range(0, _source.Count).Select(_ => new int[_bracketCount])];
     }
 
-    /// <summary>A family's rung budgets, by its place in the definition.</summary>
+    /// <summary>A family's rungs (budgets, or folds when screening on folds), by its place in the definition.</summary>
     public ImmutableArray<int> BudgetsOf(int family) => _budgets[family];
 
     public bool Exhausted => false;
@@ -87,7 +104,7 @@ public sealed class AshaSchedule : ISchedule
                 {
                     if (k < _budgets[f].Length - 1 && _rungs[b][f][k].TryPromotable(_eta, out int parent, out var parameters))
                     {
-                        return new TrialPlan(_source[f].Family, parameters, _budgets[f][k + 1], k + 1, parent, Promotion.ProposerName, BracketLabel(b));
+                        return new TrialPlan(_source[f].Family, parameters, BudgetAt(f, k + 1), k + 1, parent, Promotion.ProposerName, BracketLabel(b), FoldsAt(f, k + 1));
                     }
                 }
             }
@@ -95,8 +112,13 @@ public sealed class AshaSchedule : ISchedule
 
         int family = _source.NextFamily();
         int start = _brackets[family].Next(_started[family]);
-        return _source.NewCandidate(family, _budgets[family][start], BracketLabel(start), rung: start);
+        return _source.NewCandidate(family, BudgetAt(family, start), BracketLabel(start), rung: start, folds: FoldsAt(family, start));
     }
+
+    private int BudgetAt(int family, int rung) => _foldCount > 0 ? _fullBudgets[family] : _budgets[family][rung];
+
+    /// <summary>0 (all folds) unless screening on folds below the top rung.</summary>
+    private int FoldsAt(int family, int rung) => _foldCount > 0 && _budgets[family][rung] < _foldCount ? _budgets[family][rung] : 0;
 
     private int BracketLabel(int bracket) => _bracketCount == 1 ? 0 : bracket + 1;
 }

@@ -73,10 +73,11 @@ internal sealed class CandidateSource
     }
 
     /// <param name="rung">The rung the candidate starts at: 0 but in an ASHA bracket that starts higher.</param>
-    public TrialPlan NewCandidate(int family, int budget, int bracket = 0, int rung = 0)
+    /// <param name="folds">The folds it trains when the schedule screens on folds; 0: all.</param>
+    public TrialPlan NewCandidate(int family, int budget, int bracket = 0, int rung = 0, int folds = 0)
     {
         var history = _families[family];
         var proposal = _proposer.Propose(history, new SearchSeeds(_seed).Proposal(family, history.NewCandidates));
-        return new TrialPlan(history.Family, proposal.Parameters, budget, rung, ParentId: null, proposal.Proposer, bracket);
+        return new TrialPlan(history.Family, proposal.Parameters, budget, rung, ParentId: null, proposal.Proposer, bracket, folds);
     }
 }

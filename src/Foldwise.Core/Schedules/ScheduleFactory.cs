@@ -15,7 +15,7 @@ public static class ScheduleFactory
         return options.Kind switch
         {
             ScheduleKind.Full => new FullBudgetSchedule(definition.Families, options, proposer, definition.Seed),
-            ScheduleKind.Asha => new AshaSchedule(definition.Families, options, proposer, definition.Seed),
+            ScheduleKind.Asha => new AshaSchedule(definition.Families, options, proposer, definition.Seed, definition.Folds),
             ScheduleKind.Hyperband => new HyperbandSchedule(definition.Families, options, proposer, definition.Seed),
             _ => throw new ArgumentOutOfRangeException(nameof(definition), options.Kind, "unknown schedule kind"),
         };

@@ -274,6 +274,7 @@ public sealed class SearchCoordinator
             ParentId = plan.ParentId,
             Proposer = plan.Proposer,
             Bracket = plan.Bracket,
+            Folds = plan.Folds,
             Created = now,
         };
         CommitLocked(created);
@@ -349,7 +350,7 @@ public sealed class SearchCoordinator
     private void ApplyLocked(TrialRecord trial)
     {
         trials[trial.Id] = trial;
-        if (trial.State == TrialState.Done && trial.Budget >= definition.BudgetOf(trial.Family).FullBudget)
+        if (trial.State == TrialState.Done && trial.AllFolds && trial.Budget >= definition.BudgetOf(trial.Family).FullBudget)
         {
             familiesAtFullBudget.Add(trial.Family);
         }
@@ -393,7 +394,7 @@ public sealed class SearchCoordinator
     private LeaseGrant Granted(TrialRecord trial)
     {
         var fit = TrialFit.For(trial, trials, definition);
-        return new(LeaseKind.Granted, trial, fit.Seed, fit.Run, PredictsTest: TestPredictions.Wanted(trial.Budget, definition.BudgetOf(trial.Family).FullBudget, familiesAtFullBudget.Contains(trial.Family)));
+        return new(LeaseKind.Granted, trial, fit.Seed, fit.Run, PredictsTest: trial.AllFolds && TestPredictions.Wanted(trial.Budget, definition.BudgetOf(trial.Family).FullBudget, familiesAtFullBudget.Contains(trial.Family)));
     }
 
     private double SpentSecondsLocked(DateTimeOffset now) => spentBefore + (now - sessionStart).TotalSeconds;

@@ -22,9 +22,9 @@ public sealed record SearchProgress(
 {
     public double? Best => BestByFamily.Count == 0 ? null : BestByFamily.Values.Min();
 
-    /// <summary>The lowest score of each family's done trials.</summary>
+    /// <summary>The lowest score of each family's done trials on every fold (a screening score on some folds covers other rows).</summary>
     public static ImmutableSortedDictionary<string, double> BestOf(IEnumerable<TrialRecord> trials) =>
-        trials.Where(t => t.State == TrialState.Done && t.Score is not null)
+        trials.Where(t => t.State == TrialState.Done && t.AllFolds && t.Score is not null)
             .GroupBy(t => t.Family)
             .ToImmutableSortedDictionary(g => g.Key, g => g.Min(t => t.Score!.Value));
 }

@@ -9,4 +9,5 @@ namespace Foldwise.Core.Search;
 /// <param name="Rung">0 for a new candidate; k for the k-th promotion.</param>
 /// <param name="Bracket">The Hyperband bracket, or 0 outside Hyperband.</param>
 /// <param name="Proposer">Who chose the parameters: e.g. <c>random</c>, <c>tpe</c>, <c>promotion</c>.</param>
-public sealed record TrialPlan(string Family, ParameterSet Parameters, int Budget, int Rung, int? ParentId, string Proposer, int Bracket = 0);
+/// <param name="Folds">The plan's first folds the trial trains when a schedule screens on folds (<see cref="TrialRecord.Folds"/>); 0: all.</param>
+public sealed record TrialPlan(string Family, ParameterSet Parameters, int Budget, int Rung, int? ParentId, string Proposer, int Bracket = 0, int Folds = 0);

@@ -20,6 +20,16 @@ public sealed record TrialRecord
 
     public int Rung { get; init; }
 
+    /// <summary>
+    /// 0: the trial trains every fold of the plan (always, but under a schedule that screens on folds). n: only the
+    /// plan's first n folds, and <see cref="Score"/> covers their held-out rows alone: a screening score, comparable
+    /// with other trials on the same folds but not with a whole trial's, and never pooled into a blend.
+    /// </summary>
+    public int Folds { get; init; }
+
+    /// <summary>True when the trial trains every fold: its score and out-of-fold vector cover every row.</summary>
+    public bool AllFolds => Folds == 0;
+
     public int? ParentId { get; init; }
 
     public required string Proposer { get; init; }

@@ -37,6 +37,29 @@ public sealed class TrialTableTests
         Assert.DoesNotContain("bracket", Header(plain));
     }
 
+    [Fact]
+    public void A_fold_screen_adds_a_folds_column_and_history_lists_whole_trials_before_screened_ones()
+    {
+        // Given a screened trial on 1 fold that scored lower than its promotion on all 5
+        TrialRecord[] trials =
+        [
+            Trial(1, rung: 0, bracket: 0) with { Folds = 1, State = TrialState.Done, Score = 0.40 },
+            Trial(2, rung: 1, bracket: 0) with { State = TrialState.Done, Score = 0.55, ParentId = 1 },
+        ];
+
+        // When they are listed as history lists them
+        var listed = Foldwise.Cli.Commands.HistoryCommand.Filter(trials, new Foldwise.Cli.Commands.HistorySettings());
+        var console = new TestConsole().Width(200);
+        TrialTable.Render(console, listed, Definition, Metric.Rmsle);
+        string[] header = console.Lines.First(l => l.Contains("trial", StringComparison.Ordinal)).Split(' ', StringSplitOptions.RemoveEmptyEntries);
+
+        // Then the whole trial comes first, and each row says how many folds it trained
+        Assert.Equal([2, 1], listed.Select(t => t.Id));
+        Assert.Equal(["rounds", "folds"], header[4..6]);
+        Assert.Contains(console.Lines, l => l.Split(' ', StringSplitOptions.RemoveEmptyEntries) is [ "1", _, _, "0", _, "1", "0.40000", ..]);
+        Assert.Contains(console.Lines, l => l.Split(' ', StringSplitOptions.RemoveEmptyEntries) is [ "2", _, _, "1", _, "5", "0.55000", ..]);
+    }
+
     private static TrialRecord Trial(int id, int rung, int bracket) => new()
     {
         Id = id,

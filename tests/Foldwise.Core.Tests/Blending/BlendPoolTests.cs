@@ -33,6 +33,18 @@ public sealed class BlendPoolTests
     }
 
     [Fact]
+    public void Leaves_out_a_trial_screened_on_some_folds_however_well_it_scored()
+    {
+        // Given a fold screen's trial on 1 fold that scored best, and its promotion on every fold
+        var pool = BlendPool.Select([Trial(1, "lightgbm", 600, TrialState.Done, 0.10) with { Folds = 1 }, Trial(2, "lightgbm", 600, TrialState.Done, 0.80)], 3, 600);
+
+        // Then only the trial on every fold can be pooled: the other's out-of-fold vector covers one fold's rows
+        Assert.Equal([2], pool.Select(t => t.Id));
+        Assert.Equal(0.80, SearchProgress.BestOf(pool)["lightgbm"]);
+        Assert.Equal(0.80, SearchProgress.BestOf([Trial(1, "lightgbm", 600, TrialState.Done, 0.10) with { Folds = 1 }, Trial(2, "lightgbm", 600, TrialState.Done, 0.80)])["lightgbm"]);
+    }
+
+    [Fact]
     public void Leaves_out_a_done_trial_without_a_score()
     {
         var pool = BlendPool.Select([Trial(1, "lightgbm", 600, TrialState.Done, null)], 3, 600);

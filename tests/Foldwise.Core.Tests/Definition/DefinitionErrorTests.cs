@@ -97,7 +97,7 @@ public sealed class DefinitionErrorTests
 
         // Then the error is at the key's opening quote
         Assert.Equal((4L, 5), (e.Line, e.Column));
-        Assert.Equal("s.json:4:5: unknown key 'schedule.frist_rung'; did you mean 'first_rung'? (known keys here: kind, proposer, first_rung, full_budget, eta, rate_scaling, brackets)", e.Message);
+        Assert.Equal("s.json:4:5: unknown key 'schedule.frist_rung'; did you mean 'first_rung'? (known keys here: kind, proposer, first_rung, full_budget, eta, rate_scaling, brackets, screen_folds)", e.Message);
     }
 
     [Fact]

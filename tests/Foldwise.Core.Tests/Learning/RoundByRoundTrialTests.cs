@@ -131,4 +131,34 @@ public sealed class RoundByRoundTrialTests
         // Then it was told the 5 folds prepared one by one, then rounds 1 to 40 in order, where it stopped
         Assert.Equal([.. Enumerable.Range(1, 5).Select(f => (f, 0)), .. Enumerable.Range(1, 40).Select(r => (5, r))], told);
     }
+
+    [Theory]
+    [InlineData(true)]
+    [InlineData(false)]
+    public void A_trial_on_the_first_folds_trains_only_those_and_is_scored_on_their_held_out_rows(bool roundByRound)
+    {
+        // Given folds whose every held-out prediction is off by 0.01 after 30 rounds (the rows outside them would be off by their whole target)
+        var learner = new CurveLearner(BestAt30);
+        var executor = new TrialExecutor(learner, roundByRound ? RoundStopping.Default : null);
+
+        // When a trial of 30 rounds runs on the plan's first 2 of 5 folds
+        var outcome = executor.Run(Data, ParameterSet.Of([]), 30, seed: 1, threads: 1, CancellationToken.None, folds: 2);
+
+        // Then 2 folds trained, each with its own score, and the pooled score covers their rows alone
+        Assert.Equal(2, roundByRound ? learner.Fits.Count : learner.WholeFits);
+        Assert.Equal(2, outcome.FoldScores.Length);
+        Assert.Equal(0.01, outcome.Score, 12);
+        var covered = Data.Folds.ValidationRows(0).Concat(Data.Folds.ValidationRows(1)).ToHashSet();
+        Assert.All(Enumerable.Range(0, Data.Train.RowCount).Where(r => !covered.Contains(r)), r => Assert.Equal(0, outcome.OutOfFold[r]));
+    }
+
+    [Theory]
+    [InlineData(0)]
+    [InlineData(6)]
+    public void A_fold_count_outside_the_plan_is_refused(int folds)
+    {
+        var executor = new TrialExecutor(new CurveLearner(BestAt30));
+        var error = Assert.Throws<ArgumentOutOfRangeException>(() => executor.Run(Data, ParameterSet.Of([]), 30, seed: 1, threads: 1, CancellationToken.None, folds: folds));
+        Assert.Contains("must be 1 to the plan's 5 folds", error.Message, StringComparison.Ordinal);
+    }
 }

@@ -41,6 +41,7 @@ internal sealed class FakeCoordinator(ISchedule schedule)
             ParentId = plan.ParentId,
             Proposer = plan.Proposer,
             Bracket = plan.Bracket,
+            Folds = plan.Folds,
             Created = Epoch.AddMinutes(_trials.Count),
         };
         Save(trial);

@@ -27,6 +27,7 @@ public static class SampleTrials
         ParentId = id > 1 ? id - 1 : null,
         Proposer = "tpe",
         Bracket = 1,
+        Folds = 2,
         State = TrialState.Done,
         Attempt = 2,
         Failures = 1,

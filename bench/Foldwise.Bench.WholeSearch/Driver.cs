@@ -1,0 +1,76 @@
+using System.Diagnostics;
+using System.Globalization;
+
+namespace Foldwise.Bench.WholeSearch;
+
+/// <summary>Runs the searches in turn as child processes and prints the load before each and their results side by side at the end.</summary>
+internal static class Driver
+{
+    public static int Run(string[] args)
+    {
+        string[] runs = Value(args, "--runs", "before,after,before,after").Split(',');
+        string hours = Value(args, "--hours", "0.1");
+        string seed = Value(args, "--seed", "7");
+        string families = Value(args, "--families", "default");
+        string outRoot = Path.GetFullPath(Value(args, "--out", Path.Combine("bench", "results", "whole-search")));
+        foreach (string run in runs)
+        {
+            _ = Setting.Named(run);
+        }
+
+        Console.WriteLine($"whole-search bench: full-size demo, {hours} h per search, seed {seed}, families {families}, {Environment.ProcessorCount} cores, runs {string.Join(" ", runs)}; {DateTimeOffset.UtcNow:yyyy-MM-dd HH:mm} UTC");
+        var results = new List<string>();
+        for (int i = 0; i < runs.Length; i++)
+        {
+            string outDir = Path.Combine(outRoot, $"{DateTimeOffset.UtcNow:yyyyMMddHHmmss}-{i + 1}-{runs[i]}");
+            Console.WriteLine($"run {i + 1} ({runs[i]}), load before: {Load()}");
+            var (code, result) = RunChild(runs[i], hours, seed, families, outDir);
+            results.Add($"run {i + 1}: {result ?? $"{runs[i]} failed, exit {code}"}; load after {Load()}");
+        }
+
+        results.ForEach(Console.WriteLine);
+        return 0;
+    }
+
+    private static (int Code, string? Result) RunChild(string setting, string hours, string seed, string families, string outDir)
+    {
+        var info = new ProcessStartInfo(Environment.ProcessPath!) { RedirectStandardOutput = true, UseShellExecute = false };
+        if (Path.GetFileNameWithoutExtension(Environment.ProcessPath) == "dotnet")
+        {
+            info.ArgumentList.Add(typeof(Driver).Assembly.Location);
+        }
+
+        foreach (string arg in new[] { "--child", setting, hours, seed, families, outDir })
+        {
+            info.ArgumentList.Add(arg);
+        }
+
+        info.Environment.Remove("OMP_WAIT_POLICY");
+        if (Setting.Named(setting).WaitPolicy is { } policy)
+        {
+            info.Environment["OMP_WAIT_POLICY"] = policy;
+        }
+
+        using var child = Process.Start(info)!;
+        string? result = null;
+        while (child.StandardOutput.ReadLine() is { } line)
+        {
+            Console.WriteLine(line);
+            if (line.StartsWith("RESULT ", StringComparison.Ordinal))
+            {
+                result = line[7..];
+            }
+        }
+
+        child.WaitForExit();
+        return (child.ExitCode, result);
+    }
+
+    private static string Value(string[] args, string name, string fallback)
+    {
+        int i = Array.IndexOf(args, name);
+        return i >= 0 && i + 1 < args.Length ? args[i + 1] : fallback;
+    }
+
+    private static string Load() => File.Exists("/proc/loadavg") ? string.Join(' ', File.ReadAllText("/proc/loadavg").Split(' ').Take(3)) : "n/a";
+}
