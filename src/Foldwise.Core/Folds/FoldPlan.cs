@@ -21,7 +21,7 @@ public sealed record FoldPlan(int FoldCount, int Seed, ImmutableArray<int> FoldO
         ArgumentOutOfRangeException.ThrowIfNegative(fold);
         ArgumentOutOfRangeException.ThrowIfGreaterThanOrEqual(fold, FoldCount);
         // Counted first, so the rows are written once into a vector of their size: a growing one left about three times
-        // its size as garbage, 40 MB a fold of a 1,000,000-row table (MemoryProbe, 2026-12-05).
+        // its size as garbage, 40 MB a fold of a 1,000,000-row table (bench/Foldwise.Bench.FoldFit --memory, 2026-12-05).
         int count = 0;
         foreach (int f in FoldOfRow)
         {

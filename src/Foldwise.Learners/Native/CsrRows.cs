@@ -10,7 +10,7 @@ namespace Foldwise.Learners.Native;
 /// held only for the call that reads them: a whole table pinned where it lies, or chosen rows copied outside the
 /// managed heap and freed on <see cref="Dispose"/>. A fold's training rows of a 1,000,000-row table take about 80 MB;
 /// as managed arrays each fold's copy stayed on the heap until a full collection, which with two slots preparing
-/// folds side by side let the heap grow by about 0.7 GB (MemoryProbe, 2026-12-05).
+/// folds side by side let the heap grow by about 0.7 GB (bench/Foldwise.Bench.FoldFit --memory, 2026-12-05).
 /// </summary>
 internal sealed unsafe class CsrRows : IDisposable
 {
@@ -45,6 +45,12 @@ internal sealed unsafe class CsrRows : IDisposable
     public int StartCount => RowCount + 1;
 
     public int CellCount => Starts[RowCount];
+
+    /// <summary>Row <paramref name="row"/>'s columns, valid until disposed.</summary>
+    public ReadOnlySpan<int> RowColumns(int row) => new(Columns + Starts[row], Starts[row + 1] - Starts[row]);
+
+    /// <summary>Row <paramref name="row"/>'s values, valid until disposed.</summary>
+    public ReadOnlySpan<float> RowValues(int row) => new(Values + Starts[row], Starts[row + 1] - Starts[row]);
 
     /// <summary>The whole matrix, pinned, without copying.</summary>
     public static CsrRows All(SparseRowMatrix matrix)

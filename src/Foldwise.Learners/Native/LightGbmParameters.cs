@@ -79,7 +79,7 @@ internal static class LightGbmParameters
             // the faster: on a fold of 800,000 rows x 40 columns that test took about 1 s of the fold's 4.5 s preparation
             // and built a row-wise copy of the binned rows, and its choice changed from fold to fold with the timing. At
             // one thread both layouts sum each bin's gradients in row order, so the model is the same
-            // (NativeLightGbmTests pins the predictions; MemoryProbe, 2026-12-05).
+            // (NativeLightGbmTests; the same predictions to the bit on that table, bench/Foldwise.Bench.FoldFit --memory).
             ["force_col_wise"] = "true",
         };
         Table.Apply(job.Parameters, parameters);
