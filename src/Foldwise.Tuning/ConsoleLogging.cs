@@ -13,7 +13,27 @@ internal static class ConsoleLogging
 {
     public const string Variable = "FOLDWISE_LOG";
 
-    public static void Configure(ILoggingBuilder logging, bool verbose)
+    /// <summary>
+    /// Where Orleans and the host log a worker's failed join and the calls that fail once its coordinator has gone
+    /// (each also said by the worker's own line: "Cannot join …", "The coordinator … has stopped").
+    /// </summary>
+    public static readonly string[] JoiningNoise =
+    [
+        "Polly",
+        "Orleans.Messaging",
+        "Orleans.Runtime.Messaging.ConnectionManager",
+        "Orleans.Runtime.MembershipService.MembershipTableManager",
+        "Orleans.Runtime.SiloLifecycleSubject",
+        "Orleans.Runtime.Silo",
+        "Microsoft.Extensions.Hosting.Internal.Host",
+    ];
+
+    /// <param name="joining">
+    /// A worker's silo: while the coordinator is unreachable Orleans logs every refused connection, the failed start and
+    /// each call to the gone coordinator with stack traces, every few seconds; the worker says the same in one line, so at
+    /// the default level those messages stay out (<c>--verbose</c> or <c>FOLDWISE_LOG</c> shows them).
+    /// </param>
+    public static void Configure(ILoggingBuilder logging, bool verbose, bool joining = false)
     {
         logging.ClearProviders();
         var level = Environment.GetEnvironmentVariable(Variable) is { Length: > 0 } text && Enum.TryParse<LogLevel>(text, true, out var asked)
@@ -31,6 +51,13 @@ internal static class ConsoleLogging
             // machine), and the watchdog warns of a stalled check on its first round; neither is a fault to show a user.
             logging.AddFilter("Orleans.Runtime.Silo", LogLevel.Error);
             logging.AddFilter("Orleans.Runtime.Watchdog", LogLevel.Error);
+            if (joining)
+            {
+                foreach (string category in JoiningNoise)
+                {
+                    logging.AddFilter(category, LogLevel.Critical);
+                }
+            }
         }
 
         logging.Services.Configure<ConsoleLoggerOptions>(o => o.LogToStandardErrorThreshold = LogLevel.Trace);

@@ -43,8 +43,24 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
     {
         events.Report(new WorkerStarting(options.Name, role.Join?.ToString() ?? "", role.Advertise.ToString(), role.Certificate is not null));
         int attempt = EarlierAttempts;
+        bool waitingTold = false;
         while (!stopping.IsCancellationRequested)
         {
+            // A silo started while nothing answers on the coordinator's port only fails after Orleans' own long retries:
+            // wait here, said once, until the port answers.
+            if (role.Join is { } join && !await ClusterProbe.AnswersAsync(join, RetryPause, stopping))
+            {
+                if (!waitingTold && !stopping.IsCancellationRequested)
+                {
+                    events.Report(new WorkerAwaitsCoordinator(join.ToString(), RetryPause));
+                    waitingTold = true;
+                }
+
+                await PauseAsync(stopping);
+                continue;
+            }
+
+            waitingTold = false;
             attempt++;
             using var host = Build();
             try
@@ -76,9 +92,9 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
                     events.Report(end.Rejoining);
                 }
             }
-            catch (OperationCanceledException) when (stopping.IsCancellationRequested)
+            catch (Exception) when (stopping.IsCancellationRequested)
             {
-                // Ctrl-C while joining.
+                // Ctrl-C while joining or working: whatever the silo threw on its way down is not a failed join.
             }
             catch (Exception e) when (e is not OperationCanceledException)
             {
@@ -123,7 +139,7 @@ public sealed class WorkerHost(ClusterRole role, WorkerOptions options, IProgres
     private IHost Build()
     {
         var builder = Host.CreateApplicationBuilder([]);
-        ConsoleLogging.Configure(builder.Logging, role.Verbose);
+        ConsoleLogging.Configure(builder.Logging, role.Verbose, joining: true);
 
         builder.Services.Configure<HostOptions>(o => o.ShutdownTimeout = TimeSpan.FromSeconds(10));
         builder.UseOrleans(silo => silo.UseFoldwiseClustering(role));

@@ -27,4 +27,18 @@ public sealed class ClusterProbeTests
         Assert.Null(ClusterProbe.Judge(connected: true, presented: null, own: null));
         Assert.Null(ClusterProbe.Judge(connected: false, presented: null, own: beta));
     }
+
+    [Fact]
+    public async Task A_port_answers_while_something_listens_there_and_not_after()
+    {
+        // Given a listener on a free loopback port
+        var listener = new System.Net.Sockets.TcpListener(System.Net.IPAddress.Loopback, 0);
+        listener.Start();
+        var port = (System.Net.IPEndPoint)listener.LocalEndpoint;
+
+        // Then the port answers, and once the listener has stopped it does not
+        Assert.True(await ClusterProbe.AnswersAsync(port, TimeSpan.FromSeconds(5), CancellationToken.None));
+        listener.Stop();
+        Assert.False(await ClusterProbe.AnswersAsync(port, TimeSpan.FromSeconds(5), CancellationToken.None));
+    }
 }

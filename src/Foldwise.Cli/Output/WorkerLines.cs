@@ -21,6 +21,7 @@ public sealed class WorkerLines(TextWriter output) : IProgress<SearchEvent>
             SlotFoldFitted f when f.IsLong => $"Slot {f.Slot}: trial {f.TrialId} fold {f.Fold + 1} of {f.Folds} fitted after {f.Elapsed.TotalSeconds:F0} s",
             WorkerStarting s => $"Worker {s.Name} joining {s.Join} from {s.Advertise}" + (s.MutualTls ? " (mutual TLS)" : " (no certificate)") + "; Ctrl-C to leave",
             WorkerJoined j => $"Joined the cluster at {j.Join} as {j.Name} with {j.Slots} slot(s), {j.Threads} thread(s) each",
+            WorkerAwaitsCoordinator a => $"Nothing answers at {a.Join} yet (is the coordinator running 'foldwise run --port'?); looking again every {a.RetryIn.TotalSeconds:F0} s",
             WorkerJoinFailed f => $"Cannot join {f.Join} (attempt {f.Attempt}): {f.Reason}; retrying in {f.RetryIn.TotalSeconds:F0} s",
             WorkerLostCluster l => $"Lost the cluster ({l.Reason}); joining again",
             WorkerStopped => "Worker stopped",

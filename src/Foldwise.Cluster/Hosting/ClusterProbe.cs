@@ -13,6 +13,24 @@ namespace Foldwise.Cluster.Hosting;
 /// </summary>
 public static class ClusterProbe
 {
+    /// <summary>Whether anything accepts a TCP connection on the coordinator's silo port within <paramref name="timeout"/>.</summary>
+    public static async Task<bool> AnswersAsync(IPEndPoint coordinator, TimeSpan timeout, CancellationToken cancellation)
+    {
+        ArgumentNullException.ThrowIfNull(coordinator);
+        using var limit = CancellationTokenSource.CreateLinkedTokenSource(cancellation);
+        limit.CancelAfter(timeout);
+        try
+        {
+            using var tcp = new TcpClient(coordinator.AddressFamily);
+            await tcp.ConnectAsync(coordinator, limit.Token);
+            return true;
+        }
+        catch (Exception e) when (e is SocketException or OperationCanceledException && !cancellation.IsCancellationRequested)
+        {
+            return false;
+        }
+    }
+
     /// <summary>The line saying why this worker's certificate (or its absence) does not match the coordinator's; null when it matches or nothing answered.</summary>
     public static async Task<string?> MismatchAsync(IPEndPoint coordinator, X509Certificate2? own, TimeSpan timeout, CancellationToken cancellation)
     {

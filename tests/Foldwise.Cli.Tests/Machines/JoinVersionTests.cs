@@ -50,4 +50,75 @@ public sealed class JoinVersionTests
         Assert.Contains($"runs Foldwise 0.0.1+000000000000 but the coordinator runs Foldwise {BuildVersion.Text}", refusal);
         Assert.Contains("Cannot work for 127.0.0.1:" + port, output.ToString());
     }
+
+    [Fact]
+    [Trait(Lane.Key, Lane.Slow)]
+    public async Task A_worker_started_before_its_coordinator_says_so_once_and_joins_when_it_comes()
+    {
+        // Given a worker joining a port where nothing listens yet
+        int port = MachineDefinition.FreePortPair();
+        using var output = new SynchronizedWriter();
+        var worker = new WorkerHost(
+            new ClusterRole { IsCoordinator = false, Join = new System.Net.IPEndPoint(System.Net.IPAddress.Loopback, port), SiloName = "early" },
+            new WorkerOptions { Name = "early" },
+            new WorkerLines(output)) { RetryPause = TimeSpan.FromMilliseconds(200) };
+        using var stop = new CancellationTokenSource(TimeSpan.FromSeconds(120));
+        var running = worker.RunAsync(stop.Token);
+        await Until(() => output.Text.Contains("Nothing answers", StringComparison.Ordinal), stop.Token);
+        await Task.Delay(TimeSpan.FromSeconds(1), stop.Token);
+
+        // When the coordinator starts on that port
+        await using var coordinator = await EmbeddedCluster.StartAsync(
+            new ClusterRole { SiloPort = port, GatewayPort = port + 1 }, slots: 0, threads: null, new FoldwiseTelemetryOptions(), NoEvents.Instance, CancellationToken.None);
+        await Until(() => output.Text.Contains("Joined the cluster", StringComparison.Ordinal), stop.Token);
+        await stop.CancelAsync();
+        await running;
+
+        // Then the wait was said once, in one line, and the worker joined (a join in the coordinator's first second may
+        // still be retried once, with its own line)
+        string text = output.Text;
+        Assert.Equal(1, text.Split('\n').Count(l => l.StartsWith($"Nothing answers at 127.0.0.1:{port} yet", StringComparison.Ordinal)));
+        Assert.Contains("Joined the cluster", text, StringComparison.Ordinal);
+    }
+
+    private static async Task Until(Func<bool> condition, CancellationToken stop)
+    {
+        while (!condition())
+        {
+            await Task.Delay(100, stop);
+        }
+    }
+
+    /// <summary>A text writer the worker's events may write to from several threads while the test reads it.</summary>
+    private sealed class SynchronizedWriter : StringWriter
+    {
+        private readonly Lock gate = new();
+
+        public string Text
+        {
+            get
+            {
+                lock (gate)
+                {
+                    return ToString();
+                }
+            }
+        }
+
+        public override void WriteLine(string? value)
+        {
+            lock (gate)
+            {
+                base.WriteLine(value);
+            }
+        }
+
+        public override void Write(string? value)
+        {
+            lock (gate)
+            {
+                base.Write(value);
+            }
+        }
+    }
 }
