@@ -43,6 +43,49 @@ internal static unsafe partial class BareLightGbm
         Check(DatasetFree(dataset));
     }
 
+    /// <summary>One fold's native steps one after the other, <paramref name="report"/> told after each (for the memory probe).</summary>
+    public static void Steps(TrialData data, int fold, string parameters, Action<string> report)
+    {
+        var trainRows = data.Folds.TrainRows(fold);
+        var (starts, columns, values) = Csr(data.Train, [.. trainRows]);
+        var labels = trainRows.Select(r => (float)data.Target[r]).ToArray();
+        report("fold CSR copied (managed)");
+        nint dataset, validation, booster;
+        fixed (int* s = starts)
+        fixed (int* c = columns)
+        fixed (float* v = values)
+        {
+            Check(DatasetCreateFromCsr(s, 2, c, v, 0, starts.Length, values.Length, data.Train.ColumnCount, parameters, 0, out dataset));
+        }
+
+        fixed (float* l = labels)
+        {
+            Check(DatasetSetField(dataset, "label", l, labels.Length, 0));
+        }
+
+        report("training Dataset created");
+        (starts, columns, values) = Csr(data.Train, [.. data.Folds.ValidationRows(fold)]);
+        fixed (int* s = starts)
+        fixed (int* c = columns)
+        fixed (float* v = values)
+        {
+            Check(DatasetCreateFromCsr(s, 2, c, v, 0, starts.Length, values.Length, data.Train.ColumnCount, parameters, dataset, out validation));
+        }
+
+        report("held-out Dataset created");
+        Check(BoosterCreate(dataset, parameters, out booster));
+        report("booster created");
+        Check(BoosterAddValidData(booster, validation));
+        report("held-out rows added");
+        Check(BoosterUpdateOneIter(booster, out _));
+        report("one round");
+        Check(BoosterFree(booster));
+        report("booster freed");
+        Check(DatasetFree(validation));
+        Check(DatasetFree(dataset));
+        report("Datasets freed");
+    }
+
     public static string Parameters(IReadOnlyDictionary<string, double> p, int seed, int threads) => string.Create(CultureInfo.InvariantCulture,
         $"objective=regression metric=None verbosity=-1 deterministic=true seed={seed} num_threads={threads} min_sum_hessian_in_leaf=0.1 " +
         $"learning_rate={p["learning_rate"]} num_leaves={p["leaves"]} min_data_in_leaf={p["min_leaf_rows"]} feature_fraction={p["feature_fraction"]} " +
@@ -101,6 +144,9 @@ internal static unsafe partial class BareLightGbm
     [LibraryImport("lib_lightgbm", EntryPoint = "LGBM_BoosterPredictForCSR", StringMarshalling = StringMarshalling.Utf8)]
     private static partial int BoosterPredictForCsr(nint booster, int* indptr, int indptrType, int* indices, float* data, int dataType, long nindptr, long nelem, long numCol,
         int predictType, int start, int count, string parameters, out long length, double* result);
+
+    [LibraryImport("lib_lightgbm", EntryPoint = "LGBM_BoosterAddValidData")]
+    private static partial int BoosterAddValidData(nint booster, nint dataset);
 
     [LibraryImport("lib_lightgbm", EntryPoint = "LGBM_BoosterFree")]
     private static partial int BoosterFree(nint booster);

@@ -15,6 +15,11 @@ if (args.Length > 0 && args[0] == "--pair-child")
     return PairBench.Child(args);
 }
 
+if (args.Contains("--memory"))
+{
+    return MemoryProbe.Run(args);
+}
+
 if (args.Contains("--pair"))
 {
     return PairBench.Run(args);

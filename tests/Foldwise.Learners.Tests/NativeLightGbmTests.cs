@@ -115,7 +115,8 @@ public sealed class NativeLightGbmTests
         // Given a Dataset of a fold's rows
         var job = TinyTables.Job(Data, FamilyNames.LightGbm);
         var inputs = NativeFoldRows.From(job);
-        using var train = LightGbmDataset.FromRows(inputs.Train, inputs.Labels, LightGbmParameters.For(job), reference: null, "the training rows");
+        using var rows = inputs.CopyTrain();
+        using var train = LightGbmDataset.FromRows(rows, inputs.Labels(), LightGbmParameters.For(job), reference: null, "the training rows");
 
         // When a booster is asked for with a leaf count LightGBM cannot use
         var error = Assert.Throws<LightGbmException>(() => LightGbmBooster.Create(train, "objective=regression num_leaves=1 num_threads=1 verbosity=-1"));
@@ -165,6 +166,54 @@ public sealed class NativeLightGbmTests
         {
             Assert.Equal(oneByOne[i].Validation, sideBySide[i].Validation);
             Assert.Equal(oneByOne[i].Test, sideBySide[i].Test);
+        }
+    }
+
+    [Fact]
+    public void Builds_feature_by_feature_histograms_that_predict_what_row_by_row_ones_predict()
+    {
+        // Given a fold's Dataset and the job's parameters, which ask for histograms feature by feature
+        var job = TinyTables.Job(Data, FamilyNames.LightGbm, TinyTables.Parameters(FamilyNames.LightGbm, rowFraction: 0.7), seed: 3, budget: 40);
+        string parameters = LightGbmParameters.For(job);
+        Assert.Contains("force_col_wise=true", parameters);
+        var inputs = NativeFoldRows.From(job);
+        using var rows = inputs.CopyTrain();
+        using var held = inputs.CopyValidation();
+
+        // When one booster trains with them and another with histograms row by row instead
+        double[] Predictions(string settings)
+        {
+            using var train = LightGbmDataset.FromRows(rows, inputs.Labels(), LightGbmParameters.ForDataset(job), reference: null, "the training rows");
+            using var booster = LightGbmBooster.Create(train.Borrow(), settings);
+            for (int i = 0; i < job.Budget; i++)
+            {
+                booster.TrainOneRound();
+            }
+
+            return booster.Predict(held, 0, job.Threads, "the held-out rows");
+        }
+
+        // Then at one thread they predict the same to the bit
+        Assert.Equal(Predictions(parameters), Predictions(parameters.Replace("force_col_wise=true", "force_row_wise=true", StringComparison.Ordinal)));
+    }
+
+    [Fact]
+    public void Copies_a_fold_s_rows_cell_for_cell_in_the_fold_s_order()
+    {
+        // Given a fold's held-out rows
+        var job = TinyTables.Job(Data, FamilyNames.LightGbm);
+        var matrix = job.Features.Train;
+
+        // When they are copied for LightGBM
+        using var rows = NativeFoldRows.From(job).CopyValidation();
+
+        // Then each copied row holds the table row's columns and values, in the fold's order
+        Assert.Equal(job.ValidationRows.Length, rows.RowCount);
+        Assert.Equal(CsrRows.Cells(matrix, job.ValidationRows), rows.CellCount);
+        for (int i = 0; i < rows.RowCount; i++)
+        {
+            Assert.Equal(matrix.RowColumns(job.ValidationRows[i]).ToArray(), rows.RowColumns(i).ToArray());
+            Assert.Equal(matrix.RowValues(job.ValidationRows[i]).ToArray(), rows.RowValues(i).ToArray());
         }
     }
 

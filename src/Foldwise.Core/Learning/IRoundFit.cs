@@ -16,6 +16,13 @@ public interface IRoundFit : IDisposable
     double[] HeldOutPredictions();
 
     /// <summary>
+    /// The same as <see cref="HeldOutPredictions()"/>, written into <paramref name="into"/> (one entry per held-out row):
+    /// a trial asks after every round, and on a table of millions of rows a new vector each time is garbage the size
+    /// of the held-out rows, per fold and round.
+    /// </summary>
+    void HeldOutPredictions(Span<double> into) => HeldOutPredictions().CopyTo(into);
+
+    /// <summary>
     /// Predictions from the first <paramref name="rounds"/> rounds (1..<see cref="Rounds"/>; 0 only when no round was
     /// trained): the held-out rows, and the test table when <paramref name="withTest"/> (else an empty test vector).
     /// </summary>

@@ -109,6 +109,7 @@ public sealed class TrialExecutor
 
             // All folds advance together, so the pooled held-out score exists after every round.
             var oof = new double[data.Train.RowCount];
+            var heldOut = jobs.Select(j => new double[j.ValidationRows.Length]).ToList();
             double best = double.PositiveInfinity;
             int bestRound = 0, round = 0;
             while (round < budget)
@@ -129,7 +130,8 @@ public sealed class TrialExecutor
                 advanced?.Invoke(fits.Count, round);
                 for (int f = 0; f < fits.Count; f++)
                 {
-                    Place(fits[f].HeldOutPredictions(), jobs[f], oof);
+                    fits[f].HeldOutPredictions(heldOut[f]);
+                    Place(heldOut[f], jobs[f], oof);
                 }
 
                 double score = scored.Score(oof);

@@ -48,7 +48,7 @@ internal static class FoldDatasets
 
         try
         {
-            var (train, validation) = entry.Binned(() => Bin(job, inputs, parameters), Estimate(inputs));
+            var (train, validation) = entry.Binned(() => Bin(job, inputs, parameters), () => MakeRoom(entry, Estimate(inputs)));
             return (train.Borrow(), validation.Borrow());
         }
         catch
@@ -67,13 +67,41 @@ internal static class FoldDatasets
             {
                 entry.Users--;
                 entry.DisposeIfUnused();
-                while (Recent.Count > 1 && Recent.Sum(e => e.Bytes) > CapacityBytes && Recent.Last!.Value is var oldest)
-                {
-                    Recent.RemoveLast();
-                    oldest.Evicted = true;
-                    oldest.DisposeIfUnused();
-                }
+                Evict(keep: 1, room: 0);
             }
+        }
+    }
+
+    /// <summary>
+    /// Drops the least recently used other folds before <paramref name="entry"/> is binned, so the kept folds and the new
+    /// one stay within <see cref="CapacityBytes"/> together: a fold dropped only after the new one was binned would still
+    /// hold its memory while the new rows are binned (a dropped fold a trial still trains on lives until it ends).
+    /// </summary>
+    /// <returns><paramref name="bytes"/>, the new fold's estimate.</returns>
+    private static long MakeRoom(Entry entry, long bytes)
+    {
+        lock (Sync)
+        {
+            // An entry another borrower dropped meanwhile stays out: it is freed when its last borrower is done.
+            bool kept = Recent.Remove(entry);
+            Evict(keep: 0, room: bytes);
+            if (kept)
+            {
+                Recent.AddFirst(entry);
+            }
+
+            return bytes;
+        }
+    }
+
+    /// <summary>Drops the least recently used folds while the kept ones and <paramref name="room"/> exceed the capacity, keeping at least <paramref name="keep"/>.</summary>
+    private static void Evict(int keep, long room)
+    {
+        while (Recent.Count > keep && Recent.Sum(e => e.Bytes) + room > CapacityBytes && Recent.Last!.Value is var oldest)
+        {
+            Recent.RemoveLast();
+            oldest.Evicted = true;
+            oldest.DisposeIfUnused();
         }
     }
 
@@ -82,20 +110,30 @@ internal static class FoldDatasets
     {
         var folds = job.Data.Folds;
         bool ownInputs = job.Inputs is null || job.Inputs.PlanFold == job.Fold;
-        return ownInputs && job.Fold < folds.FoldCount && job.TrainRows.SequenceEqual(folds.TrainRows(job.Fold)) && job.ValidationRows.SequenceEqual(folds.ValidationRows(job.Fold));
+        return ownInputs && job.Fold < folds.FoldCount && job.TrainRows.AsSpan().SequenceEqual(folds.TrainRows(job.Fold).AsSpan()) && job.ValidationRows.AsSpan().SequenceEqual(folds.ValidationRows(job.Fold).AsSpan());
     }
 
     /// <summary>What a fold's Datasets take, generously: 8 bytes a stored cell and 2 kB a column (its bin bounds).</summary>
-    public static long Estimate(NativeFoldRows inputs) =>
-        (8L * (inputs.Train.Values.Length + inputs.Validation.Values.Length)) + (2048L * inputs.Train.ColumnCount);
+    public static long Estimate(NativeFoldRows inputs)
+    {
+        var (train, validation) = inputs.Cells();
+        return (8L * (train + validation)) + (2048L * inputs.Job.Features.ColumnCount);
+    }
 
+    /// <summary>Bins the fold's training rows, then its held-out rows like them; each copy of the rows is freed as soon as LightGBM has binned it.</summary>
     private static (LightGbmDataset Train, LightGbmDataset Validation) Bin(FoldJob job, NativeFoldRows inputs, string parameters)
     {
         Interlocked.Increment(ref built);
-        var train = LightGbmDataset.FromRows(inputs.Train, inputs.Labels, parameters, reference: null, $"the training rows of fold {job.Fold}");
+        LightGbmDataset train;
+        using (var rows = inputs.CopyTrain())
+        {
+            train = LightGbmDataset.FromRows(rows, inputs.Labels(), parameters, reference: null, $"the training rows of fold {job.Fold}");
+        }
+
         try
         {
-            return (train, LightGbmDataset.FromRows(inputs.Validation, labels: null, parameters, train, $"the held-out rows of fold {job.Fold}"));
+            using var rows = inputs.CopyValidation();
+            return (train, LightGbmDataset.FromRows(rows, labels: null, parameters, train, $"the held-out rows of fold {job.Fold}"));
         }
         catch
         {
@@ -129,12 +167,14 @@ internal static class FoldDatasets
         /// <summary>The Datasets' <see cref="Estimate"/> once binned, else 0.</summary>
         public long Bytes { get; private set; }
 
-        public (LightGbmDataset Train, LightGbmDataset Validation) Binned(Func<(LightGbmDataset, LightGbmDataset)> bin, long bytes)
+        /// <param name="beforeBinning">Told once, before this entry's rows are binned, with the lock of the kept folds not held.</param>
+        public (LightGbmDataset Train, LightGbmDataset Validation) Binned(Func<(LightGbmDataset, LightGbmDataset)> bin, Func<long> beforeBinning)
         {
             lock (building)
             {
                 if (binned is null)
                 {
+                    long bytes = beforeBinning();
                     binned = bin();
                     Bytes = bytes;
                 }

@@ -82,13 +82,28 @@ internal sealed class LightGbmBooster : IDisposable
         NativeCall.Check(LightGbmNative.BoosterResetParameter(handle, changed), $"the changed parameters '{changed}'");
 
     /// <summary>The current raw scores of the validation rows added <paramref name="index"/>-th (from 0).</summary>
-    public unsafe double[] ValidationScores(int index)
+    public double[] ValidationScores(int index)
     {
         var scores = new double[validations[index].RowCount];
-        fixed (double* into = scores)
+        ValidationScores(index, scores);
+        return scores;
+    }
+
+    /// <summary>The same, written into <paramref name="into"/>, which holds one entry per validation row.</summary>
+    public unsafe void ValidationScores(int index, Span<double> into)
+    {
+        if (into.Length != validations[index].RowCount)
         {
-            NativeCall.Check(LightGbmNative.BoosterGetPredict(handle, index + 1, out long length, into), "the validation scores");
-            return length == scores.Length ? scores : throw new LightGbmException($"LightGBM gave {length} validation scores for {scores.Length} rows");
+            throw new ArgumentException($"{into.Length} places for {validations[index].RowCount} validation rows", nameof(into));
+        }
+
+        fixed (double* scores = into)
+        {
+            NativeCall.Check(LightGbmNative.BoosterGetPredict(handle, index + 1, out long length, scores), "the validation scores");
+            if (length != into.Length)
+            {
+                throw new LightGbmException($"LightGBM gave {length} validation scores for {into.Length} rows");
+            }
         }
     }
 
@@ -101,17 +116,15 @@ internal sealed class LightGbmBooster : IDisposable
             return scores;
         }
 
-        fixed (int* starts = rows.RowStarts)
-        fixed (int* columns = rows.Columns)
-        fixed (float* values = rows.Values)
         fixed (double* into = scores)
         {
             // The thread count goes with every call: LightGBM keeps the last one given in a process-wide setting.
             NativeCall.Check(
                 LightGbmNative.BoosterPredictForCsr(
-                    handle, starts, LightGbmNative.Int32, columns, values, LightGbmNative.Float32, rows.RowStarts.Length, rows.Values.Length, rows.ColumnCount,
+                    handle, rows.Starts, LightGbmNative.Int32, rows.Columns, rows.Values, LightGbmNative.Float32, rows.StartCount, rows.CellCount, rows.ColumnCount,
                     LightGbmNative.PredictRawScore, 0, rounds, $"num_threads={threads}", out long length, into),
                 $"to predict {what} ({rows.RowCount} rows x {rows.ColumnCount} columns)");
+            GC.KeepAlive(rows);
             return length == scores.Length ? scores : throw new LightGbmException($"LightGBM gave {length} predictions for {scores.Length} rows of {what}");
         }
     }

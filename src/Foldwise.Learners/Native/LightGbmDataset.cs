@@ -29,17 +29,12 @@ internal sealed class LightGbmDataset : IDisposable
         {
             reference?.Handle.DangerousAddRef(ref added);
             DatasetHandle handle;
-            fixed (int* starts = rows.RowStarts)
-            fixed (int* columns = rows.Columns)
-            fixed (float* values = rows.Values)
-            {
-                NativeCall.Check(
-                    LightGbmNative.DatasetCreateFromCsr(
-                        starts, LightGbmNative.Int32, columns, values, LightGbmNative.Float32, rows.RowStarts.Length, rows.Values.Length, rows.ColumnCount,
-                        parameters, reference?.Handle.DangerousGetHandle() ?? 0, out handle),
-                    $"{what} ({rows.RowCount} rows x {rows.ColumnCount} columns) with parameters '{parameters}'");
-            }
-
+            NativeCall.Check(
+                LightGbmNative.DatasetCreateFromCsr(
+                    rows.Starts, LightGbmNative.Int32, rows.Columns, rows.Values, LightGbmNative.Float32, rows.StartCount, rows.CellCount, rows.ColumnCount,
+                    parameters, reference?.Handle.DangerousGetHandle() ?? 0, out handle),
+                $"{what} ({rows.RowCount} rows x {rows.ColumnCount} columns) with parameters '{parameters}'");
+            GC.KeepAlive(rows);
             var dataset = new LightGbmDataset(handle, rows.RowCount);
             if (labels is not null)
             {

@@ -79,7 +79,7 @@ public sealed class LightGbmFoldModel : IRoundFit
         {
             booster.AddValidation(validation);
             double[]? actual = scoreEachRound ? [.. job.ValidationRows.Select(r => job.Data.Target[r])] : null;
-            model = new LightGbmFoldModel(job, inputs with { Train = Released, Labels = [] }, booster, actual);
+            model = new LightGbmFoldModel(job, inputs, booster, actual);
             return model;
         }
         catch
@@ -107,6 +107,13 @@ public sealed class LightGbmFoldModel : IRoundFit
 
     /// <summary>The held-out rows' predictions after the rounds trained so far, on the fitting scale.</summary>
     public double[] HeldOutPredictions() => Shift(booster.ValidationScores(0));
+
+    /// <summary>The same, written into <paramref name="into"/>: no vector is made per round.</summary>
+    public void HeldOutPredictions(Span<double> into)
+    {
+        booster.ValidationScores(0, into);
+        Shift(into);
+    }
 
     /// <summary>Trains up to <paramref name="rounds"/> more rounds on the same booster (bagging and all), as if the first fit had been longer.</summary>
     public void Continue(int rounds, CancellationToken cancellation)
@@ -157,9 +164,19 @@ public sealed class LightGbmFoldModel : IRoundFit
 
         // LightGBM reads 0 as "every round": the same as the model's own when it has none.
         using var gate = ThreadCountGate.Enter(job.Threads);
-        return new FoldPrediction(
-            Shift(booster.Predict(inputs.Validation, rounds, job.Threads, $"the held-out rows of fold {job.Fold}")),
-            withTest ? Shift(booster.Predict(inputs.Test, rounds, job.Threads, "the test table")) : []);
+        double[] heldOut;
+        using (var rows = inputs.CopyValidation())
+        {
+            heldOut = Shift(booster.Predict(rows, rounds, job.Threads, $"the held-out rows of fold {job.Fold}"));
+        }
+
+        if (!withTest)
+        {
+            return new FoldPrediction(heldOut, []);
+        }
+
+        using var test = inputs.PinTest();
+        return new FoldPrediction(heldOut, Shift(booster.Predict(test, rounds, job.Threads, "the test table")));
     }
 
     /// <summary>The model's text of its first <paramref name="rounds"/> rounds (all by default), for <see cref="PredictKept"/>.</summary>
@@ -182,7 +199,8 @@ public sealed class LightGbmFoldModel : IRoundFit
         ArgumentNullException.ThrowIfNull(job);
         using var gate = ThreadCountGate.Enter(job.Threads);
         using var booster = LightGbmBooster.Load(model);
-        var scores = booster.Predict(CsrRows.All(job.Features.Test), 0, job.Threads, "the new rows");
+        using var rows = CsrRows.All(job.Features.Test);
+        var scores = booster.Predict(rows, 0, job.Threads, "the new rows");
         double offset = FoldFitter.TrainingMean(job);
         for (int i = 0; i < scores.Length; i++)
         {
@@ -194,16 +212,17 @@ public sealed class LightGbmFoldModel : IRoundFit
 
     public void Dispose() => booster.Dispose();
 
-    /// <summary>What a model keeps of its training rows once they are binned: nothing (LightGBM holds its own copy).</summary>
-    private static CsrRows Released { get; } = new([0], [], [], 0);
-
     private double[] Shift(double[] raw)
+    {
+        Shift(raw.AsSpan());
+        return raw;
+    }
+
+    private void Shift(Span<double> raw)
     {
         for (int i = 0; i < raw.Length; i++)
         {
             raw[i] += inputs.Offset;
         }
-
-        return raw;
     }
 }
