@@ -13,26 +13,25 @@ internal static class Driver
         string seed = Value(args, "--seed", "7");
         string families = Value(args, "--families", "default");
         string outRoot = Path.GetFullPath(Value(args, "--out", Path.Combine("bench", "results", "whole-search")));
-        foreach (string run in runs)
-        {
-            _ = Setting.Named(run);
-        }
+        string csv = Value(args, "--csv", "");
+        _ = CsvTable.Parse(csv);
+        var choices = runs.Select(r => RunChoice.Parse(r, families)).ToList();
 
-        Console.WriteLine($"whole-search bench: full-size demo, {hours} h per search, seed {seed}, families {families}, {Environment.ProcessorCount} cores, runs {string.Join(" ", runs)}; {DateTimeOffset.UtcNow:yyyy-MM-dd HH:mm} UTC");
+        Console.WriteLine($"whole-search bench: {hours} h per search, seed {seed}, families {families}, csv {(csv.Length > 0 ? csv : "none")}, {Environment.ProcessorCount} cores, runs {string.Join(" ", choices.Select(c => c.Name))}; {DateTimeOffset.UtcNow:yyyy-MM-dd HH:mm} UTC");
         var results = new List<string>();
         for (int i = 0; i < runs.Length; i++)
         {
-            string outDir = Path.Combine(outRoot, $"{DateTimeOffset.UtcNow:yyyyMMddHHmmss}-{i + 1}-{runs[i]}");
-            Console.WriteLine($"run {i + 1} ({runs[i]}), load before: {Load()}");
-            var (code, result) = RunChild(runs[i], hours, seed, families, outDir);
-            results.Add($"run {i + 1}: {result ?? $"{runs[i]} failed, exit {code}"}; load after {Load()}");
+            string outDir = Path.Combine(outRoot, $"{DateTimeOffset.UtcNow:yyyyMMddHHmmss}-{i + 1}-{choices[i].Name.Replace('/', '-')}");
+            Console.WriteLine($"run {i + 1} ({choices[i].Name}), load before: {Load()}");
+            var (code, result) = RunChild(choices[i], hours, seed, csv, outDir);
+            results.Add($"run {i + 1}: {result ?? $"{choices[i].Name} failed, exit {code}"}; load after {Load()}");
         }
 
         results.ForEach(Console.WriteLine);
         return 0;
     }
 
-    private static (int Code, string? Result) RunChild(string setting, string hours, string seed, string families, string outDir)
+    private static (int Code, string? Result) RunChild(RunChoice run, string hours, string seed, string csv, string outDir)
     {
         var info = new ProcessStartInfo(Environment.ProcessPath!) { RedirectStandardOutput = true, UseShellExecute = false };
         if (Path.GetFileNameWithoutExtension(Environment.ProcessPath) == "dotnet")
@@ -40,13 +39,13 @@ internal static class Driver
             info.ArgumentList.Add(typeof(Driver).Assembly.Location);
         }
 
-        foreach (string arg in new[] { "--child", setting, hours, seed, families, outDir })
+        foreach (string arg in new[] { "--child", run.Name, hours, seed, csv, outDir })
         {
             info.ArgumentList.Add(arg);
         }
 
         info.Environment.Remove("OMP_WAIT_POLICY");
-        if (Setting.Named(setting).WaitPolicy is { } policy)
+        if (run.Setting.WaitPolicy is { } policy)
         {
             info.Environment["OMP_WAIT_POLICY"] = policy;
         }

@@ -9,7 +9,7 @@ namespace Foldwise.Bench.WholeSearch;
 /// <summary>What one search did: phases' times, trials done by family and rung, the best single trial, the blend's estimates.</summary>
 internal static class Summary
 {
-    public static void Print(Setting setting, SearchResult result, EventTally tally, SearchDefinition definition)
+    public static void Print(string name, SearchResult result, EventTally tally, SearchDefinition definition)
     {
         var started = tally.Started ?? TimeSpan.Zero;
         var stopped = tally.Stopped ?? tally.Elapsed;
@@ -27,7 +27,7 @@ internal static class Summary
             var seconds = family.Where(t => t.Started is not null && t.Finished is not null).Select(t => (t.Finished!.Value - t.Started!.Value).TotalSeconds).ToList();
             Console.WriteLine(string.Create(
                 CultureInfo.InvariantCulture,
-                $"    {setting.Name} {family.Key,-9} {family.Count(),4} done: {string.Join(", ", rungs)}; best {family.Min(t => t.Score):F5}; {seconds.Sum():F0} s in trials, {seconds.Average():F1} s each"));
+                $"    {name} {family.Key,-9} {family.Count(),4} done: {string.Join(", ", rungs)}; best {family.Min(t => t.Score):F5}; {seconds.Sum():F0} s in trials, {seconds.Average():F1} s each"));
         }
 
         if (tally.Blend is { } blend)
@@ -45,6 +45,6 @@ internal static class Summary
         Console.WriteLine($"  {tally.Keeping}");
         Console.WriteLine(string.Create(
             CultureInfo.InvariantCulture,
-            $"RESULT {setting.Name} done={done.Count} best={tally.Blend?.BestSingleScore:F5} nested={tally.Blend?.NestedScore:F5} trials_s={(stopped - started).TotalSeconds:F0}"));
+            $"RESULT {name} done={done.Count} best={tally.Blend?.BestSingleScore:F5} nested={tally.Blend?.NestedScore:F5} trials_s={(stopped - started).TotalSeconds:F0}"));
     }
 }
