@@ -67,7 +67,7 @@ internal static class Comparison
             double median = Median(list);
             Console.WriteLine(string.Create(c,
                 $"at {share,6:P1} of random's {options.RandomTrials}-trial compute: scheduled search ahead on {list.Count(g => g > 0)} of {list.Count} seeds, " +
-                $"median lead {median:+0.00000;-0.00000} (seeds: {string.Join(", ", list.Select(g => g.ToString("+0.0000;-0.0000", c)))})"));
+                $"median lead {median:+0.00000;-0.00000;0.00000} (seeds: {string.Join(", ", list.Select(g => g.ToString("+0.0000;-0.0000;0.0000", c)))})"));
         }
     }
 

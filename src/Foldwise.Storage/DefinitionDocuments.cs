@@ -60,6 +60,7 @@ internal static class DefinitionDocuments
             ["eta"] = d.Schedule.Eta,
             ["rateScaling"] = d.Schedule.RateScaling,
             ["brackets"] = d.Schedule.Brackets,
+            ["screenFolds"] = d.Schedule.ScreenFolds,
         },
         ["trials"] = Nullable(d.Budget.Trials),
         ["hours"] = Nullable(d.Budget.Hours),
@@ -90,7 +91,10 @@ internal static class DefinitionDocuments
                 Int(schedule, "fullBudget", Owner),
                 Int(schedule, "eta", Owner),
                 Double(schedule, "rateScaling", Owner),
-                Int(schedule, "brackets", Owner)),
+                Int(schedule, "brackets", Owner),
+
+                // Absent from stores written before schedules could screen on folds: rungs in the family's budget.
+                OptionalInt(schedule, "screenFolds") ?? 0),
             Budget = new SearchBudget(OptionalInt(doc, "trials"), OptionalDouble(doc, "hours")),
             Blend = new BlendOptions(StoreWords.BlendModes.Value(String(doc, "blendMode", Owner)), Int(doc, "blendPool", Owner)),
         };

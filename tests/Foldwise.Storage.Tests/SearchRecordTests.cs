@@ -84,6 +84,21 @@ public sealed class SearchRecordTests : IDisposable
     }
 
     [Fact]
+    public void A_schedule_that_screens_on_folds_keeps_its_screen_and_one_stored_before_screens_has_none()
+    {
+        // Given an ASHA schedule screening on 1 fold, stored, and the same document without the field (as older stores)
+        var screening = EveryOptionSet with { Schedule = new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, 20, 180, 5, 0.5, 1, ScreenFolds: 1) };
+        var document = DefinitionDocuments.ToDocument(screening);
+        var read = DefinitionDocuments.FromDocument(document);
+        document["schedule"].AsDocument.Remove("screenFolds");
+        var older = DefinitionDocuments.FromDocument(document);
+
+        // Then the screen comes back, and the older store's schedule counts rounds
+        Assert.Equal(screening.Schedule, read.Schedule);
+        Assert.Equal(0, older.Schedule.ScreenFolds);
+    }
+
+    [Fact]
     public void A_family_stored_before_its_few_level_form_was_kept_reads_indicator_columns()
     {
         // Given a stored definition whose lightgbm family has no few-level form (as every store written before LightGBM's own category splits)

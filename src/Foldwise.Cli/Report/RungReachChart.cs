@@ -57,7 +57,7 @@ public static class RungReachChart
         if (search.Definition.Schedule.ByFolds)
         {
             int folds = at.Select(t => t.AllFolds ? search.Definition.Folds : t.Folds).DefaultIfEmpty(search.Definition.Folds).Max();
-            return string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{folds} folds");
+            return string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{folds} fold{(folds == 1 ? "" : "s")}");
         }
 
         var budgets = at.Select(t => t.Budget).Distinct().Order().ToList();

@@ -10,12 +10,16 @@ internal sealed class ScoredRows
     private readonly int[]? rows;
     private readonly double[]? target;
 
+    /// <summary>The scored rows' predictions, refilled at every round of the trial.</summary>
+    private readonly double[]? predicted;
+
     private ScoredRows(TrialData data, int foldCount, int[]? rows)
     {
         this.data = data;
         FoldCount = foldCount;
         this.rows = rows;
         target = rows is null ? null : [.. rows.Select(r => data.Target[r])];
+        predicted = rows is null ? null : new double[rows.Length];
     }
 
     /// <summary>Folds that train: the plan's first ones.</summary>
@@ -34,12 +38,11 @@ internal sealed class ScoredRows
             return data.Metric.Score(data.Target, outOfFold);
         }
 
-        var predicted = new double[rows.Length];
         for (int i = 0; i < rows.Length; i++)
         {
-            predicted[i] = outOfFold[rows[i]];
+            predicted![i] = outOfFold[rows[i]];
         }
 
-        return data.Metric.Score(target!, predicted);
+        return data.Metric.Score(target!, predicted!);
     }
 }

@@ -235,6 +235,33 @@ public sealed class SearchCoordinatorTests
     }
 
     [Fact]
+    public void A_trial_screened_on_some_folds_never_predicts_the_test_table_nor_counts_as_the_best_or_as_a_full_budget_trial()
+    {
+        // Given a search whose trials all run the full 400 rounds, the first on 1 fold only
+        var coordinator = Coordinator(trials: 10);
+        schedule.Budget = Definition().Schedule.FullBudget;
+        schedule.Folds = 1;
+        var screened = coordinator.Lease("w1", "0");
+
+        // When it finishes with a score better than any whole trial's, and then trials on 1 fold and on every fold are leased
+        Assert.True(coordinator.Complete(screened.Trial!.Id, screened.Trial.Attempt, 0.1, [0.1]));
+        var screenedAgain = coordinator.Lease("w1", "0");
+        schedule.Folds = 0;
+        var whole = coordinator.Lease("w1", "1");
+
+        // Then the screened trials skip the test table and the trial on every fold predicts it
+        Assert.Equal(1, screened.Trial.Folds);
+        Assert.False(screened.PredictsTest);
+        Assert.False(screenedAgain.PredictsTest);
+        Assert.True(whole.PredictsTest);
+
+        // And the screened score is no best; the whole trial's is
+        Assert.Null(coordinator.Progress().Best);
+        Assert.True(coordinator.Complete(whole.Trial!.Id, whole.Trial.Attempt, 0.4, [0.4, 0.4, 0.4, 0.4, 0.4]));
+        Assert.Equal(0.4, coordinator.Progress().Best);
+    }
+
+    [Fact]
     public void A_trial_below_the_full_budget_predicts_the_test_table_only_until_a_full_budget_trial_is_done()
     {
         // Given a search whose full budget is 400 rounds

@@ -21,6 +21,9 @@ public sealed class CountingSchedule(string family = FamilyNames.LightGbm, int b
     /// <summary>The family of the trials proposed from now on.</summary>
     public string Family { get; set; } = family;
 
+    /// <summary>The folds each next plan trains (0: all), as a schedule that screens on folds would set.</summary>
+    public int Folds { get; set; }
+
     public void Observe(TrialRecord trial) => Observed.Add(trial);
 
     public TrialPlan? NextPlan()
@@ -31,6 +34,6 @@ public sealed class CountingSchedule(string family = FamilyNames.LightGbm, int b
         }
 
         proposed++;
-        return new TrialPlan(Family, ParameterSet.Of([new("x", proposed)]), Budget, 0, null, "counting");
+        return new TrialPlan(Family, ParameterSet.Of([new("x", proposed)]), Budget, 0, null, "counting", Folds: Folds);
     }
 }
