@@ -264,19 +264,7 @@ public sealed class SearchCoordinator
             return null;
         }
 
-        var created = new TrialRecord
-        {
-            Id = nextId++,
-            Family = plan.Family,
-            Parameters = plan.Parameters,
-            Budget = plan.Budget,
-            Rung = plan.Rung,
-            ParentId = plan.ParentId,
-            Proposer = plan.Proposer,
-            Bracket = plan.Bracket,
-            Folds = plan.Folds,
-            Created = now,
-        };
+        var created = plan.ToTrial(nextId++, now);
         CommitLocked(created);
         return created.Id;
     }
@@ -394,7 +382,7 @@ public sealed class SearchCoordinator
     private LeaseGrant Granted(TrialRecord trial)
     {
         var fit = TrialFit.For(trial, trials, definition);
-        return new(LeaseKind.Granted, trial, fit.Seed, fit.Run, PredictsTest: trial.AllFolds && TestPredictions.Wanted(trial.Budget, definition.BudgetOf(trial.Family).FullBudget, familiesAtFullBudget.Contains(trial.Family)));
+        return new(LeaseKind.Granted, trial, fit.Seed, fit.Run, PredictsTest: TestPredictions.Wanted(trial.Budget, definition.BudgetOf(trial.Family).FullBudget, familiesAtFullBudget.Contains(trial.Family), trial.AllFolds));
     }
 
     private double SpentSecondsLocked(DateTimeOffset now) => spentBefore + (now - sessionStart).TotalSeconds;

@@ -10,4 +10,20 @@ namespace Foldwise.Core.Search;
 /// <param name="Bracket">The Hyperband bracket, or 0 outside Hyperband.</param>
 /// <param name="Proposer">Who chose the parameters: e.g. <c>random</c>, <c>tpe</c>, <c>promotion</c>.</param>
 /// <param name="Folds">The plan's first folds the trial trains when a schedule screens on folds (<see cref="TrialRecord.Folds"/>); 0: all.</param>
-public sealed record TrialPlan(string Family, ParameterSet Parameters, int Budget, int Rung, int? ParentId, string Proposer, int Bracket = 0, int Folds = 0);
+public sealed record TrialPlan(string Family, ParameterSet Parameters, int Budget, int Rung, int? ParentId, string Proposer, int Bracket = 0, int Folds = 0)
+{
+    /// <summary>The queued trial that carries out this plan.</summary>
+    public TrialRecord ToTrial(int id, DateTimeOffset created) => new()
+    {
+        Id = id,
+        Family = Family,
+        Parameters = Parameters,
+        Budget = Budget,
+        Rung = Rung,
+        ParentId = ParentId,
+        Proposer = Proposer,
+        Bracket = Bracket,
+        Folds = Folds,
+        Created = created,
+    };
+}

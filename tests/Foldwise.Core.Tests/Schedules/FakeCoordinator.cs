@@ -31,19 +31,7 @@ internal sealed class FakeCoordinator(ISchedule schedule)
             return null;
         }
 
-        var trial = new TrialRecord
-        {
-            Id = _trials.Count + 1,
-            Family = plan.Family,
-            Parameters = plan.Parameters,
-            Budget = plan.Budget,
-            Rung = plan.Rung,
-            ParentId = plan.ParentId,
-            Proposer = plan.Proposer,
-            Bracket = plan.Bracket,
-            Folds = plan.Folds,
-            Created = Epoch.AddMinutes(_trials.Count),
-        };
+        var trial = plan.ToTrial(_trials.Count + 1, Epoch.AddMinutes(_trials.Count));
         Save(trial);
         Save(trial with { State = TrialState.Running, Attempt = 1 });
         return _trials[trial.Id];
