@@ -28,7 +28,9 @@ internal static class SearchRun
             Budget = new SearchBudget(trials, null),
         };
         var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition, new TpeOptions(Joint: options.JointTpe, Ladder: options.Ladder)), new NoJournal(), TimeProvider.System);
-        var executor = new TrialExecutor(LearnerCatalog.BuiltIn.Get(options.Family), options.Stopping);
+        // As a worker does: a promotion of a candidate screened on some folds continues the screen's fold models.
+        using var screens = new ScreenedFits();
+        var executor = new TrialExecutor(LearnerCatalog.BuiltIn.Get(options.Family), options.Stopping, screens);
         var rows = new List<TraceRow>();
         double compute = 0, best = double.PositiveInfinity;
         while (true)
@@ -41,12 +43,14 @@ internal static class SearchRun
 
             var trial = grant.Trial!;
             var clock = Stopwatch.StartNew();
-            var outcome = executor.Run(data, grant.Run!, trial.Budget, grant.Seed, options.Threads, CancellationToken.None, predictsTest: grant.PredictsTest, folds: trial.AllFolds ? null : trial.Folds);
+            var outcome = executor.Run(data, grant.Run!, trial.Budget, grant.Seed, options.Threads, CancellationToken.None, predictsTest: grant.PredictsTest, folds: trial.AllFolds ? null : trial.Folds, lineage: new TrialLineage(trial.Id, trial.ParentId));
             coordinator.Complete(trial.Id, trial.Attempt, outcome.Score, outcome.FoldScores, outcome.BestRound);
 
             // Compute is what was trained: rounds × rows, fewer rounds when the trial stopped early, a share of the
-            // folds when racing. A racing trial on some folds is scored on their rows only, so it sets no best.
-            compute += (double)outcome.RoundsTrained * data.Train.RowCount * (trial.AllFolds ? 1 : (double)trial.Folds / foldCount);
+            // folds when racing, less the fold-rounds a promotion took over from its screen. A racing trial on some
+            // folds is scored on their rows only, so it sets no best.
+            int foldsRun = trial.AllFolds ? foldCount : trial.Folds;
+            compute += (((double)outcome.RoundsTrained * foldsRun) - outcome.RoundsContinued) * data.Train.RowCount / foldCount;
             if (trial.AllFolds)
             {
                 best = Math.Min(best, outcome.Score);

@@ -19,7 +19,8 @@ public sealed record LeaseReply(
     [property: Id(8)] string? TraceParent = null,
     [property: Id(9)] string? Reason = null,
     [property: Id(10)] bool PredictsTest = true,
-    [property: Id(11)] int Folds = 0)
+    [property: Id(11)] int Folds = 0,
+    [property: Id(12)] int? ParentId = null)
 {
     public static LeaseReply Waiting { get; } = new(LeaseStatus.Wait, 0, 0, "", [], 0, 0, TimeSpan.Zero);
 

@@ -47,8 +47,11 @@ public sealed partial class SlotPump(
         }
 
         var runnerLog = loggers.CreateLogger<SlotRunner>();
+
+        // One keep for all slots: a promotion continues its screen's folds whichever slot of this worker it lands on.
+        using var screens = new ScreenedFits();
         await Task.WhenAll(Enumerable.Range(0, options.Slots).Select(i =>
-            new SlotRunner(i.ToString(), offered, grains, data, learners, options, statistics, time, metrics, events, runnerLog).RunAsync(stoppingToken)));
+            new SlotRunner(i.ToString(), offered, grains, data, learners, screens, options, statistics, time, metrics, events, runnerLog).RunAsync(stoppingToken)));
     }
 
     private string[] SelfTest()

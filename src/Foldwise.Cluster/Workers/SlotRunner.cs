@@ -19,6 +19,7 @@ public sealed partial class SlotRunner(
     IGrainFactory grains,
     TrialDataCache data,
     ILearnerCatalog learners,
+    ScreenedFits screens,
     WorkerOptions options,
     SlotStatistics statistics,
     TimeProvider time,
@@ -120,7 +121,7 @@ public sealed partial class SlotRunner(
         try
         {
             var trialData = await data.GetAsync(searchId, abandon.Token);
-            var executor = new TrialExecutor(learners.Get(lease.Family));
+            var executor = new TrialExecutor(learners.Get(lease.Family), RoundStopping.Default, screens);
             var parameters = ParameterSet.Of(lease.Parameters);
             int foldCount = lease.Folds == 0 ? trialData.Folds.FoldCount : lease.Folds;
             using var folds = new FoldSpans(span?.Context ?? default, lease.TrialId, foldCount);
@@ -146,7 +147,8 @@ public sealed partial class SlotRunner(
                             events.Report(new SlotTrialAdvanced(options.Name, slot, lease.TrialId, ready, foldCount, round, lease.Budget, clock.Elapsed));
                         }
                     },
-                    lease.Folds == 0 ? null : lease.Folds),
+                    lease.Folds == 0 ? null : lease.Folds,
+                    new TrialLineage(lease.TrialId, lease.ParentId)),
                 abandon.Token,
                 TaskCreationOptions.LongRunning,
                 TaskScheduler.Default);

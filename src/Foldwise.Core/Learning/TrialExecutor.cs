@@ -8,12 +8,15 @@ namespace Foldwise.Core.Learning;
 /// Runs one trial: encodes each fold's inputs from its training rows, fits every fold of the plan, pools the out-of-fold predictions and
 /// averages the fold models' test predictions (DESIGN: test prediction = mean over fold models). A family that trains
 /// round by round (<see cref="IRoundLearner"/>) trains all folds a round at a time and keeps the best round count of
-/// their pooled held-out score (<see cref="RoundStopping"/>); the others fit each fold whole.
+/// their pooled held-out score (<see cref="RoundStopping"/>); the others fit each fold whole. Given a worker's
+/// <see cref="ScreenedFits"/>, a trial screened on some folds leaves its fold models there, and its promotion to every
+/// fold continues them (<see cref="TrialOutcome.RoundsContinued"/>) with the same result as training them again.
 /// </summary>
 public sealed class TrialExecutor
 {
     private readonly IFoldLearner learner;
     private readonly RoundStopping? stopping;
+    private readonly ScreenedFits? screens;
 
     /// <summary>Stops round-by-round families by <see cref="RoundStopping.Default"/>.</summary>
     public TrialExecutor(IFoldLearner learner)
@@ -23,10 +26,17 @@ public sealed class TrialExecutor
 
     /// <param name="stopping">Null: every family trains its whole budget and keeps it.</param>
     public TrialExecutor(IFoldLearner learner, RoundStopping? stopping)
+        : this(learner, stopping, screens: null)
+    {
+    }
+
+    /// <param name="screens">Where screened trials' fold models are kept for their promotions (a worker's, shared by its slots); null keeps none.</param>
+    public TrialExecutor(IFoldLearner learner, RoundStopping? stopping, ScreenedFits? screens)
     {
         ArgumentNullException.ThrowIfNull(learner);
         this.learner = learner;
         this.stopping = stopping;
+        this.screens = screens;
     }
 
     /// <param name="foldDone">Told each fold (0-based) as its predictions are pooled.</param>
@@ -40,6 +50,7 @@ public sealed class TrialExecutor
     /// covers their held-out rows alone, so trials screened on the same folds are compared on the same rows (racing
     /// over folds); the out-of-fold vector is zero on the other folds' rows.
     /// </param>
+    /// <param name="lineage">The trial and its parent, for the <see cref="ScreenedFits"/> given at construction; null keeps and continues nothing.</param>
     public TrialOutcome Run(
         TrialData data,
         ParameterSet parameters,
@@ -50,7 +61,8 @@ public sealed class TrialExecutor
         Action<int>? foldDone = null,
         bool predictsTest = true,
         Action<int, int>? advanced = null,
-        int? folds = null)
+        int? folds = null,
+        TrialLineage? lineage = null)
     {
         var plan = data.Folds;
         if (plan.RowCount != data.Train.RowCount)
@@ -65,7 +77,7 @@ public sealed class TrialExecutor
 
         var scored = ScoredRows.Of(data, folds ?? plan.FoldCount);
         return learner is IRoundLearner rounds && stopping is not null
-            ? RunByRounds(rounds, stopping, data, scored, parameters, budget, seed, threads, foldDone, advanced, predictsTest, cancellation)
+            ? RunByRounds(rounds, stopping, data, scored, parameters, budget, seed, threads, foldDone, advanced, predictsTest, ScreeningOf(data, parameters, budget, seed, threads, lineage), cancellation)
             : RunWhole(data, scored, parameters, budget, seed, threads, foldDone, predictsTest, cancellation);
     }
 
@@ -91,34 +103,54 @@ public sealed class TrialExecutor
         return pooled.Outcome(bestRound: null, budget);
     }
 
+    /// <summary>Whether this run keeps its folds for a promotion, or continues its parent's: null when neither can apply.</summary>
+    private Screening? ScreeningOf(TrialData data, ParameterSet parameters, int budget, int seed, int threads, TrialLineage? lineage) =>
+        screens is null || lineage is not { } line
+            ? null
+            : new Screening(screens, line, new ScreenedFits.FitKey(data, learner.Family, parameters, budget, seed, threads));
+
     private static TrialOutcome RunByRounds(
         IRoundLearner learner, RoundStopping stopping, TrialData data, ScoredRows scored, ParameterSet parameters, int budget, int seed, int threads,
-        Action<int>? foldDone, Action<int, int>? advanced, bool predictsTest, CancellationToken cancellation)
+        Action<int>? foldDone, Action<int, int>? advanced, bool predictsTest, Screening? screening, CancellationToken cancellation)
     {
-        var fits = new List<IRoundFit>(scored.FoldCount);
+        bool screen = scored.FoldCount < data.Folds.FoldCount;
+        var continued = !screen && screening?.Lineage.ParentId is int parent ? screening.Value.Screens.Take(parent, screening.Value.Key) : null;
+        var runs = new List<FoldRun>(scored.FoldCount);
+        bool kept = false;
         try
         {
-            var jobs = new List<FoldJob>(scored.FoldCount);
             for (int f = 0; f < scored.FoldCount; f++)
             {
                 cancellation.ThrowIfCancellationRequested();
-                jobs.Add(Job(learner.Family, data, f, parameters, budget, seed, threads, predictsTest));
-                fits.Add(learner.Start(jobs[f], cancellation));
+                if (continued is not null && f < continued.Count)
+                {
+                    runs.Add(FoldRun.Continuing(continued[f], predictsTest));
+                }
+                else
+                {
+                    var job = Job(learner.Family, data, f, parameters, budget, seed, threads, predictsTest);
+                    runs.Add(FoldRun.Starting(learner.Start(job, cancellation), job, record: screen && screening is not null));
+                }
+
                 advanced?.Invoke(f + 1, 0);
+            }
+
+            for (int f = runs.Count; continued is not null && f < continued.Count; f++)
+            {
+                continued[f].Fit.Dispose();
             }
 
             // All folds advance together, so the pooled held-out score exists after every round.
             var oof = new double[data.Train.RowCount];
-            var heldOut = jobs.Select(j => new double[j.ValidationRows.Length]).ToList();
             double best = double.PositiveInfinity;
             int bestRound = 0, round = 0;
             while (round < budget)
             {
                 cancellation.ThrowIfCancellationRequested();
                 bool grew = false;
-                foreach (var fit in fits)
+                foreach (var run in runs)
                 {
-                    grew |= fit.TrainRound();
+                    grew |= run.Advance(round + 1);
                 }
 
                 if (!grew)
@@ -127,11 +159,10 @@ public sealed class TrialExecutor
                 }
 
                 round++;
-                advanced?.Invoke(fits.Count, round);
-                for (int f = 0; f < fits.Count; f++)
+                advanced?.Invoke(runs.Count, round);
+                foreach (var run in runs)
                 {
-                    fits[f].HeldOutPredictions(heldOut[f]);
-                    Place(heldOut[f], jobs[f], oof);
+                    Place(run.HeldOut, run.Job, oof);
                 }
 
                 double score = scored.Score(oof);
@@ -147,20 +178,30 @@ public sealed class TrialExecutor
             }
 
             var pooled = new Pooled(data, scored, predictsTest);
-            for (int f = 0; f < fits.Count; f++)
+            for (int f = 0; f < runs.Count; f++)
             {
                 cancellation.ThrowIfCancellationRequested();
-                pooled.Add(learner.Family, jobs[f], fits[f].Predict(Math.Min(bestRound, fits[f].Rounds), predictsTest));
+                pooled.Add(learner.Family, runs[f].Job, runs[f].Fit.Predict(Math.Min(bestRound, runs[f].Fit.Rounds), predictsTest));
                 foldDone?.Invoke(f);
             }
 
-            return pooled.Outcome(bestRound, round);
+            var outcome = pooled.Outcome(bestRound, round) with { RoundsContinued = runs.Sum(r => r.Replayed) };
+            if (screen && screening is { } keep)
+            {
+                keep.Screens.Keep(keep.Lineage.TrialId, keep.Key, [.. runs.Select(r => r.Kept())]);
+                kept = true;
+            }
+
+            return outcome;
         }
         finally
         {
-            foreach (var fit in fits)
+            if (!kept)
             {
-                fit.Dispose();
+                foreach (var run in runs)
+                {
+                    run.Fit.Dispose();
+                }
             }
         }
     }
@@ -205,5 +246,68 @@ public sealed class TrialExecutor
 
         public TrialOutcome Outcome(int? bestRound, int roundsTrained) =>
             new(scored.Score(oof), foldScores.MoveToImmutable(), oof, test, bestRound, roundsTrained);
+    }
+
+    private readonly record struct Screening(ScreenedFits Screens, TrialLineage Lineage, ScreenedFits.FitKey Key);
+
+    /// <summary>
+    /// One fold of a trial trained round by round: a new model, or one a screen kept, whose rounds already trained are
+    /// replayed from its recorded held-out predictions before it trains further.
+    /// </summary>
+    private sealed class FoldRun
+    {
+        private readonly IReadOnlyList<double[]> earlier;
+        private readonly List<double[]>? recorded;
+
+        private FoldRun(IRoundFit fit, FoldJob job, IReadOnlyList<double[]> earlier, List<double[]>? recorded)
+        {
+            Fit = fit;
+            Job = job;
+            this.earlier = earlier;
+            this.recorded = recorded;
+            HeldOut = new double[job.ValidationRows.Length];
+            if (earlier.Count == 0)
+            {
+                // A model that cannot grow at round 1 predicts what it starts from, as every fold did before.
+                fit.HeldOutPredictions(HeldOut);
+            }
+        }
+
+        public IRoundFit Fit { get; }
+
+        public FoldJob Job { get; }
+
+        /// <summary>The held-out rows' predictions after the last round advanced to.</summary>
+        public double[] HeldOut { get; }
+
+        /// <summary>Rounds taken from the screen instead of trained.</summary>
+        public int Replayed { get; private set; }
+
+        /// <param name="record">Keep each round's held-out predictions, for a promotion that continues this fold.</param>
+        public static FoldRun Starting(IRoundFit fit, FoldJob job, bool record) => new(fit, job, [], record ? [] : null);
+
+        public static FoldRun Continuing(ScreenedFold kept, bool predictsTest) => new(kept.Fit, kept.Job with { PredictsTest = predictsTest }, kept.HeldOutByRound, recorded: null);
+
+        /// <summary>Brings the fold to <paramref name="round"/>; false when it could not grow (it stays as it was, as a new model would).</summary>
+        public bool Advance(int round)
+        {
+            if (round <= earlier.Count)
+            {
+                earlier[round - 1].CopyTo(HeldOut, 0);
+                Replayed++;
+                return true;
+            }
+
+            if (!Fit.TrainRound())
+            {
+                return false;
+            }
+
+            Fit.HeldOutPredictions(HeldOut);
+            recorded?.Add((double[])HeldOut.Clone());
+            return true;
+        }
+
+        public ScreenedFold Kept() => new(Fit, Job, recorded ?? throw new InvalidOperationException("this fold recorded no rounds"));
     }
 }

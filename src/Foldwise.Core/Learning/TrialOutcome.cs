@@ -9,4 +9,11 @@ namespace Foldwise.Core.Learning;
 /// </summary>
 /// <param name="BestRound">The round count kept when the trial trained round by round and stopped at its best (<see cref="RoundStopping"/>); null when it trained its whole budget.</param>
 /// <param name="RoundsTrained">Rounds the trial's folds trained (its budget unless it stopped early): what it cost.</param>
-public sealed record TrialOutcome(double Score, ImmutableArray<double> FoldScores, double[] OutOfFold, double[] Test, int? BestRound, int RoundsTrained);
+public sealed record TrialOutcome(double Score, ImmutableArray<double> FoldScores, double[] OutOfFold, double[] Test, int? BestRound, int RoundsTrained)
+{
+    /// <summary>
+    /// Fold-rounds (summed over folds) this trial took over from its screen's kept models instead of training them
+    /// (<see cref="ScreenedFits"/>): its cost is <see cref="RoundsTrained"/> on each fold less these.
+    /// </summary>
+    public int RoundsContinued { get; init; }
+}

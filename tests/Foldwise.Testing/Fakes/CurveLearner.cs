@@ -5,10 +5,16 @@ namespace Foldwise.Testing.Fakes;
 /// <summary>
 /// A round-by-round learner whose every prediction after r rounds is the actual target (test rows: 0) plus
 /// <c>error(r)</c>, so under RMSE the pooled held-out score after r rounds is |error(r)|. It records what was asked of it.
+/// Another constructor gives each fold its own curve, <c>error(fold, r)</c>.
 /// </summary>
-public sealed class CurveLearner(Func<int, double> error, int splitsUntil = int.MaxValue) : IRoundLearner
+public sealed class CurveLearner(Func<int, int, double> foldError, int splitsUntil = int.MaxValue) : IRoundLearner
 {
     private readonly List<CurveFit> fits = [];
+
+    public CurveLearner(Func<int, double> error, int splitsUntil = int.MaxValue)
+        : this((_, rounds) => error(rounds), splitsUntil)
+    {
+    }
 
     public string Family => "curve";
 
@@ -21,7 +27,7 @@ public sealed class CurveLearner(Func<int, double> error, int splitsUntil = int.
     public FoldPrediction Fit(FoldJob job, CancellationToken cancellation)
     {
         WholeFits++;
-        using var fit = new CurveFit(job, error, splitsUntil);
+        using var fit = new CurveFit(job, rounds => foldError(job.Fold, rounds), splitsUntil);
         while (fit.Rounds < job.Budget && fit.TrainRound())
         {
         }
@@ -31,7 +37,7 @@ public sealed class CurveLearner(Func<int, double> error, int splitsUntil = int.
 
     public IRoundFit Start(FoldJob job, CancellationToken cancellation)
     {
-        var fit = new CurveFit(job, error, splitsUntil);
+        var fit = new CurveFit(job, rounds => foldError(job.Fold, rounds), splitsUntil);
         fits.Add(fit);
         return fit;
     }
@@ -45,6 +51,9 @@ public sealed class CurveLearner(Func<int, double> error, int splitsUntil = int.
         public List<(int Rounds, bool WithTest)> Predictions { get; } = [];
 
         public bool Disposed { get; private set; }
+
+        /// <summary>The fold this model was started for.</summary>
+        public int Fold => job.Fold;
 
         public bool TrainRound()
         {
