@@ -3,7 +3,7 @@ using Foldwise.Core.Spaces;
 
 namespace Foldwise.Cli.Commands;
 
-/// <summary>The demo's search: both families, ASHA with TPE; the quick one on a small table with small budgets.</summary>
+/// <summary>The demo's search: the default families, ASHA with TPE racing over folds (<see cref="ScheduleDefaults"/>); the quick one on a small table with small budgets.</summary>
 public static class DemoDefinition
 {
     public const string IdColumn = "shipper_id";
@@ -16,8 +16,8 @@ public static class DemoDefinition
         Seed = seed,
         Families = [.. FamilyNames.Default.Select(f => new FamilySearch(f, DefaultSpaces.For(f)))],
         Schedule = quick
-            ? new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, FirstRung: 20, FullBudget: 180, Eta: 3)
-            : new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, FirstRung: 25, FullBudget: 400, Eta: 3),
+            ? ScheduleDefaults.Standard with { FirstRung = 20, FullBudget = 180 }
+            : ScheduleDefaults.Standard with { FirstRung = 25, FullBudget = 400 },
         Budget = quick ? new SearchBudget(Trials: 40, Hours: null) : new SearchBudget(Trials: 60, Hours: 3),
     };
 }

@@ -54,6 +54,7 @@ public static class DefinitionDefaults
             Name = Name,
             Data = data,
             Families = DefaultFamilies,
+            Schedule = ScheduleDefaults.Standard,
             Budget = Budget(null, trials, hours),
         };
 

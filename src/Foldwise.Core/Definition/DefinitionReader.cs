@@ -57,7 +57,7 @@ public static class DefinitionReader
         var check = new DefinitionCheck(sourcePath, acceptRetired);
         var root = check.Object(DefinitionTree.Parse(utf8, sourcePath), DefinitionNames.RootKeys);
         var scheduleNode = root.Get("schedule")?.Value;
-        var schedule = scheduleNode is null ? new ScheduleOptions() : ScheduleReader.Read(check, scheduleNode);
+        var schedule = scheduleNode is null ? ScheduleDefaults.Standard : ScheduleReader.Read(check, scheduleNode);
         var fallback = SharedBudget(check, scheduleNode, schedule);
         var definition = new SearchDefinition
         {

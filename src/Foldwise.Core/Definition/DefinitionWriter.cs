@@ -85,8 +85,9 @@ public static class DefinitionWriter
                 json.WriteNumber("eta", schedule.Eta);
                 json.WriteNumber("rate_scaling", schedule.RateScaling);
                 json.WriteNumber("brackets", schedule.Brackets);
-                if (schedule.ByFolds)
+                if (schedule.Kind == ScheduleKind.Asha)
                 {
+                    // Written even when 0 (rungs in rounds): a definition that leaves it out races over folds.
                     json.WriteNumber("screen_folds", schedule.ScreenFolds);
                 }
             });

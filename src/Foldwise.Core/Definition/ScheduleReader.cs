@@ -1,6 +1,6 @@
 namespace Foldwise.Core.Definition;
 
-/// <summary>Reads <c>schedule</c>; what it leaves out keeps <see cref="ScheduleOptions"/>' defaults.</summary>
+/// <summary>Reads <c>schedule</c>; what it leaves out keeps <see cref="ScheduleOptions"/>' defaults, but for the screen and η (<see cref="ScheduleDefaults"/>).</summary>
 internal static class ScheduleReader
 {
     public static ScheduleOptions Read(DefinitionCheck check, DefinitionNode node)
@@ -9,17 +9,21 @@ internal static class ScheduleReader
         var standard = new ScheduleOptions();
         var first = schedule.Get("first_rung")?.Value;
         var full = schedule.Get("full_budget")?.Value;
+        var kind = schedule.Get("kind") is { } k ? check.Word(k.Value, DefinitionNames.Schedules) : standard.Kind;
+        int screenFolds = schedule.Get("screen_folds") is { } s
+            ? check.Whole(s.Value, 0, " (the folds a new candidate first trains; 0: rungs count the learners' budget)")
+            : ScheduleDefaults.ScreenFoldsFor(kind, firstRungWritten: first is not null);
         var options = new ScheduleOptions(
-            schedule.Get("kind") is { } k ? check.Word(k.Value, DefinitionNames.Schedules) : standard.Kind,
+            kind,
             schedule.Get("proposer") is { } p ? check.Word(p.Value, DefinitionNames.Proposers) : standard.Proposer,
             first is null ? standard.FirstRung : check.Whole(first, 1),
             full is null ? standard.FullBudget : check.Whole(full, 1),
-            schedule.Get("eta") is { } e ? check.Whole(e.Value, 2, " (each rung keeps 1/eta)") : standard.Eta,
+            schedule.Get("eta") is { } e ? check.Whole(e.Value, 2, " (each rung keeps 1/eta)") : ScheduleDefaults.EtaFor(screenFolds),
             schedule.Get("rate_scaling") is { } r ? Scaling(check, r.Value) : standard.RateScaling,
             schedule.Get("brackets") is { } b ? check.Whole(b.Value, 1) : standard.Brackets,
-            schedule.Get("screen_folds") is { } s ? check.Whole(s.Value, 1, " (the folds a new candidate first trains)") : standard.ScreenFolds);
+            screenFolds);
 
-        if (schedule.Get("screen_folds") is { } screen && options.Kind != ScheduleKind.Asha)
+        if (schedule.Get("screen_folds") is { } screen && options.ByFolds && options.Kind != ScheduleKind.Asha)
         {
             throw check.Fail(screen.Value, $"'schedule.screen_folds' applies to the asha schedule only, not '{DefinitionNames.Schedules.NameOf(options.Kind)}'");
         }

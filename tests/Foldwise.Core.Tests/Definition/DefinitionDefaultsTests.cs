@@ -17,7 +17,7 @@ public sealed class DefinitionDefaultsTests
         Assert.Equal(new DataSource("/work/here/in/train.csv", "/abs/test.csv", "shipper_id", "q1_spend"), d.Data);
         Assert.Equal(FamilyNames.Default, d.Families.Select(f => f.Family));
         Assert.True(d.Families.All(f => DefinitionComparer.SameSpace(DefaultSpaces.For(f.Family), f.Space)));
-        Assert.Equal(new ScheduleOptions(), d.Schedule);
+        Assert.Equal(ScheduleDefaults.Standard, d.Schedule);
         Assert.Equal(new SearchBudget(40, null), d.Budget);
         Assert.Equal((5, 1), (d.Folds, d.Seed));
     }

@@ -82,12 +82,13 @@ public sealed class DefinitionReaderTests
         // When it is parsed
         var d = DefinitionReader.Parse(json, "/defs/quarterly.json", "/defs");
 
-        // Then the name comes from the file, paths are absolute, and the rest are the records' defaults
+        // Then the name comes from the file, paths are absolute, and the rest are the records' defaults (the schedule's
+        // for a definition: racing over folds)
         Assert.Equal("quarterly", d.Name);
         Assert.Equal(("/defs/sub/a.csv", "/abs/b.csv"), (d.Data.Train, d.Data.Test));
         Assert.Equal((MetricKind.Rmsle, 5, 1), (d.Metric, d.Folds, d.Seed));
         Assert.Equal(new Foldwise.Core.Screening.ScreeningOptions(), d.Screening);
-        Assert.Equal(new ScheduleOptions(), d.Schedule);
+        Assert.Equal(ScheduleDefaults.Standard, d.Schedule);
         Assert.Equal(new BlendOptions(), d.Blend);
         Assert.Equal(new SearchBudget(DefinitionDefaults.Trials, null), d.Budget);
         Assert.Equal(FamilyNames.Default, d.Families.Select(f => f.Family));
