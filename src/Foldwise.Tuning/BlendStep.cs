@@ -1,6 +1,7 @@
 using System.Diagnostics;
 using Foldwise.Cluster.Telemetry;
 using Foldwise.Core.Blending;
+using Foldwise.Core.Data;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Events;
 using Foldwise.Core.Metrics;
@@ -45,6 +46,14 @@ public static class BlendStep
             // No candidate reached its family's full budget (a very small trial budget): blend what went furthest in each family.
             var done = trials.Where(t => t.State == TrialState.Done && t.AllFolds).ToList();
             var furthest = done.GroupBy(t => t.Family, StringComparer.Ordinal).ToDictionary(g => g.Key, g => g.Max(t => t.Budget), StringComparer.Ordinal);
+            if (furthest.Count == 0)
+            {
+                // Only trials screened on some folds are done: none covers every row, so none can be blended.
+                throw new InputException(
+                    "nothing to blend: no trial of this search trained every fold (its budget ran out while new candidates were still screened on " +
+                    "the first folds); run it with a longer budget.hours or more budget.trials, or with schedule.screen_folds 0 to screen on rounds");
+            }
+
             pool = BlendPool.Select(trials, options.Pool, f => furthest.GetValueOrDefault(f, -1));
             events.Report(new BlendFellBack([.. definition.Families
                 .Where(f => furthest.ContainsKey(f.Family))

@@ -152,6 +152,7 @@ public sealed class SearchCoordinator
             CommitLocked(done);
             quarantine.Succeeded(winner.Worker);
             stragglers?.Finished(done.Budget, done.Duration!.Value);
+            FinishScreensLocked(done.Finished!.Value);
             return true;
         }
     }
@@ -269,8 +270,28 @@ public sealed class SearchCoordinator
         return created.Id;
     }
 
-    private void UpdateStoppingLocked(DateTimeOffset now) =>
+    private void UpdateStoppingLocked(DateTimeOffset now)
+    {
         stopping ??= StopRules.Reason(stopRequested, definition.Budget, SpentSecondsLocked(now), trials.Count, schedule.Exhausted);
+        FinishScreensLocked(now);
+    }
+
+    /// <summary>Queues what <see cref="ScreenFinish"/> asks of a search that stopped while screening on folds.</summary>
+    private void FinishScreensLocked(DateTimeOffset now)
+    {
+        if (!definition.Schedule.ByFolds || stopping is not (StopReason.TrialBudget or StopReason.ScheduleExhausted))
+        {
+            return;
+        }
+
+        foreach (var family in definition.Families)
+        {
+            if (ScreenFinish.For(family.Family, trials.Values, definition.Folds, definition.Schedule, definition.BudgetOf(family.Family).FullBudget) is { } plan)
+            {
+                CommitLocked(plan.ToTrial(nextId++, now));
+            }
+        }
+    }
 
     private bool IsFinishedLocked() => StopRules.Finished(stopping, running.Count, queued.Count);
 

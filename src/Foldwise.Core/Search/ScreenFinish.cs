@@ -1,0 +1,33 @@
+using Foldwise.Core.Schedules;
+
+namespace Foldwise.Core.Search;
+
+/// <summary>
+/// A search that screens on folds may stop (its trial budget, or a schedule with nothing more to give) before any
+/// candidate of a family has trained every fold, and a screened trial can never be blended. So once such a family has
+/// nothing running or queued, its best screened candidate (the most folds, then the best score) is promoted to every
+/// fold: at most one trial per family past the budget, and a family that already has one gets none.
+/// </summary>
+internal static class ScreenFinish
+{
+    /// <summary>The promotion <paramref name="family"/> still needs, or null.</summary>
+    public static TrialPlan? For(string family, IEnumerable<TrialRecord> trials, int folds, Definition.ScheduleOptions schedule, int fullBudget)
+    {
+        var own = trials.Where(t => t.Family == family).ToList();
+        if (own.Any(t => t.State is TrialState.Running or TrialState.Queued || (t.AllFolds && t.State == TrialState.Done)))
+        {
+            return null;
+        }
+
+        var promoted = own.Where(t => t.ParentId is not null).Select(t => t.ParentId!.Value).ToHashSet();
+        var best = own.Where(t => t.State == TrialState.Done && !t.AllFolds && t.Score is not null && !promoted.Contains(t.Id))
+            .OrderByDescending(t => t.Folds).ThenBy(t => t.Score).ThenBy(t => t.Id).FirstOrDefault();
+        if (best is null)
+        {
+            return null;
+        }
+
+        int top = RungBudgets.For(schedule.ScreenFolds, folds, schedule.Eta).Length - 1;
+        return new TrialPlan(family, best.Parameters, fullBudget, top, best.Id, Promotion.ProposerName, best.Bracket, Folds: 0);
+    }
+}
