@@ -1,4 +1,5 @@
 using System.Text.Json.Nodes;
+using Foldwise.Core.Definition;
 using Foldwise.Core.Schedules;
 using Foldwise.Core.Spaces;
 using Spectre.Console;
@@ -61,6 +62,12 @@ public sealed class PlanCommand(IAnsiConsole console) : Command<PlanSettings>
         }
 
         console.MarkupLine($"{settings.Family}, budgets in {unit}.");
+        if (screen.IsDefault)
+        {
+            console.MarkupLine($"A definition that names no rungs races over folds (schedule.screen_folds {ScheduleDefaults.ScreenFolds}, η {ScheduleDefaults.FoldScreenEta}; see --screen-folds); " +
+                "with schedule.first_rung, or screen_folds 0, it screens on the rungs below.");
+        }
+
         console.MarkupLine($"ASHA rungs ({unit}): {string.Join(" → ", rungs)}; a candidate moves up when it is in the top 1/{settings.Eta} of its rung.");
         console.MarkupLine($"Learning rate on each rung, × the drawn one (default schedule.rate_scaling 0.5; at most 1): {string.Join(" → ", rates.Select(r => r.ToString("0.##")))}.");
         console.MarkupLine($"ASHA brackets (schedule.brackets k runs the first k, each with an equal share of compute): " +

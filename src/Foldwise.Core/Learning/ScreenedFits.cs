@@ -9,7 +9,8 @@ namespace Foldwise.Core.Learning;
 /// it had never stopped, and the held-out predictions of the rounds it already trained are replayed from what the
 /// screen recorded (a promotion may stop at another round than its screen). A worker keeps the most recently
 /// screened trials up to <see cref="CapacityBytes"/> and <see cref="CapacityTrials"/>; a promotion that finds nothing
-/// (another worker screened it, or it was dropped) trains every fold as before, with the same result.
+/// (another worker screened it, or it was dropped) trains every fold as before, with the same result. A worker keeps
+/// the screens of one search at a time (the one it screened last).
 /// </summary>
 public sealed class ScreenedFits : IDisposable
 {
@@ -51,6 +52,13 @@ public sealed class ScreenedFits : IDisposable
         var dropped = new List<Entry>();
         lock (sync)
         {
+            // Another search's screens go: their models hold that search's table, and its promotions come no more here.
+            foreach (var other in recent.Where(e => !ReferenceEquals(e.Key.Data, key.Data)).ToList())
+            {
+                recent.Remove(other);
+                dropped.Add(other);
+            }
+
             recent.AddFirst(entry);
             while (recent.Count > 0 && (recent.Count > CapacityTrials || recent.Sum(e => e.Bytes) > CapacityBytes))
             {

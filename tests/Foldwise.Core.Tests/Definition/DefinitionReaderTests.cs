@@ -25,7 +25,7 @@ public sealed class DefinitionReaderTests
         Assert.Equal([FamilyNames.LightGbm, FamilyNames.FastTree], d.Families.Select(f => f.Family));
         Assert.True(DefinitionComparer.SameSpace(DefaultSpaces.LightGbm, d.Families[0].Space));
         Assert.True(DefinitionComparer.SameSpace(DefaultSpaces.FastTree, d.Families[1].Space));
-        Assert.Equal(new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, 25, 400, 3), d.Schedule);
+        Assert.Equal(new ScheduleOptions(ScheduleKind.Asha, ProposerKind.Tpe, 25, 400, 5, ScreenFolds: 1), d.Schedule);
         Assert.Equal(new SearchBudget(60, null), d.Budget);
         Assert.Equal(new BlendOptions(BlendMode.Simplex, 3), d.Blend);
     }

@@ -130,4 +130,22 @@ public sealed class ScreenedFitsTests
         Assert.Equal(0, screens.Count);
         Assert.All(learner.Fits, f => Assert.True(f.Disposed));
     }
+
+    [Fact]
+    public void A_screen_of_another_search_frees_the_screens_kept_for_the_last_one()
+    {
+        // Given a screen kept from one search
+        using var screens = new ScreenedFits();
+        var learner = new CurveLearner(EarlyFirstFold);
+        Screen(learner, screens, trialId: 4);
+
+        // When the worker screens a candidate of another search (another table)
+        new TrialExecutor(learner, RoundStopping.Default, screens).Run(
+            Table(), Parameters, budget: 100, seed: 1, threads: 1, CancellationToken.None, predictsTest: false, folds: 1, lineage: new TrialLineage(4, null));
+
+        // Then only the new search's screen is kept, and the old one's model is freed
+        Assert.Equal(1, screens.Count);
+        Assert.True(learner.Fits[0].Disposed);
+        Assert.False(learner.Fits[1].Disposed);
+    }
 }
