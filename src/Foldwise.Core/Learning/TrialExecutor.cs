@@ -135,11 +135,6 @@ public sealed class TrialExecutor
                 advanced?.Invoke(f + 1, 0);
             }
 
-            for (int f = runs.Count; continued is not null && f < continued.Count; f++)
-            {
-                continued[f].Fit.Dispose();
-            }
-
             // All folds advance together, so the pooled held-out score exists after every round.
             var oof = new double[data.Train.RowCount];
             double best = double.PositiveInfinity;
@@ -202,6 +197,12 @@ public sealed class TrialExecutor
                 {
                     run.Fit.Dispose();
                 }
+            }
+
+            // Kept folds this run did not take over (it was cancelled first, or the screen had more folds than it runs).
+            foreach (var fold in continued?.Skip(runs.Count(r => r.Continues)) ?? [])
+            {
+                fold.Fit.Dispose();
             }
         }
     }
@@ -283,10 +284,14 @@ public sealed class TrialExecutor
         /// <summary>Rounds taken from the screen instead of trained.</summary>
         public int Replayed { get; private set; }
 
+        /// <summary>True for a fold a screen kept, taken over by this run.</summary>
+        public bool Continues { get; private init; }
+
         /// <param name="record">Keep each round's held-out predictions, for a promotion that continues this fold.</param>
         public static FoldRun Starting(IRoundFit fit, FoldJob job, bool record) => new(fit, job, [], record ? [] : null);
 
-        public static FoldRun Continuing(ScreenedFold kept, bool predictsTest) => new(kept.Fit, kept.Job with { PredictsTest = predictsTest }, kept.HeldOutByRound, recorded: null);
+        public static FoldRun Continuing(ScreenedFold kept, bool predictsTest) =>
+            new(kept.Fit, kept.Job with { PredictsTest = predictsTest }, kept.HeldOutByRound, recorded: null) { Continues = true };
 
         /// <summary>Brings the fold to <paramref name="round"/>; false when it could not grow (it stays as it was, as a new model would).</summary>
         public bool Advance(int round)

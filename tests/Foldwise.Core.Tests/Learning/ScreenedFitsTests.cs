@@ -148,4 +148,23 @@ public sealed class ScreenedFitsTests
         Assert.True(learner.Fits[0].Disposed);
         Assert.False(learner.Fits[1].Disposed);
     }
+
+    [Fact]
+    public void A_promotion_cancelled_before_it_starts_frees_the_screens_models()
+    {
+        // Given a screened trial kept by a worker
+        using var screens = new ScreenedFits();
+        var learner = new CurveLearner(EarlyFirstFold);
+        Screen(learner, screens, trialId: 4);
+
+        // When its promotion is cancelled as it starts
+        using var cancelled = new CancellationTokenSource();
+        cancelled.Cancel();
+        Assert.Throws<OperationCanceledException>(() => new TrialExecutor(learner, RoundStopping.Default, screens).Run(
+            Data, Parameters, budget: 100, seed: 1, threads: 1, cancelled.Token, lineage: new TrialLineage(9, 4)));
+
+        // Then the screen's model is freed, not left to nobody
+        Assert.True(learner.Fits.Single().Disposed);
+        Assert.Equal(0, screens.Count);
+    }
 }
