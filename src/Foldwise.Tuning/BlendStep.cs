@@ -51,7 +51,7 @@ public static class BlendStep
                 // Only trials screened on some folds are done: none covers every row, so none can be blended.
                 throw new InputException(
                     "nothing to blend: no trial of this search trained every fold (its budget ran out while new candidates were still screened on " +
-                    "the first folds); run it with a longer budget.hours or more budget.trials, or with schedule.screen_folds 0 to screen on rounds");
+                    "the first folds); resume it, or run it with a longer budget.hours or more budget.trials, or with schedule.screen_folds 0 to screen on rounds");
             }
 
             pool = BlendPool.Select(trials, options.Pool, f => furthest.GetValueOrDefault(f, -1));

@@ -6,7 +6,9 @@ namespace Foldwise.Core.Search;
 /// A search that screens on folds may stop (its trial budget, or a schedule with nothing more to give) before any
 /// candidate of a family has trained every fold, and a screened trial can never be blended. So once such a family has
 /// nothing running or queued, its best screened candidate (the most folds, then the best score) is promoted to every
-/// fold: at most one trial per family past the budget, and a family that already has one gets none.
+/// fold: at most one trial per family past the budget, and a family that already has one gets none. A search stopped
+/// by its hours budget before any family trained every fold gets one such promotion only, of the best screen of all
+/// (screens on the same folds score the same rows), which runs past the hours; with any trial on every fold it gets none.
 /// </summary>
 internal static class ScreenFinish
 {
@@ -30,4 +32,22 @@ internal static class ScreenFinish
         int top = RungBudgets.For(schedule.ScreenFolds, folds, schedule.Eta).Length - 1;
         return new TrialPlan(family, best.Parameters, fullBudget, top, best.Id, Promotion.ProposerName, best.Bracket, Folds: 0);
     }
+
+    /// <summary>The one promotion a search stopped by its hours budget still needs, or null.</summary>
+    public static TrialPlan? AfterHours(IReadOnlyCollection<TrialRecord> trials, int folds, Definition.ScheduleOptions schedule, Func<string, int> fullBudget)
+    {
+        if (trials.Any(t => t.State == TrialState.Running || (t.AllFolds && t.State is TrialState.Done or TrialState.Queued)))
+        {
+            return null;
+        }
+
+        var best = trials.Where(t => t.State == TrialState.Done && !t.AllFolds && t.Score is not null)
+            .OrderByDescending(t => t.Folds).ThenBy(t => t.Score).ThenBy(t => t.Id).FirstOrDefault();
+        return best is null ? null : For(best.Family, trials, folds, schedule, fullBudget(best.Family));
+    }
+
+    /// <summary>True for the queued promotion <see cref="AfterHours"/> made: it runs although the hours are spent.</summary>
+    public static bool RunsAfterHours(TrialRecord queued, IEnumerable<TrialRecord> trials) =>
+        queued.State == TrialState.Queued && queued.AllFolds && queued.ParentId is not null
+        && !trials.Any(t => t.AllFolds && t.State == TrialState.Done);
 }

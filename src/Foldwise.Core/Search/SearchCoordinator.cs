@@ -79,7 +79,9 @@ public sealed class SearchCoordinator
             }
 
             bool takesQueued = stopping is not (StopReason.Requested or StopReason.HoursBudget);
-            int? id = takesQueued ? queued.Where(q => Offers(families, trials[q].Family)).Select(q => (int?)q).FirstOrDefault() : null;
+            int? id = takesQueued ? queued.Where(q => Offers(families, trials[q].Family)).Select(q => (int?)q).FirstOrDefault()
+                : stopping is StopReason.HoursBudget ? AfterHoursLocked().Where(q => Offers(families, trials[q].Family)).Select(q => (int?)q).FirstOrDefault()
+                : null;
             if (id is null && !(takesQueued && queued.Count > 0) && CreateLocked(now) is { } created && Offers(families, trials[created].Family))
             {
                 id = created;
@@ -279,6 +281,12 @@ public sealed class SearchCoordinator
     /// <summary>Queues what <see cref="ScreenFinish"/> asks of a search that stopped while screening on folds.</summary>
     private void FinishScreensLocked(DateTimeOffset now)
     {
+        if (definition.Schedule.ByFolds && stopping is StopReason.HoursBudget
+            && ScreenFinish.AfterHours(trials.Values, definition.Folds, definition.Schedule, f => definition.BudgetOf(f).FullBudget) is { } overtime)
+        {
+            CommitLocked(overtime.ToTrial(nextId++, now));
+        }
+
         if (!definition.Schedule.ByFolds || stopping is not (StopReason.TrialBudget or StopReason.ScheduleExhausted))
         {
             return;
@@ -293,7 +301,11 @@ public sealed class SearchCoordinator
         }
     }
 
-    private bool IsFinishedLocked() => StopRules.Finished(stopping, running.Count, queued.Count);
+    private bool IsFinishedLocked() =>
+        StopRules.Finished(stopping, running.Count, queued.Count) && !(stopping is StopReason.HoursBudget && AfterHoursLocked().Any());
+
+    /// <summary>Queued trials that run although the hours are spent (<see cref="ScreenFinish.AfterHours"/>).</summary>
+    private IEnumerable<int> AfterHoursLocked() => definition.Schedule.ByFolds ? queued.Where(q => ScreenFinish.RunsAfterHours(trials[q], trials.Values)) : [];
 
     private void ExpireLeasesLocked(DateTimeOffset now)
     {

@@ -12,7 +12,7 @@ public sealed class ScreenFinishTests
     private readonly FakeTimeProvider time = new(new DateTimeOffset(2026, 12, 1, 9, 0, 0, TimeSpan.Zero));
 
     /// <summary>Two families racing over folds (the default schedule) with a budget too small for any ordinary promotion.</summary>
-    private SearchCoordinator Coordinator(int trials)
+    private SearchCoordinator Coordinator(int? trials, double? hours = null)
     {
         var definition = new SearchDefinition
         {
@@ -20,7 +20,7 @@ public sealed class ScreenFinishTests
             Data = new DataSource("train.csv", "test.csv", "id", "y"),
             Families = [new FamilySearch(FamilyNames.LightGbm, DefaultSpaces.LightGbm), new FamilySearch(FamilyNames.FastTree, DefaultSpaces.For(FamilyNames.FastTree))],
             Schedule = ScheduleDefaults.Standard,
-            Budget = new SearchBudget(trials, null),
+            Budget = new SearchBudget(trials, hours),
         };
         return new SearchCoordinator(definition, ScheduleFactory.Create(definition), new MemoryJournal(), time);
     }
@@ -69,5 +69,47 @@ public sealed class ScreenFinishTests
         Assert.Equal(LeaseKind.Finished, coordinator.Lease("w", "0").Kind);
         Assert.Equal(12, coordinator.Trials().Count);
         Assert.Equal(2, coordinator.Trials().Count(t => t.AllFolds));
+    }
+
+    [Fact]
+    public void A_search_whose_hours_end_before_any_trial_trained_every_fold_promotes_the_best_screen_of_all_past_them()
+    {
+        // Given an hour's budget, two screens running when it ends
+        var coordinator = Coordinator(trials: null, hours: 1);
+        var lightgbm = coordinator.Lease("w", "0").Trial!;
+        var fasttree = coordinator.Lease("w", "1").Trial!;
+        time.Advance(TimeSpan.FromHours(2));
+
+        // When they finish, FastTree's screen the better
+        coordinator.Complete(lightgbm.Id, 1, 0.4, [0.4]);
+        coordinator.Complete(fasttree.Id, 1, 0.3, [0.3]);
+
+        // Then that screen alone trains every fold past the hours, and then the search is finished
+        var overtime = coordinator.Lease("w", "0").Trial!;
+        Assert.Equal((fasttree.Id, true), (overtime.ParentId!.Value, overtime.AllFolds));
+        Assert.Equal(LeaseKind.Wait, coordinator.Lease("w", "1").Kind);
+        coordinator.Complete(overtime.Id, 1, 0.31, [0.3, 0.32]);
+        Assert.Equal(LeaseKind.Finished, coordinator.Lease("w", "0").Kind);
+        Assert.Equal(StopReason.HoursBudget, coordinator.Progress().Stopping);
+    }
+
+    [Fact]
+    public void A_search_whose_hours_end_with_a_trial_on_every_fold_stops_there()
+    {
+        // Given a screen that was promoted to every fold before the hour was out
+        var coordinator = Coordinator(trials: null, hours: 1);
+        for (int i = 0; i < 10; i++)
+        {
+            var trial = coordinator.Lease("w", "0").Trial!;
+            coordinator.Complete(trial.Id, 1, 0.5 - (i * 0.01), [0.5]);
+        }
+
+        Assert.Contains(coordinator.Trials(), t => t.AllFolds && t.State == TrialState.Done);
+
+        // When the hours run out
+        time.Advance(TimeSpan.FromHours(2));
+
+        // Then nothing more runs
+        Assert.Equal(LeaseKind.Finished, coordinator.Lease("w", "0").Kind);
     }
 }
