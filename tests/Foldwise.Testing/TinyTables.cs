@@ -1,5 +1,8 @@
 using System.Collections.Immutable;
 using Foldwise.Core.Data;
+using Foldwise.Core.Folds;
+using Foldwise.Core.Learning;
+using Foldwise.Core.Metrics;
 
 namespace Foldwise.Testing;
 
@@ -48,6 +51,15 @@ public static class TinyTables
     }
 
     /// <summary>A table from dense rows, with features named f1, f2 ….</summary>
+    /// <summary>Fifty training rows whose one feature is their target 0..49, seven test rows, five folds (seed 3), RMSE: for learners whose predictions are made up from the target.</summary>
+    public static TrialData RampTrialData()
+    {
+        double[] target = [.. Enumerable.Range(0, 50).Select(i => (double)i)];
+        var train = FromRows([.. target.Select(y => new[] { (float)y })], target);
+        var test = FromRows([.. Enumerable.Range(0, 7).Select(i => new[] { (float)i })]);
+        return TrialData.From(train, test, StratifiedFoldPlanner.Create(target, 5, seed: 3), Metric.Rmse);
+    }
+
     public static FeatureTable FromRows(float[][] rows, double[]? target = null, string source = "tiny.csv")
     {
         int width = rows.Length > 0 ? rows[0].Length : 0;

@@ -1,6 +1,4 @@
-using Foldwise.Core.Folds;
 using Foldwise.Core.Learning;
-using Foldwise.Core.Metrics;
 using Foldwise.Core.Spaces;
 using Foldwise.Testing;
 using Foldwise.Testing.Fakes;
@@ -9,15 +7,7 @@ namespace Foldwise.Core.Tests.Learning;
 
 public sealed class RoundByRoundTrialTests
 {
-    private static readonly TrialData Data = Table();
-
-    private static TrialData Table()
-    {
-        double[] target = [.. Enumerable.Range(0, 50).Select(i => (double)i)];
-        var train = TinyTables.FromRows([.. target.Select(y => new[] { (float)y })], target);
-        var test = TinyTables.FromRows([.. Enumerable.Range(0, 7).Select(i => new[] { (float)i })]);
-        return TrialData.From(train, test, StratifiedFoldPlanner.Create(target, 5, seed: 3), Metric.Rmse);
-    }
+    private static readonly TrialData Data = TinyTables.RampTrialData();
 
     /// <summary>Best after 30 rounds (error 0.01), worse on either side.</summary>
     private static double BestAt30(int rounds) => 0.01 + (Math.Abs(rounds - 30) / 100.0);

@@ -1,6 +1,4 @@
-using Foldwise.Core.Folds;
 using Foldwise.Core.Learning;
-using Foldwise.Core.Metrics;
 using Foldwise.Core.Spaces;
 using Foldwise.Testing;
 using Foldwise.Testing.Fakes;
@@ -9,15 +7,7 @@ namespace Foldwise.Core.Tests.Learning;
 
 public sealed class ScreenedFitsTests
 {
-    private static readonly TrialData Data = Table();
-
-    private static TrialData Table()
-    {
-        double[] target = [.. Enumerable.Range(0, 50).Select(i => (double)i)];
-        var train = TinyTables.FromRows([.. target.Select(y => new[] { (float)y })], target);
-        var test = TinyTables.FromRows([.. Enumerable.Range(0, 7).Select(i => new[] { (float)i })]);
-        return TrialData.From(train, test, StratifiedFoldPlanner.Create(target, 5, seed: 3), Metric.Rmse);
-    }
+    private static readonly TrialData Data = TinyTables.RampTrialData();
 
     /// <summary>The first fold is best after 10 rounds, the others after 30: a one-fold screen stops long before its promotion does.</summary>
     private static double EarlyFirstFold(int fold, int rounds) => 0.01 + (Math.Abs(rounds - (fold == 0 ? 10 : 30)) / 100.0);
@@ -141,7 +131,7 @@ public sealed class ScreenedFitsTests
 
         // When the worker screens a candidate of another search (another table)
         new TrialExecutor(learner, RoundStopping.Default, screens).Run(
-            Table(), Parameters, budget: 100, seed: 1, threads: 1, CancellationToken.None, predictsTest: false, folds: 1, lineage: new TrialLineage(4, null));
+            TinyTables.RampTrialData(), Parameters, budget: 100, seed: 1, threads: 1, CancellationToken.None, predictsTest: false, folds: 1, lineage: new TrialLineage(4, null));
 
         // Then only the new search's screen is kept, and the old one's model is freed
         Assert.Equal(1, screens.Count);
