@@ -1,3 +1,4 @@
+using Foldwise.Core.Definition;
 using Foldwise.Core.Schedules;
 
 namespace Foldwise.Core.Search;
@@ -12,8 +13,26 @@ namespace Foldwise.Core.Search;
 /// </summary>
 internal static class ScreenFinish
 {
+    /// <summary>What a search stopped for <paramref name="stopping"/> still needs queued so that it has something to blend.</summary>
+    public static IReadOnlyList<TrialPlan> Needed(SearchDefinition definition, StopReason? stopping, IReadOnlyCollection<TrialRecord> trials)
+    {
+        if (!definition.Schedule.ByFolds)
+        {
+            return [];
+        }
+
+        int FullBudget(string family) => definition.BudgetOf(family).FullBudget;
+        return stopping switch
+        {
+            StopReason.HoursBudget => AfterHours(trials, definition.Folds, definition.Schedule, FullBudget) is { } plan ? [plan] : [],
+            StopReason.TrialBudget or StopReason.ScheduleExhausted =>
+                [.. definition.Families.Select(f => For(f.Family, trials, definition.Folds, definition.Schedule, FullBudget(f.Family))).OfType<TrialPlan>()],
+            _ => [],
+        };
+    }
+
     /// <summary>The promotion <paramref name="family"/> still needs, or null.</summary>
-    public static TrialPlan? For(string family, IEnumerable<TrialRecord> trials, int folds, Definition.ScheduleOptions schedule, int fullBudget)
+    private static TrialPlan? For(string family, IEnumerable<TrialRecord> trials, int folds, ScheduleOptions schedule, int fullBudget)
     {
         var own = trials.Where(t => t.Family == family).ToList();
         if (own.Any(t => t.State is TrialState.Running or TrialState.Queued || (t.AllFolds && t.State == TrialState.Done)))
@@ -34,7 +53,7 @@ internal static class ScreenFinish
     }
 
     /// <summary>The one promotion a search stopped by its hours budget still needs, or null.</summary>
-    public static TrialPlan? AfterHours(IReadOnlyCollection<TrialRecord> trials, int folds, Definition.ScheduleOptions schedule, Func<string, int> fullBudget)
+    private static TrialPlan? AfterHours(IReadOnlyCollection<TrialRecord> trials, int folds, ScheduleOptions schedule, Func<string, int> fullBudget)
     {
         if (trials.Any(t => t.State == TrialState.Running || (t.AllFolds && t.State is TrialState.Done or TrialState.Queued)))
         {
@@ -46,8 +65,9 @@ internal static class ScreenFinish
         return best is null ? null : For(best.Family, trials, folds, schedule, fullBudget(best.Family));
     }
 
-    /// <summary>True for the queued promotion <see cref="AfterHours"/> made: it runs although the hours are spent.</summary>
-    public static bool RunsAfterHours(TrialRecord queued, IEnumerable<TrialRecord> trials) =>
-        queued.State == TrialState.Queued && queued.AllFolds && queued.ParentId is not null
-        && !trials.Any(t => t.AllFolds && t.State == TrialState.Done);
+    /// <summary>The queued trials that run although the hours are spent: the promotion <see cref="AfterHours"/> made.</summary>
+    public static IEnumerable<int> AfterHours(SearchDefinition definition, IEnumerable<int> queued, IReadOnlyDictionary<int, TrialRecord> trials) =>
+        !definition.Schedule.ByFolds || trials.Values.Any(t => t.AllFolds && t.State == TrialState.Done)
+            ? []
+            : queued.Where(q => trials[q] is { AllFolds: true, ParentId: not null });
 }

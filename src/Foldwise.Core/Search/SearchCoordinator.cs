@@ -79,9 +79,8 @@ public sealed class SearchCoordinator
             }
 
             bool takesQueued = stopping is not (StopReason.Requested or StopReason.HoursBudget);
-            int? id = takesQueued ? queued.Where(q => Offers(families, trials[q].Family)).Select(q => (int?)q).FirstOrDefault()
-                : stopping is StopReason.HoursBudget ? AfterHoursLocked().Where(q => Offers(families, trials[q].Family)).Select(q => (int?)q).FirstOrDefault()
-                : null;
+            var runnable = takesQueued ? queued : stopping is StopReason.HoursBudget ? ScreenFinish.AfterHours(definition, queued, trials) : [];
+            int? id = runnable.Where(q => Offers(families, trials[q].Family)).Select(q => (int?)q).FirstOrDefault();
             if (id is null && !(takesQueued && queued.Count > 0) && CreateLocked(now) is { } created && Offers(families, trials[created].Family))
             {
                 id = created;
@@ -154,7 +153,7 @@ public sealed class SearchCoordinator
             CommitLocked(done);
             quarantine.Succeeded(winner.Worker);
             stragglers?.Finished(done.Budget, done.Duration!.Value);
-            FinishScreensLocked(done.Finished!.Value);
+            UpdateStoppingLocked(done.Finished!.Value);
             return true;
         }
     }
@@ -272,40 +271,18 @@ public sealed class SearchCoordinator
         return created.Id;
     }
 
+    /// <summary>Decides whether the search stops, and queues what <see cref="ScreenFinish"/> asks of one that stopped while screening on folds.</summary>
     private void UpdateStoppingLocked(DateTimeOffset now)
     {
         stopping ??= StopRules.Reason(stopRequested, definition.Budget, SpentSecondsLocked(now), trials.Count, schedule.Exhausted);
-        FinishScreensLocked(now);
-    }
-
-    /// <summary>Queues what <see cref="ScreenFinish"/> asks of a search that stopped while screening on folds.</summary>
-    private void FinishScreensLocked(DateTimeOffset now)
-    {
-        if (definition.Schedule.ByFolds && stopping is StopReason.HoursBudget
-            && ScreenFinish.AfterHours(trials.Values, definition.Folds, definition.Schedule, f => definition.BudgetOf(f).FullBudget) is { } overtime)
+        foreach (var plan in ScreenFinish.Needed(definition, stopping, trials.Values))
         {
-            CommitLocked(overtime.ToTrial(nextId++, now));
-        }
-
-        if (!definition.Schedule.ByFolds || stopping is not (StopReason.TrialBudget or StopReason.ScheduleExhausted))
-        {
-            return;
-        }
-
-        foreach (var family in definition.Families)
-        {
-            if (ScreenFinish.For(family.Family, trials.Values, definition.Folds, definition.Schedule, definition.BudgetOf(family.Family).FullBudget) is { } plan)
-            {
-                CommitLocked(plan.ToTrial(nextId++, now));
-            }
+            CommitLocked(plan.ToTrial(nextId++, now));
         }
     }
 
     private bool IsFinishedLocked() =>
-        StopRules.Finished(stopping, running.Count, queued.Count) && !(stopping is StopReason.HoursBudget && AfterHoursLocked().Any());
-
-    /// <summary>Queued trials that run although the hours are spent (<see cref="ScreenFinish.AfterHours"/>).</summary>
-    private IEnumerable<int> AfterHoursLocked() => definition.Schedule.ByFolds ? queued.Where(q => ScreenFinish.RunsAfterHours(trials[q], trials.Values)) : [];
+        StopRules.Finished(stopping, running.Count, queued.Count) && !(stopping is StopReason.HoursBudget && ScreenFinish.AfterHours(definition, queued, trials).Any());
 
     private void ExpireLeasesLocked(DateTimeOffset now)
     {
