@@ -52,6 +52,7 @@ internal static class TrialDocuments
             ["score"] = Nullable(t.Score),
             ["foldScores"] = Array(t.FoldScores),
             ["bestRound"] = Nullable(t.BestRound),
+            ["roundsContinued"] = t.RoundsContinued,
             ["failureReason"] = Nullable(t.FailureReason),
             ["lostAttempts"] = Array(t.LostAttempts),
         };
@@ -91,6 +92,9 @@ internal static class TrialDocuments
 
             // Absent from stores written before trials kept their best round.
             BestRound = OptionalInt(doc, "bestRound"),
+
+            // Absent from stores written before promotions continued their screens.
+            RoundsContinued = OptionalInt(doc, "roundsContinued") ?? 0,
             FailureReason = OptionalString(doc, "failureReason"),
             LostAttempts = Strings(doc, "lostAttempts", owner),
         };

@@ -110,6 +110,43 @@ public sealed class RunCommandTests : IDisposable
     }
 
     [Fact]
+    public void A_promotion_on_the_worker_that_screened_it_continues_the_screen_and_says_so()
+    {
+        // Given a LightGBM search racing over folds in one local worker process (its slots share the screens)
+        workspace.WriteTables(trainRows: 120, testRows: 10);
+        string definition = workspace.Write("racing.json", """
+            {
+              "data": { "train": "train.csv", "test": "test.csv", "id": "id", "target": "y" },
+              "folds": 3,
+              "screening": { "min_nonzero": 2 },
+              "families": { "lightgbm": { "min_leaf_rows": 3 } },
+              "schedule": { "kind": "asha", "proposer": "random", "full_budget": 30, "eta": 3, "screen_folds": 1 },
+              "budget": { "trials": 12 }
+            }
+            """);
+
+        // When it runs
+        var run = CliHarness.Run("run", definition, "--out", workspace.Out);
+        Assert.True(run.ExitCode == 0, run.Output);
+
+        // Then every promotion to all folds took over its screen's rounds, as history's JSON, the run lines and show say
+        var json = CliHarness.Run("history", workspace.Out, "--json");
+        using var document = JsonDocument.Parse(json.Output);
+        var promoted = document.RootElement.EnumerateArray().Where(t => t.GetProperty("parent").ValueKind == JsonValueKind.Number).ToList();
+        Assert.NotEmpty(promoted);
+        Assert.All(promoted, t => Assert.Equal(3, t.GetProperty("folds").GetInt32()));
+        Assert.All(promoted, t => Assert.InRange(t.GetProperty("rounds_continued").GetInt32(), 1, 30));
+        Assert.All(
+            document.RootElement.EnumerateArray().Where(t => t.GetProperty("parent").ValueKind == JsonValueKind.Null),
+            t => Assert.Equal(0, t.GetProperty("rounds_continued").GetInt32()));
+        var first = promoted[0];
+        int continued = first.GetProperty("rounds_continued").GetInt32();
+        Assert.Contains($"({continued} continued)", run.Output);
+        var show = CliHarness.Run("show", workspace.Out, first.GetProperty("id").GetInt32().ToString(CultureInfo.InvariantCulture));
+        Assert.Contains($"{continued} rounds of its screen's fold models (trial {first.GetProperty("parent").GetInt32()}), not trained again", show.Output);
+    }
+
+    [Fact]
     public void Refuses_to_start_over_a_stored_search()
     {
         workspace.WriteTables();

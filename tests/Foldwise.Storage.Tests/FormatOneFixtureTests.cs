@@ -45,6 +45,7 @@ public sealed class FormatOneFixtureTests : IDisposable
         Assert.Equal(0.17695753695480773, trials[0].Score);
         Assert.Equal(0.43797219657695646, trials[1].Score);
         Assert.All(trials, t => Assert.Null(t.BestRound));
+        Assert.All(trials, t => Assert.Equal(0, t.RoundsContinued));
         Assert.All(trials, t => Assert.True(t.AllFolds));
         Assert.NotNull(vectors);
         Assert.Equal(60, vectors.Value.OutOfFold.Length);

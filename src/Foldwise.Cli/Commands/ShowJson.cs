@@ -35,6 +35,8 @@ public static class ShowJson
             ["rung"] = t.Rung,
             ["bracket"] = BracketNumbers.For(search.Definition).Of(t.Family, t.Bracket),
             ["parent"] = t.ParentId,
+            ["best_round"] = t.BestRound,
+            ["rounds_continued"] = t.RoundsContinued,
             ["parent_chain"] = new JsonArray([.. ShowLineage.Chain(t, search.Trials).Skip(1).Select(c => (JsonNode?)c.Id)]),
             ["promoted_to"] = new JsonArray([.. ShowLineage.Children(t, search.Trials).Select(c => (JsonNode?)c.Id)]),
             ["proposer"] = t.Proposer,

@@ -52,6 +52,16 @@ public static class ShowView
         }
 
         Fact($"OOF {metric}", t.Score?.ToString("F5", Invariant) ?? "not scored");
+        if (t.BestRound is { } best)
+        {
+            Fact("best round", $"{best} of {t.Budget} {unit}, kept for its predictions");
+        }
+
+        if (t.RoundsContinued > 0)
+        {
+            Fact("continued", $"{t.RoundsContinued} {unit} of its screen's fold models{(t.ParentId is { } screen ? $" (trial {screen})" : "")}, not trained again");
+        }
+
         if (t.FoldScores.Length > 0)
         {
             Fact("fold scores", string.Join("  ", t.FoldScores.Select(s => s.ToString("F5", Invariant))));

@@ -159,7 +159,7 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
         var p = t.Progress;
         // Plain lines go straight to the writer: no wrapping at a guessed width, one trial per line.
         console.Profile.Out.Writer.WriteLine(
-            $"trial {trial.Id,4} {trial.Family,-9} rung {trial.Rung} {trial.Budget,4} rounds{(trial.AllFolds ? "" : $" on {trial.Folds} fold{(trial.Folds == 1 ? "" : "s")}")} {trial.Score:F5} " +
+            $"trial {trial.Id,4} {trial.Family,-9} rung {trial.Rung} {trial.Budget,4} rounds{(trial.AllFolds ? "" : $" on {trial.Folds} fold{(trial.Folds == 1 ? "" : "s")}")}{(trial.RoundsContinued > 0 ? $" ({trial.RoundsContinued} continued)" : "")} {trial.Score:F5} " +
             $"{trial.Duration?.TotalSeconds,5:F1} s {trial.Worker}/{trial.Slot} | done {p.Done}{Of(p.TrialBudget)} running {p.Running} best {p.Best:F5} | " +
             trial.Parameters.Describe(spaces.GetValueOrDefault(trial.Family)));
     }

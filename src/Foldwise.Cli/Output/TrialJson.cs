@@ -36,6 +36,8 @@ public static class TrialJson
                 ["budget"] = t.Budget,
                 ["folds"] = t.AllFolds ? definition.Folds : t.Folds,
                 ["parent"] = t.ParentId,
+                ["best_round"] = t.BestRound,
+                ["rounds_continued"] = t.RoundsContinued,
                 ["proposer"] = t.Proposer,
                 ["attempt"] = t.Attempt,
                 ["lost_attempts"] = new JsonArray([.. t.LostAttempts.Select(s => (JsonNode?)s)]),

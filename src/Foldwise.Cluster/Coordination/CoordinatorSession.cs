@@ -97,7 +97,7 @@ public sealed class CoordinatorSession
 
             if (StoreFault is not null ||
                 !Writing(() => { recorder.SaveVectors(report.TrialId, report.OutOfFold, report.Test); return true; }, out _) ||
-                !Writing(() => Coordinator.Complete(report.TrialId, report.Attempt, report.Score, [.. report.FoldScores], report.BestRound), out bool accepted))
+                !Writing(() => Coordinator.Complete(report.TrialId, report.Attempt, report.Score, [.. report.FoldScores], report.BestRound, report.RoundsContinued), out bool accepted))
             {
                 return false;
             }

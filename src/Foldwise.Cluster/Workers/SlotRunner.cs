@@ -155,7 +155,7 @@ public sealed partial class SlotRunner(
             statistics.AddBusy(clock.Elapsed);
             await abandon.CancelAsync();
             var report = new TrialReport(
-                lease.TrialId, lease.Attempt, options.Name, slot, outcome.Score, [.. outcome.FoldScores], outcome.OutOfFold, outcome.Test, clock.Elapsed.TotalSeconds, outcome.BestRound);
+                lease.TrialId, lease.Attempt, options.Name, slot, outcome.Score, [.. outcome.FoldScores], outcome.OutOfFold, outcome.Test, clock.Elapsed.TotalSeconds, outcome.BestRound, outcome.RoundsContinued);
             bool accepted = await search.ReportAsync(report);
             ending = "scored";
             span?.SetTag("foldwise.score", outcome.Score).SetTag("foldwise.accepted", accepted);

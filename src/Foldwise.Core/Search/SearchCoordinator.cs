@@ -129,7 +129,8 @@ public sealed class SearchCoordinator
     /// Returns false for a report from a lost lease (another attempt owns the trial, or it finished already).
     /// </summary>
     /// <param name="bestRound">The round count the trial kept when it stopped at its best round (null: its whole budget).</param>
-    public bool Complete(int trialId, int attempt, double score, ImmutableArray<double> foldScores, int? bestRound = null)
+    /// <param name="roundsContinued">Rounds of fold models taken over from the trial's screen (0: all trained here).</param>
+    public bool Complete(int trialId, int attempt, double score, ImmutableArray<double> foldScores, int? bestRound = null, int roundsContinued = 0)
     {
         lock (gate)
         {
@@ -144,6 +145,7 @@ public sealed class SearchCoordinator
                 Score = score,
                 FoldScores = foldScores,
                 BestRound = bestRound,
+                RoundsContinued = roundsContinued,
                 Worker = winner.Worker,
                 Slot = winner.Slot,
                 Started = winner.Started,

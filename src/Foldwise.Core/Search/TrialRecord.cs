@@ -64,6 +64,12 @@ public sealed record TrialRecord
     /// </summary>
     public int? BestRound { get; init; }
 
+    /// <summary>
+    /// Rounds of fold models the trial took over from its screen instead of training them again (summed over folds;
+    /// 0 when it trained every round, and in stores written before promotions continued their screens).
+    /// </summary>
+    public int RoundsContinued { get; init; }
+
     public string? FailureReason { get; init; }
 
     /// <summary>Attempts lost to an expired lease or a worker error; at the coordinator's limit the trial fails. Interruptions (a stop, a restart) do not count.</summary>

@@ -40,6 +40,7 @@ public static class SampleTrials
         Score = 0.4 + (id * 1e-4),
         FoldScores = [0.41, 0.39, 0.40 + (id * 1e-4), 0.42, 0.38],
         BestRound = (100 * id) - 3,
+        RoundsContinued = 2 * id,
         FailureReason = null,
         LostAttempts = [$"1: lease expired on w1/{id}"],
     };
