@@ -86,14 +86,6 @@ public sealed class SearchCoordinator
                 id = created;
             }
 
-            if (id is { } next && stopping is null && !HoursFit.Fits(trials[next], SpentSecondsLocked(now), definition.Budget.Hours, trials.Values, definition.Folds))
-            {
-                // It would end after the hours: it stays queued for a resume, and the search stops as at its hours.
-                stopping = StopReason.HoursBudget;
-                UpdateStoppingLocked(now);
-                id = null;
-            }
-
             if (id is not { } trialId)
             {
                 return BackupLocked(worker, slot, now, families) ?? (IsFinishedLocked() ? LeaseGrant.Finished : LeaseGrant.Wait);

@@ -153,27 +153,6 @@ public sealed class SearchCoordinatorTests
     }
 
     [Fact]
-    public void Stops_when_the_next_trial_would_end_after_the_hours_and_keeps_it_queued_for_a_resume()
-    {
-        // Given an hour's budget and a first trial that took 20 minutes
-        var coordinator = Coordinator(trials: null, hours: 1);
-        var first = coordinator.Lease("w1", "0").Trial!;
-        time.Advance(TimeSpan.FromMinutes(20));
-        coordinator.Complete(first.Id, first.Attempt, 0.5, [0.5]);
-
-        // When a slot asks with 40 minutes left, the next one starts; with 19 minutes left, the one after does not
-        var second = coordinator.Lease("w1", "0").Trial!;
-        time.Advance(TimeSpan.FromMinutes(21));
-        coordinator.Complete(second.Id, second.Attempt, 0.4, [0.4]);
-        var refused = coordinator.Lease("w1", "0");
-
-        // Then the search stops as at its hours, with that trial queued for a resume
-        Assert.Equal(LeaseKind.Finished, refused.Kind);
-        Assert.Equal(StopReason.HoursBudget, coordinator.Progress().Stopping);
-        Assert.Equal([TrialState.Done, TrialState.Done, TrialState.Queued], coordinator.Trials().Select(t => t.State));
-    }
-
-    [Fact]
     public void A_journal_failure_leaves_the_coordinator_unchanged()
     {
         var coordinator = Coordinator();
