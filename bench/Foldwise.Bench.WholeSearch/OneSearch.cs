@@ -49,7 +49,7 @@ internal static class OneSearch
         var definition = DefinitionReader.Read(definitionPath);
         var s = definition.Schedule;
         Console.WriteLine($"  {shape}; families {string.Join(", ", definition.Families.Select(f => f.Family))}; " +
-                          $"schedule {s.Kind} {s.Proposer} eta {s.Eta}{(s.ByFolds ? $", screen folds {s.ScreenFolds}" : "")}; {hours} h; seed {seed}");
+                          $"schedule {DefinitionWords.Of(s.Kind)} {DefinitionWords.Of(s.Proposer)} eta {s.Eta}{(s.ByFolds ? $", screen folds {s.ScreenFolds}" : "")}; {hours} h; seed {seed}");
 
         var tally = new EventTally();
         var search = new SearchRun(tally) { Learners = setting.Learners };
