@@ -204,7 +204,7 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
     private static string Describe(StopReason? reason) => reason switch
     {
         StopReason.TrialBudget => "trial budget reached",
-        StopReason.HoursBudget => "hours budget reached, or too little of it left for the trials drawn",
+        StopReason.HoursBudget => "hours budget reached",
         StopReason.ScheduleExhausted => "schedule complete",
         StopReason.Requested => "stopped by request",
         _ => "running",

@@ -25,7 +25,6 @@ public sealed class SearchCoordinator
     private readonly LeaseTable leases = new();
     private readonly WorkerQuarantine quarantine;
     private readonly StragglerWatch? stragglers;
-    private readonly HoursParking parking;
     private readonly double spentBefore;
     private readonly DateTimeOffset sessionStart;
     private int nextId = 1;
@@ -50,7 +49,6 @@ public sealed class SearchCoordinator
         this.options = options ?? new CoordinatorOptions();
         this.options.Validate();
         quarantine = new WorkerQuarantine(this.options.QuarantineAfter);
-        parking = new HoursParking(definition);
         stragglers = this.options.BackupAfter is { } factor ? new StragglerWatch(factor, this.options.BackupMinimumDone) : null;
         spentBefore = spentSeconds;
         sessionStart = time.GetUtcNow();
@@ -65,8 +63,7 @@ public sealed class SearchCoordinator
     /// <summary>
     /// Gives a slot the next trial of a family its worker offers: a queued one first (lowest id), else a new one from
     /// the schedule. A new trial of a family the worker does not offer is queued for another worker, and while such a
-    /// trial waits, this worker creates no more (so a machine without a family cannot flood the queue). A trial that
-    /// would end after the hours budget is held back for a resume (<see cref="HoursParking"/>).
+    /// trial waits, this worker creates no more (so a machine without a family cannot flood the queue).
     /// </summary>
     /// <param name="families">The families the asking worker trains; null for every family.</param>
     public LeaseGrant Lease(string worker, string slot, IReadOnlyCollection<string>? families = null)
@@ -83,19 +80,10 @@ public sealed class SearchCoordinator
 
             bool takesQueued = stopping is not (StopReason.Requested or StopReason.HoursBudget);
             var runnable = takesQueued ? queued : stopping is StopReason.HoursBudget ? ScreenFinish.AfterHours(definition, queued, trials) : [];
-            // After the hours only what ScreenFinish asks for runs, held back or not.
-            int? id = runnable.Where(q => Offers(families, trials[q].Family) && (stopping is StopReason.HoursBudget || !parking.Holds(q)))
-                .Select(q => (int?)q).FirstOrDefault();
-            if (id is null && !(takesQueued && queued.Any(q => !parking.Holds(q))))
+            int? id = runnable.Where(q => Offers(families, trials[q].Family)).Select(q => (int?)q).FirstOrDefault();
+            if (id is null && !(takesQueued && queued.Count > 0) && CreateLocked(now) is { } created && Offers(families, trials[created].Family))
             {
-                id = CreateOfferedLocked(now, families);
-            }
-
-            // A trial that would end after the hours waits for a resume; the slot takes the schedule's next one instead.
-            while (id is { } next && stopping is null && parking.Parks(trials[next], SpentSecondsLocked(now), trials.Values))
-            {
-                UpdateStoppingLocked(now);
-                id = parking.Full ? StopForHoursLocked(now) : CreateOfferedLocked(now, families);
+                id = created;
             }
 
             if (id is not { } trialId)
@@ -261,17 +249,6 @@ public sealed class SearchCoordinator
         }
     }
 
-    /// <summary>A new trial of a family the worker offers, or null (one it does not offer stays queued for another worker).</summary>
-    private int? CreateOfferedLocked(DateTimeOffset now, IReadOnlyCollection<string>? families) =>
-        CreateLocked(now) is { } created && Offers(families, trials[created].Family) ? created : null;
-
-    private int? StopForHoursLocked(DateTimeOffset now)
-    {
-        stopping = StopReason.HoursBudget;
-        UpdateStoppingLocked(now);
-        return null;
-    }
-
     private int? CreateLocked(DateTimeOffset now)
     {
         if (stopping is not null)
@@ -306,9 +283,8 @@ public sealed class SearchCoordinator
         }
     }
 
-    /// <summary>Trials held back for the hours wait for a resume, whatever stopped the search.</summary>
     private bool IsFinishedLocked() =>
-        StopRules.Finished(stopping, running.Count, queued.Count(q => !parking.Holds(q))) && !(stopping is StopReason.HoursBudget && ScreenFinish.AfterHours(definition, queued, trials).Any());
+        StopRules.Finished(stopping, running.Count, queued.Count) && !(stopping is StopReason.HoursBudget && ScreenFinish.AfterHours(definition, queued, trials).Any());
 
     private void ExpireLeasesLocked(DateTimeOffset now)
     {
