@@ -127,9 +127,8 @@ public sealed class SearchCoordinator
     /// <summary>
     /// Records a finished trial. The caller stores its prediction vectors first, so a done trial always has them.
     /// Returns false for a report from a lost lease (another attempt owns the trial, or it finished already).
+    /// <paramref name="bestRound"/> and <paramref name="roundsContinued"/> are stored as the record's properties of those names.
     /// </summary>
-    /// <param name="bestRound">The round count the trial kept when it stopped at its best round (null: its whole budget).</param>
-    /// <param name="roundsContinued">Rounds of fold models taken over from the trial's screen (0: all trained here).</param>
     public bool Complete(int trialId, int attempt, double score, ImmutableArray<double> foldScores, int? bestRound = null, int roundsContinued = 0)
     {
         lock (gate)
