@@ -6,7 +6,7 @@ using Foldwise.Core.Spaces;
 
 internal sealed record BenchArgs(
     string Part, DemoSize Size, int[] SeedList, int RandomTrials, int AshaTrials, ScheduleKind Schedule,
-    int FirstRung, int FullBudget, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe, ProposerKind Proposer, bool Ladder, int DrawOffset, int Brackets, RoundStopping? Stopping, CsvPair? Csv, RoundStopping? RandomStopping, string Screen, int FirstFolds)
+    int FirstRung, int FullBudget, int Eta, int Threads, string Family, string Out, string Tag, double RateExponent, int ProbeBudget, double[] ProbeExponents, bool JointTpe, ProposerKind Proposer, bool Ladder, int DrawOffset, int Brackets, RoundStopping? Stopping, CsvPair? Csv, RoundStopping? RandomStopping, string Screen, int FirstFolds, double? GoodFromTop)
 {
     /// <summary>The table's name in traces and headings: the demo's size, or the CSV training file's name.</summary>
     /// <summary>
@@ -31,9 +31,9 @@ internal sealed record BenchArgs(
     private static string Label(RoundStopping? stopping) => stopping is { } s ? string.Create(CultureInfo.InvariantCulture, $"-stop{s.MinimumPatience}p{s.PatienceShare}") : "";
 
     /// <summary>What proposes the scheduled search's new candidates: TPE, independent or joint, or random draws (a control).</summary>
-    public string ProposerLabel => Proposer == ProposerKind.Random ? "random" : $"TPE {(JointTpe ? "joint" : "independent")}, {(Ladder ? "ladder" : "top budget")}";
+    public string ProposerLabel => Proposer == ProposerKind.Random ? "random" : $"TPE {(JointTpe ? "joint" : "independent")}, {(Ladder ? "ladder" : "top budget")}{(GoodFromTop is double t ? $", good: the best {t.ToString(CultureInfo.InvariantCulture)} of the top" : "")}";
 
-    public string AshaFile(int seed) => $"{Schedule}-{(Proposer == ProposerKind.Random ? "random" : (JointTpe ? "tpejoint" : "tpe1d") + (Ladder ? "ladder" : ""))}-{TableLabel}-{Family}-r{FirstRung}-{FullBudget}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}{(DrawOffset != 0 ? $"-d{DrawOffset}" : "")}{(Brackets > 1 ? $"-b{Brackets}" : "")}{(ByFolds ? $"-folds{FirstFolds}" : "")}{StopLabel}-seed{seed}.tsv".ToLowerInvariant();
+    public string AshaFile(int seed) => $"{Schedule}-{(Proposer == ProposerKind.Random ? "random" : (JointTpe ? "tpejoint" : "tpe1d") + (Ladder ? "ladder" : "") + (GoodFromTop is double g ? $"top{g.ToString(CultureInfo.InvariantCulture)}" : ""))}-{TableLabel}-{Family}-r{FirstRung}-{FullBudget}-e{Eta}-x{RateExponent.ToString(CultureInfo.InvariantCulture)}{(Tag.Length > 0 ? "-" + Tag : "")}{(DrawOffset != 0 ? $"-d{DrawOffset}" : "")}{(Brackets > 1 ? $"-b{Brackets}" : "")}{(ByFolds ? $"-folds{FirstFolds}" : "")}{StopLabel}-seed{seed}.tsv".ToLowerInvariant();
 
     public static BenchArgs Parse(string[] args)
     {
@@ -91,7 +91,13 @@ internal sealed record BenchArgs(
             Get("--train", "") is { Length: > 0 } train ? new CsvPair(train, Get("--test", ""), Get("--id", "id"), Get("--target", "")) : null,
             StoppingOf(Get("--random-stopping", Get("--stopping", "on")), "--random-stopping"),
             Get("--screen", "rounds") is "rounds" or "folds" ? Get("--screen", "rounds") : throw new ArgumentException($"--screen must be rounds or folds, not '{Get("--screen", "")}'"),
-            Int("--first-folds", "1"));
+            Int("--first-folds", "1"),
+            Get("--good", "ladder") switch
+            {
+                "ladder" => null,
+                var share when double.TryParse(share, CultureInfo.InvariantCulture, out double s) && s is > 0 and < 1 => s,
+                var other => throw new ArgumentException($"--good must be ladder or a share of the top rung between 0 and 1, not '{other}'"),
+            });
     }
 
     private static RoundStopping? StoppingOf(string value, string option) => value switch

@@ -13,7 +13,7 @@ internal static class SearchRun
     public static List<TraceRow> Run(TrialData data, BenchArgs options, ScheduleKind kind, ProposerKind proposer, int trials, int seed, double stopBelow, double computeCap)
     {
         // Racing over folds (--screen folds): rungs count folds, every trial trains the full rounds at its drawn rate.
-        bool byFolds = options.ByFolds && kind == ScheduleKind.Asha;
+        bool byFolds = options.ByFolds && kind is ScheduleKind.Asha or ScheduleKind.Hyperband;
         int foldCount = data.Folds.FoldCount;
         var schedule = new ScheduleOptions(kind, proposer, options.FirstRung, options.FullBudget, options.Eta, options.RateExponent,
             kind == ScheduleKind.Asha ? options.Brackets : 1, byFolds ? options.FirstFolds : 0);
@@ -27,7 +27,7 @@ internal static class SearchRun
             Schedule = schedule,
             Budget = new SearchBudget(trials, null),
         };
-        var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition, new TpeOptions(Joint: options.JointTpe, Ladder: options.Ladder)), new NoJournal(), TimeProvider.System);
+        var coordinator = new SearchCoordinator(definition, ScheduleFactory.Create(definition, new TpeOptions(Joint: options.JointTpe, Ladder: options.Ladder, GoodFromTop: options.GoodFromTop)), new NoJournal(), TimeProvider.System);
         // As a worker does: a promotion of a candidate screened on some folds continues the screen's fold models.
         using var screens = new ScreenedFits();
         var executor = new TrialExecutor(LearnerCatalog.BuiltIn.Get(options.Family), options.Stopping, screens);

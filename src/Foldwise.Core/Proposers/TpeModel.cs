@@ -37,12 +37,21 @@ internal sealed class TpeModel
         window.Sort(static (a, b) => a.Score != b.Score ? a.Score.CompareTo(b.Score) : a.TrialId.CompareTo(b.TrialId));
 
     /// <param name="window">The results, already ordered best first.</param>
-    public static TpeModel Fit(TrialReach budget, int results, TpeDimension[] dimensions, List<Observation> window, TpeOptions options)
+    /// <param name="top">
+    /// How many of the window's first results reached the highest budget, when the good density is taken from them
+    /// (<see cref="TpeOptions.GoodFromTop"/>): that share of them, at least two, and never more than γ of the window.
+    /// </param>
+    public static TpeModel Fit(TrialReach budget, int results, TpeDimension[] dimensions, List<Observation> window, TpeOptions options, int? top = null)
     {
         int n = window.Count;
 
         // The quantile is taken over real results only; liars always join the rest (they carry the worst score).
         int goodCount = Math.Clamp((int)Math.Ceiling(options.GoodFraction * n), 1, n - 1);
+        if (top is int t and > 0 && options.GoodFromTop is double share)
+        {
+            goodCount = Math.Min(goodCount, Math.Max((int)Math.Ceiling(share * t), Math.Min(t, 2)));
+        }
+
         var points = window.Select(o => ToModel(dimensions, o.Values)).ToList();
         var good = Estimate(dimensions, points[..goodCount], options.WideKernelWeight, options.Joint);
         var rest = Estimate(dimensions, points[goodCount..], options.WideKernelWeight, options.Joint);

@@ -37,6 +37,11 @@ namespace Foldwise.Core.Proposers;
 /// (Hartmann-6). With one budget the two rules are the same; under Hyperband a candidate that started at a higher
 /// budget ranks with those promoted there (there fewer seeds missed too: 16 against 27 of the same six runs).
 /// </param>
+/// <param name="GoodFromTop">
+/// With the ladder, take the good density from the candidates at the highest budget only: the best share of them given
+/// here (at least two), never more than γ of all; null keeps the ladder's γ of all. Without it, once about γ of the candidates have been promoted to the top every one of
+/// them is "good", whatever its score there, and the model learns only what won the lowest rung.
+/// </param>
 public sealed record TpeOptions(
     double GoodFraction = 0.25,
     int DrawsPerProposal = 24,
@@ -44,7 +49,8 @@ public sealed record TpeOptions(
     int Window = 128,
     double WideKernelWeight = 1.0,
     bool Joint = false,
-    bool Ladder = true)
+    bool Ladder = true,
+    double? GoodFromTop = null)
 {
     public int RandomStartFor(int dimensions) => RandomStart ?? Math.Max(2, dimensions + 1);
 
@@ -68,6 +74,11 @@ public sealed record TpeOptions(
         if (Window < 2 || (RandomStart is int s && Window < s))
         {
             throw new ArgumentOutOfRangeException(nameof(Window), Window, "the window must hold at least the start-up results");
+        }
+
+        if (GoodFromTop is not (null or (> 0 and < 1)))
+        {
+            throw new ArgumentOutOfRangeException(nameof(GoodFromTop), GoodFromTop, "the good share of the top must lie strictly between 0 and 1");
         }
 
         if (!(WideKernelWeight > 0))

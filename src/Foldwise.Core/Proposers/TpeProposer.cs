@@ -48,8 +48,8 @@ public sealed class TpeProposer : IProposer
         int results = _options.Ladder ? history.Results : history.ResultsAt(budget).Count;
         if (!_models.TryGetValue(history, out var model) || model.Budget != budget || model.Results != results)
         {
-            var window = _options.Ladder ? LadderWindow(history) : Window(history.ResultsAt(budget), startup);
-            model = TpeModel.Fit(budget, results, dimensions, window, _options);
+            var (window, top) = _options.Ladder ? LadderWindow(history) : (Window(history.ResultsAt(budget), startup), 0);
+            model = TpeModel.Fit(budget, results, dimensions, window, _options, _options.GoodFromTop is null ? null : top);
             _models.AddOrUpdate(history, model);
         }
 
@@ -78,9 +78,9 @@ public sealed class TpeProposer : IProposer
     /// <summary>
     /// Every candidate once, best first in the order successive halving itself implies: further up the ladder first (a
     /// candidate promoted to a budget beat the ones stopped below it), then by score at that budget. The most recent
-    /// <see cref="TpeOptions.Window"/> candidates.
+    /// <see cref="TpeOptions.Window"/> candidates, and how many of them share the highest reach.
     /// </summary>
-    private List<Observation> LadderWindow(FamilyHistory history)
+    private (List<Observation> Window, int Top) LadderWindow(FamilyHistory history)
     {
         var all = history.Furthest;
         var recent = new List<(TrialReach Reach, Observation Result)>(Math.Min(all.Count, _options.Window));
@@ -93,7 +93,8 @@ public sealed class TpeProposer : IProposer
             a.Reach != b.Reach ? b.Reach.CompareTo(a.Reach)
             : a.Result.Score != b.Result.Score ? a.Result.Score.CompareTo(b.Result.Score)
             : a.Result.TrialId.CompareTo(b.Result.TrialId));
-        return recent.ConvertAll(static f => f.Result);
+        int top = recent.Count == 0 ? 0 : recent.FindIndex(f => f.Reach != recent[0].Reach) is var end and >= 0 ? end : recent.Count;
+        return (recent.ConvertAll(static f => f.Result), top);
     }
 
     /// <summary>The most recent results the model is fitted on (a copy, which the model sorts).</summary>

@@ -11,7 +11,9 @@ namespace Foldwise.Core.Schedules;
 /// own copy of the current bracket (its own n_i trials per rung, promotions by merit within the family); the next
 /// bracket starts when every family's copy is complete. Trials carry the bracket's ordinal (1, 2, … counting across
 /// cycles, so 0 still means "not Hyperband"). While a rung is still running and nothing else can start, the next
-/// plan is null.
+/// plan is null. When the schedule screens on folds (<see cref="ScheduleOptions.ScreenFolds"/>) the brackets count folds
+/// instead, from the screen's folds up to all of them: every trial trains the family's full budget, on the plan's first
+/// rung-many folds.
 /// </summary>
 public sealed class HyperbandSchedule : ISchedule
 {
@@ -19,12 +21,28 @@ public sealed class HyperbandSchedule : ISchedule
     /// <summary>[family]: the family's brackets over its own rungs.</summary>
     private readonly HyperbandPlan[] _plans;
     private readonly Dictionary<int, BracketRun[]> _runs = [];
+
+    /// <summary>[family]: the budget every trial trains when the brackets count folds.</summary>
+    private readonly int[] _fullBudgets;
+
+    /// <summary>0, or the fold count when the brackets count folds.</summary>
+    private readonly int _foldCount;
     private int _current = 1;
 
-    public HyperbandSchedule(ImmutableArray<FamilySearch> families, ScheduleOptions options, IProposer proposer, int seed)
+    /// <param name="folds">The search's fold count: the top rung when the schedule screens on folds.</param>
+    public HyperbandSchedule(ImmutableArray<FamilySearch> families, ScheduleOptions options, IProposer proposer, int seed, int folds = 5)
     {
         ArgumentNullException.ThrowIfNull(options);
-        _plans = [.. families.Select(f => f.BudgetUnder(options)).Select(b => HyperbandPlan.For(b.FirstRung, b.FullBudget, options.Eta))];
+        if (options.ByFolds && options.ScreenFolds >= folds)
+        {
+            throw new ArgumentOutOfRangeException(nameof(options), options.ScreenFolds, $"screening on folds needs fewer than the plan's {folds} folds");
+        }
+
+        _foldCount = options.ByFolds ? folds : 0;
+        _fullBudgets = [.. families.Select(f => f.BudgetUnder(options).FullBudget)];
+        _plans = options.ByFolds
+            ? [.. families.Select(_ => HyperbandPlan.For(options.ScreenFolds, folds, options.Eta))]
+            : [.. families.Select(f => f.BudgetUnder(options)).Select(b => HyperbandPlan.For(b.FirstRung, b.FullBudget, options.Eta))];
         _source = new CandidateSource(families, proposer, seed);
     }
 
@@ -76,9 +94,11 @@ public sealed class HyperbandSchedule : ISchedule
 
             if (chosen >= 0)
             {
+                var (budget, folds) = _foldCount == 0 ? (chosenStep.Budget, 0)
+                    : (_fullBudgets[chosen], chosenStep.Budget < _foldCount ? chosenStep.Budget : 0);
                 return chosenStep.Kind == BracketStepKind.New
-                    ? _source.NewCandidate(chosen, chosenStep.Budget, ordinal)
-                    : new TrialPlan(_source[chosen].Family, chosenStep.Parameters!, chosenStep.Budget, chosenStep.Rung, chosenStep.Parent, Promotion.ProposerName, ordinal);
+                    ? _source.NewCandidate(chosen, budget, ordinal, rung: 0, folds: folds)
+                    : new TrialPlan(_source[chosen].Family, chosenStep.Parameters!, budget, chosenStep.Rung, chosenStep.Parent, Promotion.ProposerName, ordinal, folds);
             }
 
             if (waiting)

@@ -16,7 +16,7 @@ public static class ScheduleFactory
         {
             ScheduleKind.Full => new FullBudgetSchedule(definition.Families, options, proposer, definition.Seed),
             ScheduleKind.Asha => new AshaSchedule(definition.Families, options, proposer, definition.Seed, definition.Folds),
-            ScheduleKind.Hyperband => new HyperbandSchedule(definition.Families, options, proposer, definition.Seed),
+            ScheduleKind.Hyperband => new HyperbandSchedule(definition.Families, options, proposer, definition.Seed, definition.Folds),
             _ => throw new ArgumentOutOfRangeException(nameof(definition), options.Kind, "unknown schedule kind"),
         };
     }

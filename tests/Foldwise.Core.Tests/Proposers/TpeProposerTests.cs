@@ -167,6 +167,35 @@ public sealed class TpeProposerTests
     }
 
     [Fact]
+    public void With_the_good_share_taken_from_the_top_only_the_best_promoted_candidates_make_the_good_density()
+    {
+        // Given 20 candidates at budget 1 and ten promoted to budget 9: the two near x = 0.95 score best there, the
+        // eight between 0.1 and 0.5 poorly
+        var space = new ParameterSpace([ParameterRange.Linear("x", 0, 1)]);
+        var history = new FamilyHistory("f", space);
+        var xs = Enumerable.Range(0, 20).Select(i => (i + 0.5) / 20).ToArray();
+        for (int i = 0; i < xs.Length; i++)
+        {
+            history.Observe(ProposerRuns.Done(i + 1, ParameterSet.Of([new("x", xs[i])]), 1.0));
+        }
+
+        foreach (int parent in new[] { 3, 4, 5, 6, 7, 8, 9, 10, 19, 20 })
+        {
+            double x = xs[parent - 1];
+            history.Observe(ProposerRuns.Done(history.Results + 1, ParameterSet.Of([new("x", x)]), x > 0.9 ? 1 - x : 0.5 + x, budget: 9) with { ParentId = parent });
+        }
+
+        double Mean(TpeOptions options) => Enumerable.Range(0, 40).Average(s => new TpeProposer(options).Propose(history, new Random(s)).Parameters["x"]);
+
+        // Then the ladder's good share (5 of 20 candidates) is the two best promoted and three poor ones, so proposals
+        // spread over both groups, while the best fifth of the ten promoted (two) lie near 0.95 only
+        double ladder = Mean(new TpeOptions(RandomStart: 10));
+        double top = Mean(new TpeOptions(RandomStart: 10, GoodFromTop: 0.2));
+        Assert.InRange(top, 0.75, 1.0);
+        Assert.True(top > ladder + 0.1, $"good from the top {top:F3}, ladder {ladder:F3}");
+    }
+
+    [Fact]
     public void Steers_simultaneous_proposals_away_from_candidates_still_running()
     {
         // Given 30 results of a 1-D bowl at 0.5, and where TPE would propose next on its own
@@ -226,5 +255,7 @@ public sealed class TpeProposerTests
         Assert.Throws<ArgumentOutOfRangeException>(() => new TpeProposer(new TpeOptions(GoodFraction: 1)));
         Assert.Throws<ArgumentOutOfRangeException>(() => new TpeProposer(new TpeOptions(DrawsPerProposal: 0)));
         Assert.Throws<ArgumentOutOfRangeException>(() => new TpeProposer(new TpeOptions(RandomStart: 1)));
+        Assert.Throws<ArgumentOutOfRangeException>(() => new TpeProposer(new TpeOptions(GoodFromTop: 0)));
+        Assert.Throws<ArgumentOutOfRangeException>(() => new TpeProposer(new TpeOptions(GoodFromTop: 1)));
     }
 }

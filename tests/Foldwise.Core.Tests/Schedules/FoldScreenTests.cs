@@ -41,10 +41,41 @@ public sealed class FoldScreenTests
     }
 
     [Fact]
+    public void Hyperband_over_folds_screens_five_on_one_fold_promotes_the_best_then_starts_two_on_every_fold()
+    {
+        // Given Hyperband over folds 1 → 5, η 5: s_max = 1, bracket s=1 starts ⌈2/2·5⌉ = 5 on one fold and keeps 1;
+        // bracket s=0 starts ⌈2/1·1⌉ = 2 on every fold (Li et al., JMLR 2018, Algorithm 1)
+        var schedule = new HyperbandSchedule(FakeCoordinator.Families("only"), new ScheduleOptions(ScheduleKind.Hyperband, ProposerKind.Random, FirstRung: 20, FullBudget: 180, Eta: 5, ScreenFolds: 1), new RandomProposer(), seed: 7, folds: 5);
+        var coordinator = new FakeCoordinator(schedule);
+
+        // When the five screens finish
+        var screened = Enumerable.Range(0, 5).Select(_ => coordinator.CreateNext()!).ToList();
+        Assert.Null(coordinator.Schedule.NextPlan());
+        double[] scores = [0.50, 0.40, 0.10, 0.30, 0.20];
+        for (int i = 0; i < 5; i++)
+        {
+            coordinator.Finish(screened[i].Id, scores[i]);
+        }
+
+        // Then each trained the full 180 rounds on fold 1 only, and the best (trial 3) goes on to every fold
+        Assert.All(screened, t => Assert.Equal((180, 1, 0, false), (t.Budget, t.Folds, t.Rung, t.AllFolds)));
+        var promoted = coordinator.CreateNext()!;
+        Assert.Equal((3, 180, 1, true), (promoted.ParentId!.Value, promoted.Budget, promoted.Rung, promoted.AllFolds));
+        Assert.Null(coordinator.Schedule.NextPlan());
+
+        // And once it finishes the next bracket starts two new candidates on every fold
+        coordinator.Finish(promoted.Id, 0.15);
+        var whole = Enumerable.Range(0, 2).Select(_ => coordinator.CreateNext()!).ToList();
+        Assert.All(whole, t => Assert.Equal((180, true, (int?)null, 2), (t.Budget, t.AllFolds, t.ParentId, t.Bracket)));
+    }
+
+    [Fact]
     public void A_screen_as_wide_as_the_plan_is_refused()
     {
         var error = Assert.Throws<ArgumentOutOfRangeException>(() => Schedule(5, 3, "only"));
         Assert.Contains("fewer than the plan's 5 folds", error.Message, StringComparison.Ordinal);
+        var hyperband = Assert.Throws<ArgumentOutOfRangeException>(() => new HyperbandSchedule(FakeCoordinator.Families("only"), new ScheduleOptions(ScheduleKind.Hyperband, ProposerKind.Random, 20, 180, 3, ScreenFolds: 5), new RandomProposer(), seed: 7, folds: 5));
+        Assert.Contains("fewer than the plan's 5 folds", hyperband.Message, StringComparison.Ordinal);
     }
 
     [Fact]
