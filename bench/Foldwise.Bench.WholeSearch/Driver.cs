@@ -51,6 +51,14 @@ internal static class Driver
         }
 
         using var child = Process.Start(info)!;
+        // Stopping the driver stops its child too: SIGTERM passed on, so a search is never left running alone.
+        using var onTerm = System.Runtime.InteropServices.PosixSignalRegistration.Create(System.Runtime.InteropServices.PosixSignal.SIGTERM, _ =>
+        {
+            if (!child.HasExited)
+            {
+                Process.Start("kill", ["-TERM", child.Id.ToString(System.Globalization.CultureInfo.InvariantCulture)])?.WaitForExit();
+            }
+        });
         string? result = null;
         while (child.StandardOutput.ReadLine() is { } line)
         {

@@ -53,7 +53,14 @@ internal static class OneSearch
 
         var tally = new EventTally();
         var search = new SearchRun(tally) { Learners = setting.Learners };
-        var result = await search.RunNewAsync(definition, outDir, setting.Slots, setting.Threads, SearchStopping.Never);
+        // SIGTERM (the driver stopped, or a hand) abandons the search: running trials end, nothing is blended.
+        using var abandon = new CancellationTokenSource();
+        using var onTerm = System.Runtime.InteropServices.PosixSignalRegistration.Create(System.Runtime.InteropServices.PosixSignal.SIGTERM, context =>
+        {
+            context.Cancel = true;
+            abandon.Cancel();
+        });
+        var result = await search.RunNewAsync(definition, outDir, setting.Slots, setting.Threads, new SearchStopping(CancellationToken.None, abandon.Token));
         Summary.Print(run.Name, result, tally, definition);
         return result.Ending == SearchEnding.Blended ? 0 : 1;
     }

@@ -15,7 +15,7 @@ internal static class Summary
         var stopped = tally.Stopped ?? tally.Elapsed;
         var blended = tally.Blended ?? stopped;
         Console.WriteLine(
-            $"  ended {result.Ending}, stop reason {tally.Progress?.Stopping}; preparation {started.TotalSeconds:F1} s, trials {(stopped - started).TotalSeconds:F1} s " +
+            $"  ended {result.Ending.ToString().ToLowerInvariant()}, stopped: {Foldwise.Cli.Output.ProgressView.Describe(tally.Progress?.Stopping)}; preparation {started.TotalSeconds:F1} s, trials {(stopped - started).TotalSeconds:F1} s " +
             $"(budget {definition.Budget.Hours * 3600:F0} s, spent {tally.Progress?.SpentSeconds:F1} s), blend {(blended - stopped).TotalSeconds:F1} s, " +
             $"keeping {((tally.Kept ?? blended) - blended).TotalSeconds:F1} s; whole run {tally.Elapsed.TotalSeconds:F1} s, CPU {Process.GetCurrentProcess().TotalProcessorTime.TotalSeconds:F0} s");
         var done = tally.Trials.Where(t => t.State == TrialState.Done).ToList();
@@ -39,7 +39,7 @@ internal static class Summary
                 $"  best single trial {blend.BestSingleScore:F5} (trial {best.Id}, {best.Family}, budget {best.Budget}); best done at any rung {done.Min(t => t.Score):F5}"));
             Console.WriteLine(string.Create(
                 CultureInfo.InvariantCulture,
-                $"  blend {blend.Mode}: nested estimate {blend.NestedScore:F5}, in-sample {blend.InSampleScore:F5}; members {string.Join(", ", members)}"));
+                $"  blend {DefinitionWords.Of(blend.Mode)}: nested estimate {blend.NestedScore:F5}, in-sample {blend.InSampleScore:F5}; members {string.Join(", ", members)}"));
         }
 
         Console.WriteLine($"  {tally.Keeping}");

@@ -201,7 +201,8 @@ public sealed class ProgressView(IAnsiConsole console) : IProgress<SearchEvent>
     internal static string FormatBest(SearchProgress p) =>
         p.BestByFamily.Count == 0 ? "–" : string.Join(", ", p.BestByFamily.OrderBy(kv => kv.Value).Select(kv => $"{kv.Value:F5} ({kv.Key})"));
 
-    private static string Describe(StopReason? reason) => reason switch
+    /// <summary>Why a search stopped, in the words the progress view prints.</summary>
+    internal static string Describe(StopReason? reason) => reason switch
     {
         StopReason.TrialBudget => "trial budget reached",
         StopReason.HoursBudget => "hours budget reached",
