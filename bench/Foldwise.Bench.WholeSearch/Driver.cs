@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using System.Globalization;
+using System.Runtime.InteropServices;
 
 namespace Foldwise.Bench.WholeSearch;
 
@@ -52,11 +53,11 @@ internal static class Driver
 
         using var child = Process.Start(info)!;
         // Stopping the driver stops its child too: SIGTERM passed on, so a search is never left running alone.
-        using var onTerm = System.Runtime.InteropServices.PosixSignalRegistration.Create(System.Runtime.InteropServices.PosixSignal.SIGTERM, _ =>
+        using var onTerm = PosixSignalRegistration.Create(PosixSignal.SIGTERM, _ =>
         {
             if (!child.HasExited)
             {
-                Process.Start("kill", ["-TERM", child.Id.ToString(System.Globalization.CultureInfo.InvariantCulture)])?.WaitForExit();
+                Process.Start("kill", ["-TERM", child.Id.ToString(CultureInfo.InvariantCulture)])?.WaitForExit();
             }
         });
         string? result = null;

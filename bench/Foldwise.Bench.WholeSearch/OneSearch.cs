@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using System.Globalization;
+using System.Runtime.InteropServices;
 using Foldwise.Cli.Commands;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Demo;
@@ -55,7 +56,7 @@ internal static class OneSearch
         var search = new SearchRun(tally) { Learners = setting.Learners };
         // SIGTERM (the driver stopped, or a hand) abandons the search: running trials end, nothing is blended.
         using var abandon = new CancellationTokenSource();
-        using var onTerm = System.Runtime.InteropServices.PosixSignalRegistration.Create(System.Runtime.InteropServices.PosixSignal.SIGTERM, context =>
+        using var onTerm = PosixSignalRegistration.Create(PosixSignal.SIGTERM, context =>
         {
             context.Cancel = true;
             abandon.Cancel();

@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using System.Globalization;
+using Foldwise.Cli.Output;
 using Foldwise.Core.Definition;
 using Foldwise.Core.Search;
 using Foldwise.Tuning;
@@ -15,7 +16,7 @@ internal static class Summary
         var stopped = tally.Stopped ?? tally.Elapsed;
         var blended = tally.Blended ?? stopped;
         Console.WriteLine(
-            $"  ended {result.Ending.ToString().ToLowerInvariant()}, stopped: {Foldwise.Cli.Output.ProgressView.Describe(tally.Progress?.Stopping)}; preparation {started.TotalSeconds:F1} s, trials {(stopped - started).TotalSeconds:F1} s " +
+            $"  ended {result.Ending.ToString().ToLowerInvariant()}, stopped: {ProgressView.Describe(tally.Progress?.Stopping)}; preparation {started.TotalSeconds:F1} s, trials {(stopped - started).TotalSeconds:F1} s " +
             $"(budget {definition.Budget.Hours * 3600:F0} s, spent {tally.Progress?.SpentSeconds:F1} s), blend {(blended - stopped).TotalSeconds:F1} s, " +
             $"keeping {((tally.Kept ?? blended) - blended).TotalSeconds:F1} s; whole run {tally.Elapsed.TotalSeconds:F1} s, CPU {Process.GetCurrentProcess().TotalProcessorTime.TotalSeconds:F0} s");
         var done = tally.Trials.Where(t => t.State == TrialState.Done).ToList();

@@ -38,18 +38,18 @@ internal sealed class TpeModel
 
     /// <param name="window">The results, already ordered best first.</param>
     /// <param name="top">
-    /// How many of the window's first results reached the highest budget, when the good density is taken from them
-    /// (<see cref="TpeOptions.GoodFromTop"/>): that share of them, at least two, and never more than γ of the window.
+    /// How many of the window's first results reached the highest budget. With <see cref="TpeOptions.GoodFromTop"/> the
+    /// good density is that share of them, at least two, and never more than γ of the window.
     /// </param>
-    public static TpeModel Fit(TrialReach budget, int results, TpeDimension[] dimensions, List<Observation> window, TpeOptions options, int? top = null)
+    public static TpeModel Fit(TrialReach budget, int results, TpeDimension[] dimensions, List<Observation> window, TpeOptions options, int top = 0)
     {
         int n = window.Count;
 
         // The quantile is taken over real results only; liars always join the rest (they carry the worst score).
         int goodCount = Math.Clamp((int)Math.Ceiling(options.GoodFraction * n), 1, n - 1);
-        if (top is int t and > 0 && options.GoodFromTop is double share)
+        if (top > 0 && options.GoodFromTop is double share)
         {
-            goodCount = Math.Min(goodCount, Math.Max((int)Math.Ceiling(share * t), Math.Min(t, 2)));
+            goodCount = Math.Min(goodCount, Math.Max((int)Math.Ceiling(share * top), Math.Min(top, 2)));
         }
 
         var points = window.Select(o => ToModel(dimensions, o.Values)).ToList();

@@ -49,7 +49,7 @@ public sealed class TpeProposer : IProposer
         if (!_models.TryGetValue(history, out var model) || model.Budget != budget || model.Results != results)
         {
             var (window, top) = _options.Ladder ? LadderWindow(history) : (Window(history.ResultsAt(budget), startup), 0);
-            model = TpeModel.Fit(budget, results, dimensions, window, _options, _options.GoodFromTop is null ? null : top);
+            model = TpeModel.Fit(budget, results, dimensions, window, _options, top);
             _models.AddOrUpdate(history, model);
         }
 

@@ -42,10 +42,7 @@ public sealed class AshaSchedule : ISchedule
     public AshaSchedule(ImmutableArray<FamilySearch> families, ScheduleOptions options, IProposer proposer, int seed, int folds = 5)
     {
         ArgumentNullException.ThrowIfNull(options);
-        if (options.ByFolds && options.ScreenFolds >= folds)
-        {
-            throw new ArgumentOutOfRangeException(nameof(options), options.ScreenFolds, $"screening on folds needs fewer than the plan's {folds} folds");
-        }
+        ScheduleChecks.ValidateScreen(options, folds);
 
         _fullBudgets = [.. families.Select(f => f.BudgetUnder(options).FullBudget)];
         _foldCount = options.ByFolds ? folds : 0;
@@ -115,10 +112,10 @@ public sealed class AshaSchedule : ISchedule
         return _source.NewCandidate(family, BudgetAt(family, start), BracketLabel(start), rung: start, folds: FoldsAt(family, start));
     }
 
-    private int BudgetAt(int family, int rung) => _foldCount > 0 ? _fullBudgets[family] : _budgets[family][rung];
+    private int BudgetAt(int family, int rung) => RungBudgets.Training(_budgets[family][rung], _fullBudgets[family], _foldCount).Budget;
 
     /// <summary>0 (all folds) unless screening on folds below the top rung.</summary>
-    private int FoldsAt(int family, int rung) => _foldCount > 0 && _budgets[family][rung] < _foldCount ? _budgets[family][rung] : 0;
+    private int FoldsAt(int family, int rung) => RungBudgets.Training(_budgets[family][rung], _fullBudgets[family], _foldCount).Folds;
 
     private int BracketLabel(int bracket) => _bracketCount == 1 ? 0 : bracket + 1;
 }

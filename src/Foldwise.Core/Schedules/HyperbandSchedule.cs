@@ -33,10 +33,7 @@ public sealed class HyperbandSchedule : ISchedule
     public HyperbandSchedule(ImmutableArray<FamilySearch> families, ScheduleOptions options, IProposer proposer, int seed, int folds = 5)
     {
         ArgumentNullException.ThrowIfNull(options);
-        if (options.ByFolds && options.ScreenFolds >= folds)
-        {
-            throw new ArgumentOutOfRangeException(nameof(options), options.ScreenFolds, $"screening on folds needs fewer than the plan's {folds} folds");
-        }
+        ScheduleChecks.ValidateScreen(options, folds);
 
         _foldCount = options.ByFolds ? folds : 0;
         _fullBudgets = [.. families.Select(f => f.BudgetUnder(options).FullBudget)];
@@ -94,8 +91,7 @@ public sealed class HyperbandSchedule : ISchedule
 
             if (chosen >= 0)
             {
-                var (budget, folds) = _foldCount == 0 ? (chosenStep.Budget, 0)
-                    : (_fullBudgets[chosen], chosenStep.Budget < _foldCount ? chosenStep.Budget : 0);
+                var (budget, folds) = RungBudgets.Training(chosenStep.Budget, _fullBudgets[chosen], _foldCount);
                 return chosenStep.Kind == BracketStepKind.New
                     ? _source.NewCandidate(chosen, budget, ordinal, rung: 0, folds: folds)
                     : new TrialPlan(_source[chosen].Family, chosenStep.Parameters!, budget, chosenStep.Rung, chosenStep.Parent, Promotion.ProposerName, ordinal, folds);

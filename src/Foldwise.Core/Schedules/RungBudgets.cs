@@ -18,4 +18,11 @@ public static class RungBudgets
         budgets.Add(fullBudget);
         return budgets.ToImmutable();
     }
+
+    /// <summary>
+    /// What a trial at a rung trains: the rung's budget on every fold (folds 0), or, when rungs count folds
+    /// (<paramref name="foldCount"/> above 0), the family's full budget on the rung's first folds (0 at the top: all).
+    /// </summary>
+    public static (int Budget, int Folds) Training(int rung, int fullBudget, int foldCount) =>
+        foldCount == 0 ? (rung, 0) : (fullBudget, rung < foldCount ? rung : 0);
 }

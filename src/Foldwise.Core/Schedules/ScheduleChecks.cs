@@ -24,4 +24,13 @@ internal static class ScheduleChecks
             throw new ArgumentOutOfRangeException(nameof(eta), eta, "eta must be at least 2");
         }
     }
+
+    /// <summary>A screen on folds must leave folds to promote to.</summary>
+    public static void ValidateScreen(ScheduleOptions options, int folds)
+    {
+        if (options.ByFolds && options.ScreenFolds >= folds)
+        {
+            throw new ArgumentOutOfRangeException(nameof(options), options.ScreenFolds, $"screening on folds needs fewer than the plan's {folds} folds");
+        }
+    }
 }
